@@ -1,0 +1,123 @@
+/**
+ * The overall Grms of a random-vibration PSD profile given as breakpoints joined by straight lines on
+ * log-log axes (the way test specifications such as GSFC-STD-7000A, Table 2.4-3 state them), or as a
+ * start level with slopes in dB/octave.
+ */
+import { z } from 'zod';
+import { InputError } from '../errors';
+
+/** Most breakpoints a profile may have. */
+export const PSD_PROFILE_MAX_BREAKPOINTS = 100;
+/** Frequency bounds for a breakpoint, Hz. */
+export const PSD_PROFILE_MIN_FREQUENCY_HZ = 0.01;
+export const PSD_PROFILE_MAX_FREQUENCY_HZ = 100_000;
+
+const frequencyHz = z.number().finite().min(PSD_PROFILE_MIN_FREQUENCY_HZ).max(PSD_PROFILE_MAX_FREQUENCY_HZ);
+
+/** One profile point: either a level in g²/Hz, or a slope in dB/octave from the previous point. */
+export const PsdProfilePointSchema = z.union([
+  z.object({
+    /** Breakpoint frequency, Hz. */
+    frequencyHz,
+    /** Level at the breakpoint, g²/Hz. */
+    psdG2PerHz: z.number().finite().positive(),
+  }).strict(),
+  z.object({
+    frequencyHz,
+    /** Slope from the previous point to this one, dB/octave (+6 rising, −6 falling). */
+    slopeDbPerOctave: z.number().finite().min(-100).max(100),
+  }).strict(),
+]);
+
+/** A PSD profile: breakpoints in increasing frequency; the first must give a level. */
+export const PsdProfileInputSchema = z.object({
+  points: z
+    .array(PsdProfilePointSchema)
+    .min(2, 'A profile needs at least two breakpoints.')
+    .max(PSD_PROFILE_MAX_BREAKPOINTS, `A profile may have at most ${PSD_PROFILE_MAX_BREAKPOINTS} breakpoints.`),
+}).strict();
+export type PsdProfileInput = z.infer<typeof PsdProfileInputSchema>;
+
+export interface PsdProfileSegment {
+  lowHz: number;
+  highHz: number;
+  lowPsd: number;
+  highPsd: number;
+  /** Log-log exponent n: PSD ∝ fⁿ on the segment. */
+  exponent: number;
+  slopeDbPerOctave: number;
+  /** Mean-square acceleration in the segment, g². */
+  areaG2: number;
+}
+
+export interface PsdProfileResult {
+  /** Breakpoints with every level resolved, g²/Hz. */
+  breakpoints: { frequencyHz: number; psdG2PerHz: number }[];
+  segments: PsdProfileSegment[];
+  /** Overall root-mean-square acceleration √(Σ areas), g. */
+  grms: number;
+}
+
+const DB_PER_OCTAVE_PER_EXPONENT = 10 * Math.log10(2);
+
+/**
+ * Area under one log-log segment from (f1, P1) to (f2, P2), g²: (P2·f2 − P1·f1)/(n + 1) with
+ * n = ln(P2/P1)/ln(f2/f1), or P1·f1·ln(f2/f1) when n = −1 (the closed-form integral of P1·(f/f1)ⁿ from
+ * f1 to f2). Zero for f2 ≤ f1.
+ */
+export function psdSegmentArea(f1: number, p1: number, f2: number, p2: number): number {
+  if (!(f2 > f1)) return 0;
+  const n = Math.log(p2 / p1) / Math.log(f2 / f1);
+  if (Math.abs(n + 1) < 1e-9) return p1 * f1 * Math.log(f2 / f1);
+  return (p2 * f2 - p1 * f1) / (n + 1);
+}
+
+/** dB/octave → log-log exponent: n = m/(10·log10 2), so +6 dB/oct ≈ 1.993. */
+export function psdSlopeExponent(slopeDbPerOctave: number): number {
+  return slopeDbPerOctave / DB_PER_OCTAVE_PER_EXPONENT;
+}
+
+/**
+ * Grms (g) of a PSD profile, integrating each segment exactly as a straight line on log-log axes; a point
+ * given as a slope gets its level P2 = P1·(f2/f1)ⁿ. Throws InputError when frequencies do not increase
+ * or the first point has no level.
+ */
+export function psdProfileGrms(input: PsdProfileInput): PsdProfileResult {
+  const breakpoints: PsdProfileResult['breakpoints'] = [];
+  input.points.forEach((point, i) => {
+    const prev = breakpoints[i - 1];
+    if (prev && !(point.frequencyHz > prev.frequencyHz)) {
+      throw new InputError(
+        `Breakpoint ${i + 1} is at ${point.frequencyHz} Hz, not above the previous ${prev.frequencyHz} Hz; list breakpoints in increasing frequency.`,
+        { [`points.${i}.frequencyHz`]: ['must be above the previous breakpoint'] },
+      );
+    }
+    if ('psdG2PerHz' in point) {
+      breakpoints.push({ frequencyHz: point.frequencyHz, psdG2PerHz: point.psdG2PerHz });
+    } else if (!prev) {
+      throw new InputError('The first breakpoint needs a level in g²/Hz; a slope needs a point to start from.', {
+        'points.0': ['give psdG2PerHz'],
+      });
+    } else {
+      const n = psdSlopeExponent(point.slopeDbPerOctave);
+      breakpoints.push({ frequencyHz: point.frequencyHz, psdG2PerHz: prev.psdG2PerHz * (point.frequencyHz / prev.frequencyHz) ** n });
+    }
+  });
+  const segments: PsdProfileSegment[] = [];
+  for (let i = 1; i < breakpoints.length; i++) {
+    const a = breakpoints[i - 1]!;
+    const b = breakpoints[i]!;
+    const exponent = Math.log(b.psdG2PerHz / a.psdG2PerHz) / Math.log(b.frequencyHz / a.frequencyHz);
+    segments.push({
+      lowHz: a.frequencyHz,
+      highHz: b.frequencyHz,
+      lowPsd: a.psdG2PerHz,
+      highPsd: b.psdG2PerHz,
+      exponent,
+      slopeDbPerOctave: exponent * DB_PER_OCTAVE_PER_EXPONENT,
+      areaG2: psdSegmentArea(a.frequencyHz, a.psdG2PerHz, b.frequencyHz, b.psdG2PerHz),
+    });
+  }
+  const total = segments.reduce((s, seg) => s + seg.areaG2, 0);
+  return { breakpoints, segments, grms: Math.sqrt(total) };
+}
