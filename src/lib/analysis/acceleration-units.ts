@@ -13,7 +13,7 @@ export type AccelerationUnitSource = 'stated' | 'header' | 'gravity' | 'assumed'
 export function accelerationUnitFromHeader(cell: string): AccelerationUnit | null {
   const c = cell.toLowerCase().replace(/\s+/g, '');
   if (/m\/s(\^?2|²)|m\/s\/s|ms\^?-?2|m·s-2|mps2|ms2/.test(c)) return 'm/s2';
-  if (/(^|[^a-z])g($|[^a-z])|\(g\)|\[g\]|_g$|ing$/.test(c)) return 'g';
+  if (/(^|[^a-z])g($|[^a-z])|\(g\)|\[g\]|_g$/.test(c)) return 'g';
   return null;
 }
 

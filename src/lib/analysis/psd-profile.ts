@@ -14,20 +14,21 @@ export const PSD_PROFILE_MAX_FREQUENCY_HZ = 100_000;
 
 const frequencyHz = z.number().finite().min(PSD_PROFILE_MIN_FREQUENCY_HZ).max(PSD_PROFILE_MAX_FREQUENCY_HZ);
 
-/** One profile point: either a level in g²/Hz, or a slope in dB/octave from the previous point. */
-export const PsdProfilePointSchema = z.union([
-  z.object({
+/**
+ * One profile point. A level, a slope from the previous point, or both; a missing level is derived from a
+ * neighbour's level through the slope between them, forwards or backwards. Where both levels of a segment
+ * are given, they win over a stated slope.
+ */
+export const PsdProfilePointSchema = z
+  .object({
     /** Breakpoint frequency, Hz. */
     frequencyHz,
     /** Level at the breakpoint, g²/Hz. */
-    psdG2PerHz: z.number().finite().positive(),
-  }).strict(),
-  z.object({
-    frequencyHz,
+    psdG2PerHz: z.number().finite().positive().optional(),
     /** Slope from the previous point to this one, dB/octave (+6 rising, −6 falling). */
-    slopeDbPerOctave: z.number().finite().min(-100).max(100),
-  }).strict(),
-]);
+    slopeDbPerOctave: z.number().finite().min(-100).max(100).optional(),
+  })
+  .strict();
 
 /** A PSD profile: breakpoints in increasing frequency; the first must give a level. */
 export const PsdProfileInputSchema = z.object({
@@ -77,32 +78,53 @@ export function psdSlopeExponent(slopeDbPerOctave: number): number {
   return slopeDbPerOctave / DB_PER_OCTAVE_PER_EXPONENT;
 }
 
+function resolveLevels(points: PsdProfileInput['points']): number[] {
+  const levels = points.map((p) => p.psdG2PerHz ?? NaN);
+  for (let changed = true; changed; ) {
+    changed = false;
+    for (let i = 1; i < points.length; i++) {
+      const slope = points[i]!.slopeDbPerOctave;
+      if (slope === undefined) continue;
+      const ratio = (points[i]!.frequencyHz / points[i - 1]!.frequencyHz) ** psdSlopeExponent(slope);
+      if (Number.isNaN(levels[i]!) && !Number.isNaN(levels[i - 1]!)) levels[i] = levels[i - 1]! * ratio;
+      else if (Number.isNaN(levels[i - 1]!) && !Number.isNaN(levels[i]!)) levels[i - 1] = levels[i]! / ratio;
+      else continue;
+      changed = true;
+    }
+  }
+  const missing = levels.findIndex((v) => Number.isNaN(v));
+  if (missing >= 0) {
+    throw new InputError(
+      `Breakpoint ${missing + 1} (${points[missing]!.frequencyHz} Hz) has no level, and no slope links it to a point that has one; give its g²/Hz or a slope.`,
+      { [`points.${missing}`]: ['needs psdG2PerHz or a slope to a known level'] },
+    );
+  }
+  return levels;
+}
+
 /**
- * Grms (g) of a PSD profile, integrating each segment exactly as a straight line on log-log axes; a point
- * given as a slope gets its level P2 = P1·(f2/f1)ⁿ. Throws InputError when frequencies do not increase
- * or the first point has no level.
+ * Grms (g) of a PSD profile, integrating each segment exactly as a straight line on log-log axes. Throws
+ * InputError when frequencies do not increase, the first point states a slope, or a level cannot be
+ * derived.
  */
 export function psdProfileGrms(input: PsdProfileInput): PsdProfileResult {
-  const breakpoints: PsdProfileResult['breakpoints'] = [];
-  input.points.forEach((point, i) => {
-    const prev = breakpoints[i - 1];
+  const { points } = input;
+  points.forEach((point, i) => {
+    const prev = points[i - 1];
     if (prev && !(point.frequencyHz > prev.frequencyHz)) {
       throw new InputError(
         `Breakpoint ${i + 1} is at ${point.frequencyHz} Hz, not above the previous ${prev.frequencyHz} Hz; list breakpoints in increasing frequency.`,
         { [`points.${i}.frequencyHz`]: ['must be above the previous breakpoint'] },
       );
     }
-    if ('psdG2PerHz' in point) {
-      breakpoints.push({ frequencyHz: point.frequencyHz, psdG2PerHz: point.psdG2PerHz });
-    } else if (!prev) {
-      throw new InputError('The first breakpoint needs a level in g²/Hz; a slope needs a point to start from.', {
-        'points.0': ['give psdG2PerHz'],
-      });
-    } else {
-      const n = psdSlopeExponent(point.slopeDbPerOctave);
-      breakpoints.push({ frequencyHz: point.frequencyHz, psdG2PerHz: prev.psdG2PerHz * (point.frequencyHz / prev.frequencyHz) ** n });
-    }
   });
+  if (points[0]?.slopeDbPerOctave !== undefined) {
+    throw new InputError('The first breakpoint has no previous point for its slope to start from; give it a level, or nothing.', {
+      'points.0.slopeDbPerOctave': ['not allowed on the first point'],
+    });
+  }
+  const levels = resolveLevels(points);
+  const breakpoints = points.map((p, i) => ({ frequencyHz: p.frequencyHz, psdG2PerHz: levels[i]! }));
   const segments: PsdProfileSegment[] = [];
   for (let i = 1; i < breakpoints.length; i++) {
     const a = breakpoints[i - 1]!;

@@ -91,7 +91,7 @@ export function welchPsd(signal: ArrayLike<number>, sampleRateHz: number, segmen
     for (let k = 0; k < bins; k++) {
       const re = out[2 * k]!;
       const im = out[2 * k + 1]!;
-      acc[k] += re * re + im * im;
+      acc[k]! += re * re + im * im;
     }
   }
   // Periodic Hann: Σw² = 3N/8 exactly. One-sided scaling doubles every bin but DC and Nyquist.
