@@ -39,12 +39,17 @@ export function pieceOrientationRad(outlineMm: readonly Vec2Mm[]): number {
     const edge = Math.atan2(b[1] - a[1], b[0] - a[0]);
     const c = Math.cos(-edge);
     const s = Math.sin(-edge);
-    let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
+    let minX = Infinity,
+      maxX = -Infinity,
+      minY = Infinity,
+      maxY = -Infinity;
     for (const [x, y] of hull) {
       const rx = c * x - s * y;
       const ry = s * x + c * y;
-      minX = Math.min(minX, rx); maxX = Math.max(maxX, rx);
-      minY = Math.min(minY, ry); maxY = Math.max(maxY, ry);
+      minX = Math.min(minX, rx);
+      maxX = Math.max(maxX, rx);
+      minY = Math.min(minY, ry);
+      maxY = Math.max(maxY, ry);
     }
     const area = (maxX - minX) * (maxY - minY);
     // Prefer the axis-aligned pose when it is as good, so rectangles are not turned by a rounding error.

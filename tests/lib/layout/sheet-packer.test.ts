@@ -1,0 +1,114 @@
+import polygonClipping from 'polygon-clipping';
+import type { Ring } from 'polygon-clipping';
+import { describe, expect, test } from 'vitest';
+import { InputError } from '../../../src/lib/errors';
+import { placementOutline } from '../../../src/lib/layout/placement';
+import { MAX_SHEETS, sheetPack } from '../../../src/lib/layout/sheet-packer';
+import { SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
+import { sheetFurnitureLayout } from '../../../src/lib/layout/sheet-furniture';
+import type { LaidOutSheet, RectMm } from '../../../src/lib/layout/types';
+import type { Piece } from '../../../src/lib/geometry/types';
+import { cubeNetPiece, rectPiece, sectorPiece, smallKitPieces } from '../../fixtures/pieces/pieces';
+import { multiPolygonArea } from './polygon-area';
+
+const rectRing = (r: RectMm): Ring => [
+  [r.xMm, r.yMm],
+  [r.xMm + r.widthMm, r.yMm],
+  [r.xMm + r.widthMm, r.yMm + r.heightMm],
+  [r.xMm, r.yMm + r.heightMm],
+];
+
+function placedRings(sheet: LaidOutSheet, pieces: Piece[]): Ring[] {
+  return sheet.placements
+    .filter((p) => !p.tile)
+    .map((p) =>
+      placementOutline(
+        p,
+        pieces.find((q) => q.id === p.pieceId)!,
+      ).map(([x, y]) => [x, y] as [number, number]),
+    );
+}
+
+// Overlap and containment are checked by polygon-clipping (Martinez-Rueda sweep), a reference library, not by
+// the packer's own box arithmetic. Tolerance 1e-6 mm² for floating-point slivers along shared edges.
+function expectValidSheets(sheets: LaidOutSheet[], pieces: Piece[], units: 'metric' | 'us') {
+  sheets.forEach((sheet, index) => {
+    const rings = placedRings(sheet, pieces);
+    const furniture = sheetFurnitureLayout(sheet.printableMm, units, index === 0);
+    const printable = rectRing(sheet.printableMm);
+    for (let i = 0; i < rings.length; i++) {
+      const outside = polygonClipping.difference([rings[i]!], [printable]);
+      expect(multiPolygonArea(outside)).toBeLessThan(1e-6);
+      for (const block of [furniture.checkSquare, furniture.footer, furniture.legend, furniture.qr]) {
+        if (block)
+          expect(multiPolygonArea(polygonClipping.intersection([rings[i]!], [rectRing(block)]))).toBeLessThan(1e-6);
+      }
+      for (let j = i + 1; j < rings.length; j++) {
+        expect(multiPolygonArea(polygonClipping.intersection([rings[i]!], [rings[j]!]))).toBeLessThan(1e-6);
+      }
+    }
+  });
+}
+
+describe('sheetPack', () => {
+  test('places every piece of every copy once, without overlap, inside the margin and clear of furniture', () => {
+    const pieces = smallKitPieces();
+    for (const [sizeId, units] of [
+      ['letter', 'us'],
+      ['a4', 'metric'],
+      ['a3', 'metric'],
+      ['tabloid', 'us'],
+      ['legal', 'us'],
+    ] as const) {
+      const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES[sizeId], units, copies: 3 });
+      const counts = new Map<string, number>();
+      for (const s of sheets) for (const p of s.placements) counts.set(p.pieceId, (counts.get(p.pieceId) ?? 0) + 1);
+      for (const p of pieces) expect(counts.get(p.id)).toBe(3);
+      expect(sheets.map((s) => s.number)).toEqual(sheets.map((_, i) => i + 1));
+      expectValidSheets(sheets, pieces, units);
+    }
+  });
+
+  test('keeps each placed piece congruent to its flat outline (same area)', () => {
+    const pieces = smallKitPieces();
+    const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES.a4, units: 'metric', copies: 1 });
+    for (const sheet of sheets) {
+      const rings = placedRings(sheet, pieces);
+      sheet.placements.forEach((p, i) => {
+        const flat = pieces.find((q) => q.id === p.pieceId)!.outlineMm.map(([x, y]) => [x, y] as [number, number]);
+        expect(multiPolygonArea([[rings[i]!]])).toBeCloseTo(multiPolygonArea([[flat]]), 6);
+      });
+    }
+  });
+
+  test('uses no more sheets than twice the area lower bound for many small pieces', () => {
+    const pieces = Array.from({ length: 60 }, (_, i) => rectPiece(`p${i}`, 20 + (i % 7) * 9, 15 + (i % 5) * 11));
+    const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES.a4, units: 'metric', copies: 1 });
+    const area = pieces.reduce((a, p) => a + p.faceAreaMm2, 0);
+    expect(sheets.length).toBeLessThanOrEqual(Math.ceil((2 * area) / (190 * 277)));
+    expectValidSheets(sheets, pieces, 'metric');
+  });
+
+  test('lays out sheet stock panels for a life-size build', () => {
+    const pieces = [cubeNetPiece('wall', 400), sectorPiece('dish', 600, 2.5), rectPiece('panel', 1100, 700)];
+    const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES['panel-1220x2440'], units: 'metric', copies: 2 });
+    expectValidSheets(sheets, pieces, 'metric');
+    expect(sheets.every((s) => s.widthMm === 1220 && s.heightMm === 2440)).toBe(true);
+  });
+
+  test('refuses more than the sheet limit and says how many copies would fit', () => {
+    const pieces = [rectPiece('big', 180, 200)];
+    expect(() => sheetPack(pieces, { sheetSize: SHEET_SIZES.letter, units: 'us', copies: MAX_SHEETS + 1 })).toThrow(
+      InputError,
+    );
+    expect(() => sheetPack(pieces, { sheetSize: SHEET_SIZES.letter, units: 'us', copies: MAX_SHEETS + 1 })).toThrow(
+      /at most \d+ copies/,
+    );
+  });
+
+  test('gives one empty first sheet when there are no pieces', () => {
+    const sheets = sheetPack([], { sheetSize: SHEET_SIZES.a4, units: 'metric', copies: 1 });
+    expect(sheets).toHaveLength(1);
+    expect(sheets[0]!.placements).toEqual([]);
+  });
+});
