@@ -19,6 +19,8 @@ export interface CsvTableOptions {
   maxRows: number;
   /** The table needs at least this many columns. */
   minColumns: number;
+  /** Read up to this many columns (as many as the first row has); default minColumns. */
+  maxColumns?: number;
   /** Column names used in messages when there is no header, e.g. ['time', 'x', 'y', 'z']. */
   expectedColumns: readonly string[];
   /** What the table is, for messages ("accelerometer CSV"). */
@@ -38,13 +40,15 @@ function cellProblem(cell: string): string {
 }
 
 /**
- * Parses CSV text into numeric columns (first `minColumns` columns are read, extra columns ignored);
- * a first row with any non-numeric cell is taken as the header. Throws InputError for text in number
- * cells, missing cells or an empty table, and PayloadTooLargeError above `maxRows` data rows.
+ * Parses CSV text into numeric columns (as many as the first row has, between minColumns and
+ * maxColumns; extra columns ignored); a first row with any non-numeric cell is taken as the header.
+ * Throws InputError for text in number cells, missing cells or an empty table, and PayloadTooLargeError above `maxRows` data rows.
  */
 export function csvTableParse(text: string, options: CsvTableOptions): CsvTable {
   const { maxRows, minColumns, expectedColumns, what } = options;
-  const columns: number[][] = Array.from({ length: minColumns }, () => []);
+  const maxColumns = Math.max(minColumns, options.maxColumns ?? minColumns);
+  let width = minColumns;
+  let columns: number[][] = [];
   let header: string[] | null = null;
   let fileRow = 0;
   let failure: Error | null = null;
@@ -56,7 +60,11 @@ export function csvTableParse(text: string, options: CsvTableOptions): CsvTable 
     step(result, parser) {
       fileRow++;
       const row = result.data;
-      if (fileRow === 1 && !row.slice(0, minColumns).every(isNumberCell)) {
+      if (fileRow === 1) {
+        width = Math.min(Math.max(row.length, minColumns), maxColumns);
+        columns = Array.from({ length: width }, () => []);
+      }
+      if (fileRow === 1 && !row.slice(0, width).every(isNumberCell)) {
         header = row.map((c) => c.trim());
         if (header.length < minColumns) {
           failure = new InputError(
@@ -66,7 +74,7 @@ export function csvTableParse(text: string, options: CsvTableOptions): CsvTable 
         }
         return;
       }
-      const dataRows = columns[0]!.length;
+      const dataRows = columns[0]?.length ?? 0;
       if (dataRows >= maxRows) {
         failure = new PayloadTooLargeError(
           `The ${what} has more than ${maxRows.toLocaleString('en-US')} data rows, the most this tool reads; send a shorter record or a lower sample rate.`,
@@ -74,14 +82,14 @@ export function csvTableParse(text: string, options: CsvTableOptions): CsvTable 
         parser.abort();
         return;
       }
-      if (row.length < minColumns) {
+      if (row.length < width) {
         failure = new InputError(
-          `Row ${fileRow} of the ${what} has ${row.length} column(s); each row needs ${minColumns}: ${expectedColumns.join(', ')}.`,
+          `Row ${fileRow} of the ${what} has ${row.length} column(s); each row needs ${width}${width === minColumns ? `: ${expectedColumns.join(', ')}` : ''}.`,
         );
         parser.abort();
         return;
       }
-      for (let c = 0; c < minColumns; c++) {
+      for (let c = 0; c < width; c++) {
         const cell = row[c]!;
         const value = Number(cell);
         if (cell.trim() === '' || !Number.isFinite(value)) {
@@ -96,7 +104,7 @@ export function csvTableParse(text: string, options: CsvTableOptions): CsvTable 
     },
   });
   if (failure) throw failure;
-  const rowCount = columns[0]!.length;
+  const rowCount = columns[0]?.length ?? 0;
   if (rowCount === 0) {
     throw new InputError(`The ${what} has no data rows; expected columns ${expectedColumns.join(', ')} with one reading a row.`);
   }

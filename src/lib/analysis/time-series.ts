@@ -63,3 +63,13 @@ export function timeSeriesSampleRateHz(timeS: ArrayLike<number>, what: string, f
 function formatInterval(seconds: number): string {
   return seconds < 1 ? `${+(seconds * 1000).toPrecision(4)} ms` : `${+seconds.toPrecision(4)} s`;
 }
+
+/** Seconds per unit of a time column, read from its header ("time (ms)", "t_min", "hours"); 1 when it names none. */
+export function timeScaleFromHeader(headerCell: string | undefined): number {
+  const c = (headerCell ?? '').toLowerCase();
+  if (/(^|[^a-z])(us|µs|μs|micros)/.test(c)) return 1e-6;
+  if (/(^|[^a-z])(ms|millis)/.test(c)) return 1e-3;
+  if (/(^|[^a-z])(min|minutes?)([^a-z]|$)/.test(c)) return 60;
+  if (/(^|[^a-z])(h|hr|hours?)([^a-z]|$)/.test(c)) return 3600;
+  return 1;
+}

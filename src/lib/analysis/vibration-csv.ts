@@ -1,24 +1,18 @@
 /**
  * Turns an accelerometer CSV (columns time, x, y, z; optional header) into a vibration request. The time
- * column is in seconds unless its header says ms or µs; a header naming g or m/s² sets the unit when the
+ * column is in seconds unless its header names another unit (time-series.ts); a header naming g or m/s² sets the unit when the
  * request leaves it on 'auto'.
  */
 import { parseInput } from '../validation';
 import { accelerationUnitFromHeader, type AccelerationUnitSource } from './acceleration-units';
 import { csvTableParse } from './csv-table';
+import { timeScaleFromHeader } from './time-series';
 import { VIBRATION_MAX_SAMPLES, VibrationInputSchema, type VibrationInput, type VibrationOptions } from './vibration';
 
 /** Largest accelerometer CSV accepted, bytes (an hour at 100 Hz is about 11 MB of CSV). */
 export const VIBRATION_CSV_MAX_BYTES = 16_000_000;
 
 const COLUMNS = ['time', 'x', 'y', 'z'] as const;
-
-function timeScale(headerCell: string | undefined): number {
-  const c = (headerCell ?? '').toLowerCase();
-  if (/(^|[^a-z])(us|µs|μs|micros)/.test(c)) return 1e-6;
-  if (/(^|[^a-z])(ms|millis)/.test(c)) return 1e-3;
-  return 1;
-}
 
 /**
  * Parses accelerometer CSV text (time, x, y, z) with the given options into a validated VibrationInput
@@ -36,7 +30,7 @@ export function vibrationInputFromCsv(
     what: 'accelerometer CSV',
   });
   const [t, x, y, z] = table.columns as [number[], number[], number[], number[]];
-  const scale = timeScale(table.header?.[0]);
+  const scale = timeScaleFromHeader(table.header?.[0]);
   const timeS = scale === 1 ? t : t.map((v) => v * scale);
   let units = options.units ?? 'auto';
   let unitSource: AccelerationUnitSource = 'stated';
