@@ -30,6 +30,8 @@ export interface FoldLine {
    * the printed side (a valley seen from the printed side is negative). |angle| ≤ π.
    */
   angleRad: number;
+  /** Present when this fold joins a glue tab (of that number) to its face rather than two faces. */
+  tabNumber?: number;
 }
 
 /** A glue tab: a flap on one of two joined cut edges; its partner edge carries the same number. */
@@ -106,13 +108,7 @@ export type CurvedDevelopment =
 
 /** The kind of model part a piece belongs to. */
 export type PartKind =
-  | 'body'
-  | 'rigid-boom'
-  | 'wire-boom-anchor'
-  | 'dish'
-  | 'nozzle'
-  | 'solar-panel'
-  | 'deployable-panel';
+  'body' | 'rigid-boom' | 'wire-boom-anchor' | 'dish' | 'nozzle' | 'solar-panel' | 'deployable-panel';
 
 /** One connected cut-out: outline, folds, tabs, labels and the hinge tree that folds it. */
 export interface Piece {

@@ -1,0 +1,92 @@
+/**
+ * The flat patterns of a whole model at a scale on a paper weight: the body net first (step 1), then one
+ * step per appendage in the model's order, tab numbers unique across the kit, and the wire boom threads.
+ * Flat mm per piece, model mm at kit scale (see types.ts).
+ */
+import { z } from 'zod';
+import type { Model } from './model-schema';
+import type { Piece, WireBoomThread } from './types';
+import { bodyNet } from './body-net';
+import { appendageDirection, appendageFootMm, frameAlongAxis, frameAroundAxis } from './appendage-frame';
+import { coneDevelopment, conePiece } from './cone-development';
+import { tubePiece } from './tube-pattern';
+import { deployablePanelFrame, panelBodyLabel, panelPiece } from './panel-pattern';
+import { wireAnchorPiece, wireBoomThread, WIRE_ANCHOR_SIZE_MM } from './wire-boom';
+import { PAPER_GSM_MAX, PAPER_GSM_MIN, paperOverlapMm, paperTabDepthMm } from './paper';
+import { vec3Combine } from './vec';
+
+/** Largest scale denominator accepted (1:100 000): beyond it every real spacecraft is dust on paper. */
+export const SCALE_DENOMINATOR_MAX = 100_000;
+
+export const PatternOptionsSchema = z.object({
+  /** The kit is 1:scaleDenominator of the real model. */
+  scaleDenominator: z.number().finite('the scale must be a finite number').min(1, 'the scale must be 1:1 or smaller (denominator at least 1)')
+    .max(SCALE_DENOMINATOR_MAX, `the scale denominator must be at most ${SCALE_DENOMINATOR_MAX}`),
+  paperGsm: z.number().finite().min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`).max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`),
+});
+export type PatternOptions = z.infer<typeof PatternOptionsSchema>;
+
+export interface ModelPatterns {
+  pieces: Piece[];
+  threads: WireBoomThread[];
+}
+
+/** Every piece and thread of a parsed model at options.scaleDenominator on options.paperGsm paper. */
+export function modelPatterns(model: Model, options: PatternOptions): ModelPatterns {
+  const { scaleDenominator: N, paperGsm: gsm } = options;
+  const k = 1000 / N;
+  let number = 0;
+  const next = () => ++number;
+  const body = bodyNet(model.body, N, gsm, next, 1);
+  const bodyPiece = body.piece;
+  const pieces: Piece[] = [bodyPiece];
+  const threads: WireBoomThread[] = [];
+  model.appendages.forEach((a, i) => {
+    const step = i + 2;
+    const face = body.faces.find((f) => f.ref === a.face)!;
+    const foot = appendageFootMm(a, face, N);
+    const base = { id: a.id, partId: a.id, label: a.label, assemblyStep: step };
+    switch (a.kind) {
+      case 'rigid-boom': {
+        const frame = frameAlongAxis(foot, appendageDirection(a.orientation, face), face);
+        pieces.push(tubePiece({ ...base, diameterMm: a.diameterM * k, lengthMm: a.lengthM * k, frame, tabNumber: next(), overlapMm: paperOverlapMm(gsm) }));
+        break;
+      }
+      case 'dish':
+      case 'nozzle': {
+        const [R, r, h] = a.kind === 'dish' ? [a.diameterM / 2, (a.innerDiameterM ?? 0) / 2, a.depthM] : [a.exitDiameterM / 2, a.throatDiameterM / 2, a.lengthM];
+        const development = coneDevelopment(R * k, r * k, h * k)!;
+        const axis = appendageDirection(a.orientation, face);
+        // The narrow end sits on the face; a frustum's virtual apex lies h·r/(R − r) behind it.
+        const apex = vec3Combine([1, foot], [(-h * k * r) / (R - r), axis]);
+        pieces.push(conePiece({ ...base, partKind: a.kind, development, frame: frameAroundAxis(apex, axis, face), tabNumber: next(), tabDepthMm: paperTabDepthMm(gsm) }));
+        break;
+      }
+      case 'solar-panel': {
+        const [w, h] = [a.widthM * k, a.heightM * k];
+        const frame = { originMm: vec3Combine([1, foot], [-w / 2, face.uAxis], [-h / 2, face.vAxis]), xAxis: face.uAxis, yAxis: face.vAxis };
+        pieces.push(panelPiece({ ...base, widthMm: w, heightMm: h, frame }));
+        break;
+      }
+      case 'deployable-panel': {
+        const [w, h] = [a.widthM * k, a.heightM * k];
+        const along = a.hingeEdge === 'top' || a.hingeEdge === 'bottom' ? a.position.uM * k : a.position.vM * k;
+        const faceW = Math.hypot(...vec3Combine([1, face.polygonMm[1]!], [-1, face.polygonMm[0]!]));
+        const faceH = face.polygonMm[2]![2];
+        const placed = deployablePanelFrame(face, a.hingeEdge, along, w, faceW, faceH, (a.deployAngleDeg * Math.PI) / 180);
+        const num = next();
+        pieces.push(panelPiece({ ...base, widthMm: w, heightMm: h, frame: placed.frame, hingeStrip: { number: num, depthMm: paperTabDepthMm(gsm, w), angleRad: placed.stripAngleRad } }));
+        bodyPiece.edgeLabels.push(panelBodyLabel(body.frames.get(a.face)!, placed.hingeMidMm, num));
+        break;
+      }
+      case 'wire-boom': {
+        const num = next();
+        pieces.push(wireAnchorPiece({ ...base, id: `${a.id}-anchor`, label: `${a.label} anchor`, face, footMm: foot, sideMm: WIRE_ANCHOR_SIZE_MM, tabNumber: num }));
+        bodyPiece.edgeLabels.push(panelBodyLabel(body.frames.get(a.face)!, foot, num));
+        threads.push(wireBoomThread(a.id, a.label, a.lengthM, N));
+        break;
+      }
+    }
+  });
+  return { pieces, threads };
+}
