@@ -11,7 +11,9 @@ const common: Knex.Config = {
 };
 
 function connection(fallbackDatabase: string): string {
-  return process.env.DATABASE_URL ?? `postgres://postgres@127.0.0.1:${process.env.KW_PG_PORT ?? 54329}/${fallbackDatabase}`;
+  return (
+    process.env.DATABASE_URL ?? `postgres://postgres@127.0.0.1:${process.env.KW_PG_PORT ?? 54329}/${fallbackDatabase}`
+  );
 }
 
 const config: Record<'development' | 'test' | 'production', Knex.Config> = {

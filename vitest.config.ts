@@ -5,7 +5,12 @@ import { getViteConfig } from 'astro/config';
 // Browser specs (tests/browser/*.spec.ts) run through scripts/browser-tests.ts with their own config.
 export default getViteConfig({
   test: {
-    include: ['tests/lib/**/*.test.ts', 'tests/api/**/*.test.ts', 'tests/db/**/*.test.ts', 'tests/scripts/**/*.test.ts'],
+    include: [
+      'tests/lib/**/*.test.ts',
+      'tests/api/**/*.test.ts',
+      'tests/db/**/*.test.ts',
+      'tests/scripts/**/*.test.ts',
+    ],
     environment: 'node',
     testTimeout: 30_000,
     hookTimeout: 60_000,

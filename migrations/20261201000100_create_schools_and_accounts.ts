@@ -16,9 +16,16 @@ export async function up(knex: Knex): Promise<void> {
     t.text('city').notNullable().defaultTo('');
     t.text('region').notNullable().defaultTo('');
     t.text('country').notNullable().defaultTo('');
-    t.enu('setting', ['rural', 'suburban', 'urban'], { useNative: true, enumName: 'school_setting' }).notNullable().defaultTo('suburban');
-    t.boolean('high_need').notNullable().defaultTo(false).comment('Serves a high-need community, as the office reports it');
-    t.enu('status', ['approved', 'proposed'], { useNative: true, enumName: 'school_status' }).notNullable().defaultTo('approved')
+    t.enu('setting', ['rural', 'suburban', 'urban'], { useNative: true, enumName: 'school_setting' })
+      .notNullable()
+      .defaultTo('suburban');
+    t.boolean('high_need')
+      .notNullable()
+      .defaultTo(false)
+      .comment('Serves a high-need community, as the office reports it');
+    t.enu('status', ['approved', 'proposed'], { useNative: true, enumName: 'school_status' })
+      .notNullable()
+      .defaultTo('approved')
       .comment('A teacher may propose a school at sign-up; a coordinator approves it');
     t.timestamps(true, true);
     t.unique(['name', 'city'], { indexName: 'schools_name_city_unique' });
@@ -30,7 +37,12 @@ export async function up(knex: Knex): Promise<void> {
     t.text('display_name').notNullable();
     t.text('password_hash').nullable().comment('argon2id; null until an invited account sets one');
     t.enu('role', ['teacher', 'coordinator', 'admin'], { useNative: true, enumName: 'user_role' }).notNullable();
-    t.uuid('school_id').nullable().references('id').inTable('schools').onDelete('SET NULL').withKeyName('users_school_fk');
+    t.uuid('school_id')
+      .nullable()
+      .references('id')
+      .inTable('schools')
+      .onDelete('SET NULL')
+      .withKeyName('users_school_fk');
     t.timestamp('email_verified_at', { useTz: true }).nullable();
     t.timestamp('deactivated_at', { useTz: true }).nullable();
     t.timestamps(true, true);
@@ -39,7 +51,12 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable('user_sessions', (t) => {
     t.text('id').primary();
-    t.uuid('user_id').notNullable().references('id').inTable('users').onDelete('CASCADE').withKeyName('user_sessions_user_fk');
+    t.uuid('user_id')
+      .notNullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('CASCADE')
+      .withKeyName('user_sessions_user_fk');
     t.timestamp('expires_at', { useTz: true }).notNullable();
     t.timestamp('created_at', { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.index(['user_id'], 'user_sessions_user_idx');
@@ -47,8 +64,16 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable('account_tokens', (t) => {
     t.uuid('id').primary().defaultTo(knex.raw('gen_random_uuid()'));
-    t.uuid('user_id').notNullable().references('id').inTable('users').onDelete('CASCADE').withKeyName('account_tokens_user_fk');
-    t.enu('purpose', ['verify_email', 'reset_password'], { useNative: true, enumName: 'account_token_purpose' }).notNullable();
+    t.uuid('user_id')
+      .notNullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('CASCADE')
+      .withKeyName('account_tokens_user_fk');
+    t.enu('purpose', ['verify_email', 'reset_password'], {
+      useNative: true,
+      enumName: 'account_token_purpose',
+    }).notNullable();
     t.text('token_hash').notNullable().comment('SHA-256 of the token sent by mail; the token itself is never stored');
     t.timestamp('expires_at', { useTz: true }).notNullable();
     t.timestamp('used_at', { useTz: true }).nullable();
@@ -61,7 +86,12 @@ export async function up(knex: Knex): Promise<void> {
     t.text('email').notNullable();
     t.enu('role', null, { useNative: true, existingType: true, enumName: 'user_role' }).notNullable();
     t.text('token_hash').notNullable();
-    t.uuid('invited_by').nullable().references('id').inTable('users').onDelete('SET NULL').withKeyName('invitations_invited_by_fk');
+    t.uuid('invited_by')
+      .nullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('SET NULL')
+      .withKeyName('invitations_invited_by_fk');
     t.timestamp('expires_at', { useTz: true }).notNullable();
     t.timestamp('accepted_at', { useTz: true }).nullable();
     t.timestamp('created_at', { useTz: true }).notNullable().defaultTo(knex.fn.now());
@@ -70,7 +100,12 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable('audit_events', (t) => {
     t.bigIncrements('id').primary();
-    t.uuid('actor_id').nullable().references('id').inTable('users').onDelete('SET NULL').withKeyName('audit_events_actor_fk');
+    t.uuid('actor_id')
+      .nullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('SET NULL')
+      .withKeyName('audit_events_actor_fk');
     t.text('action').notNullable().comment('e.g. role.changed, account.deactivated, invitation.sent');
     t.text('target_type').notNullable();
     t.text('target_id').notNullable();
@@ -87,7 +122,15 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const table of ['rate_limit_counters', 'audit_events', 'invitations', 'account_tokens', 'user_sessions', 'users', 'schools']) {
+  for (const table of [
+    'rate_limit_counters',
+    'audit_events',
+    'invitations',
+    'account_tokens',
+    'user_sessions',
+    'users',
+    'schools',
+  ]) {
     await knex.schema.dropTableIfExists(table);
   }
   await knex.raw('DROP TYPE IF EXISTS account_token_purpose, user_role, school_status, school_setting');

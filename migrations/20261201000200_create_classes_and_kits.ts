@@ -9,8 +9,18 @@ import type { Knex } from 'knex';
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('classes', (t) => {
     t.uuid('id').primary().defaultTo(knex.raw('gen_random_uuid()'));
-    t.uuid('teacher_id').notNullable().references('id').inTable('users').onDelete('CASCADE').withKeyName('classes_teacher_fk');
-    t.uuid('school_id').nullable().references('id').inTable('schools').onDelete('SET NULL').withKeyName('classes_school_fk');
+    t.uuid('teacher_id')
+      .notNullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('CASCADE')
+      .withKeyName('classes_teacher_fk');
+    t.uuid('school_id')
+      .nullable()
+      .references('id')
+      .inTable('schools')
+      .onDelete('SET NULL')
+      .withKeyName('classes_school_fk');
     t.text('name').notNullable();
     t.enu('grade_band', ['K-2', '3-5', '6-8', '9-12'], { useNative: true, enumName: 'grade_band' }).notNullable();
     t.integer('student_count').notNullable().comment('A count only: no student names or data are kept');
@@ -20,11 +30,18 @@ export async function up(knex: Knex): Promise<void> {
     t.unique(['join_code'], { indexName: 'classes_join_code_unique' });
     t.index(['teacher_id'], 'classes_teacher_idx');
   });
-  await knex.raw('ALTER TABLE classes ADD CONSTRAINT classes_student_count_check CHECK (student_count BETWEEN 0 AND 500)');
+  await knex.raw(
+    'ALTER TABLE classes ADD CONSTRAINT classes_student_count_check CHECK (student_count BETWEEN 0 AND 500)',
+  );
 
   await knex.schema.createTable('class_sessions', (t) => {
     t.text('id').primary().comment('SHA-256 of the cookie token');
-    t.uuid('class_id').notNullable().references('id').inTable('classes').onDelete('CASCADE').withKeyName('class_sessions_class_fk');
+    t.uuid('class_id')
+      .notNullable()
+      .references('id')
+      .inTable('classes')
+      .onDelete('CASCADE')
+      .withKeyName('class_sessions_class_fk');
     t.timestamp('expires_at', { useTz: true }).notNullable();
     t.timestamp('created_at', { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.index(['class_id'], 'class_sessions_class_idx');
@@ -32,12 +49,24 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable('kits', (t) => {
     t.uuid('id').primary().defaultTo(knex.raw('gen_random_uuid()'));
-    t.uuid('class_id').notNullable().references('id').inTable('classes').onDelete('CASCADE').withKeyName('kits_class_fk');
-    t.uuid('teacher_id').notNullable().references('id').inTable('users').onDelete('CASCADE').withKeyName('kits_teacher_fk');
+    t.uuid('class_id')
+      .notNullable()
+      .references('id')
+      .inTable('classes')
+      .onDelete('CASCADE')
+      .withKeyName('kits_class_fk');
+    t.uuid('teacher_id')
+      .notNullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('CASCADE')
+      .withKeyName('kits_teacher_fk');
     t.text('title').notNullable();
     t.text('model_id').notNullable().comment('A demo model id from content/models, or an uploaded model id');
     t.text('activity_slug').nullable();
-    t.jsonb('inputs').notNullable().comment('The kit request as validated: scale, sheet, paper weight, venue, copies, units');
+    t.jsonb('inputs')
+      .notNullable()
+      .comment('The kit request as validated: scale, sheet, paper weight, venue, copies, units');
     t.text('engine_version').notNullable();
     t.text('content_hash').notNullable().comment('SHA-256 of inputs + model + engine version');
     t.integer('sheet_count').notNullable().defaultTo(0);

@@ -10,7 +10,12 @@ import type { Knex } from 'knex';
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('entries', (t) => {
     t.uuid('id').primary().defaultTo(knex.raw('gen_random_uuid()'));
-    t.uuid('class_id').notNullable().references('id').inTable('classes').onDelete('CASCADE').withKeyName('entries_class_fk');
+    t.uuid('class_id')
+      .notNullable()
+      .references('id')
+      .inTable('classes')
+      .onDelete('CASCADE')
+      .withKeyName('entries_class_fk');
     t.uuid('kit_id').nullable().references('id').inTable('kits').onDelete('SET NULL').withKeyName('entries_kit_fk');
     t.text('activity_slug').nullable();
     t.enu('author_kind', ['teacher', 'team'], { useNative: true, enumName: 'entry_author_kind' }).notNullable();
@@ -18,10 +23,23 @@ export async function up(knex: Knex): Promise<void> {
     t.text('title').notNullable();
     t.text('body').notNullable().defaultTo('');
     t.jsonb('saved_result').nullable().comment('A data tool result with its plot (analysis SavedResult shape)');
-    t.enu('state', ['draft', 'submitted', 'published', 'returned', 'declined'], { useNative: true, enumName: 'entry_state' }).notNullable().defaultTo('draft');
-    t.boolean('teacher_approved').notNullable().defaultTo(false).comment('Team entries wait for the teacher before reaching the review queue');
+    t.enu('state', ['draft', 'submitted', 'published', 'returned', 'declined'], {
+      useNative: true,
+      enumName: 'entry_state',
+    })
+      .notNullable()
+      .defaultTo('draft');
+    t.boolean('teacher_approved')
+      .notNullable()
+      .defaultTo(false)
+      .comment('Team entries wait for the teacher before reaching the review queue');
     t.text('review_note').nullable();
-    t.uuid('reviewed_by').nullable().references('id').inTable('users').onDelete('SET NULL').withKeyName('entries_reviewed_by_fk');
+    t.uuid('reviewed_by')
+      .nullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('SET NULL')
+      .withKeyName('entries_reviewed_by_fk');
     t.timestamp('submitted_at', { useTz: true }).nullable();
     t.timestamp('reviewed_at', { useTz: true }).nullable();
     t.timestamp('published_at', { useTz: true }).nullable();
@@ -32,7 +50,12 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable('entry_photos', (t) => {
     t.uuid('id').primary().defaultTo(knex.raw('gen_random_uuid()'));
-    t.uuid('entry_id').notNullable().references('id').inTable('entries').onDelete('CASCADE').withKeyName('entry_photos_entry_fk');
+    t.uuid('entry_id')
+      .notNullable()
+      .references('id')
+      .inTable('entries')
+      .onDelete('CASCADE')
+      .withKeyName('entry_photos_entry_fk');
     t.text('storage_key').notNullable();
     t.text('content_type').notNullable();
     t.integer('width_px').notNullable();
@@ -45,14 +68,27 @@ export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('events', (t) => {
     t.uuid('id').primary().defaultTo(knex.raw('gen_random_uuid()'));
     t.text('title').notNullable();
-    t.enu('kind', ['workshop', 'big_build', 'visit', 'other'], { useNative: true, enumName: 'event_kind' }).notNullable();
-    t.uuid('school_id').nullable().references('id').inTable('schools').onDelete('SET NULL').withKeyName('events_school_fk');
+    t.enu('kind', ['workshop', 'big_build', 'visit', 'other'], {
+      useNative: true,
+      enumName: 'event_kind',
+    }).notNullable();
+    t.uuid('school_id')
+      .nullable()
+      .references('id')
+      .inTable('schools')
+      .onDelete('SET NULL')
+      .withKeyName('events_school_fk');
     t.text('venue').notNullable().defaultTo('');
     t.timestamp('starts_at', { useTz: true }).notNullable();
     t.timestamp('ends_at', { useTz: true }).nullable();
     t.integer('attendee_count').notNullable().defaultTo(0);
     t.text('notes').notNullable().defaultTo('');
-    t.uuid('created_by').nullable().references('id').inTable('users').onDelete('SET NULL').withKeyName('events_created_by_fk');
+    t.uuid('created_by')
+      .nullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('SET NULL')
+      .withKeyName('events_created_by_fk');
     t.timestamps(true, true);
   });
 
@@ -61,14 +97,24 @@ export async function up(knex: Knex): Promise<void> {
     t.text('code').notNullable().comment('The short code after /go/');
     t.text('title').notNullable();
     t.text('target_url').notNullable();
-    t.uuid('created_by').nullable().references('id').inTable('users').onDelete('SET NULL').withKeyName('live_links_created_by_fk');
+    t.uuid('created_by')
+      .nullable()
+      .references('id')
+      .inTable('users')
+      .onDelete('SET NULL')
+      .withKeyName('live_links_created_by_fk');
     t.timestamps(true, true);
     t.unique(['code'], { indexName: 'live_links_code_unique' });
   });
 
   await knex.schema.createTable('live_link_visits', (t) => {
     t.bigIncrements('id').primary();
-    t.uuid('link_id').notNullable().references('id').inTable('live_links').onDelete('CASCADE').withKeyName('live_link_visits_link_fk');
+    t.uuid('link_id')
+      .notNullable()
+      .references('id')
+      .inTable('live_links')
+      .onDelete('CASCADE')
+      .withKeyName('live_link_visits_link_fk');
     t.timestamp('visited_at', { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.index(['link_id', 'visited_at'], 'live_link_visits_link_idx');
   });

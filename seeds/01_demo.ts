@@ -8,22 +8,66 @@ import { passwordHash } from '../src/lib/auth/password';
 import { DEMO_ACCOUNTS } from './data/demo-accounts';
 
 const SCHOOLS = [
-  { name: 'Juniper Flats Middle School', city: 'Juniper Flats', region: 'North County', setting: 'rural', high_need: true },
+  {
+    name: 'Juniper Flats Middle School',
+    city: 'Juniper Flats',
+    region: 'North County',
+    setting: 'rural',
+    high_need: true,
+  },
   { name: 'Larkspur Elementary', city: 'Larkspur', region: 'North County', setting: 'suburban', high_need: false },
   { name: 'Bright Creek High School', city: 'Bright Creek', region: 'East Valley', setting: 'urban', high_need: true },
-  { name: 'Quarry Hill Middle School', city: 'Quarry Hill', region: 'East Valley', setting: 'suburban', high_need: false },
-  { name: 'Fennel Valley STEM Academy', city: 'Fennel Valley', region: 'South Plains', setting: 'rural', high_need: true },
+  {
+    name: 'Quarry Hill Middle School',
+    city: 'Quarry Hill',
+    region: 'East Valley',
+    setting: 'suburban',
+    high_need: false,
+  },
+  {
+    name: 'Fennel Valley STEM Academy',
+    city: 'Fennel Valley',
+    region: 'South Plains',
+    setting: 'rural',
+    high_need: true,
+  },
 ] as const;
 
 const CLASSES = [
-  { teacher: 'teacher@juniper-flats.example', name: 'Period 3 Science', grade_band: '6-8', student_count: 26, join_code: 'JFMS3K7Q' },
-  { teacher: 'teacher@juniper-flats.example', name: 'Engineering Club', grade_band: '6-8', student_count: 14, join_code: 'JFCLUB42' },
-  { teacher: 'teacher@larkspur.example', name: 'Room 12 Explorers', grade_band: '3-5', student_count: 22, join_code: 'LRK12RMZ' },
-  { teacher: 'teacher@bright-creek.example', name: 'Physics 2', grade_band: '9-12', student_count: 31, join_code: 'BCHPHY2X' },
+  {
+    teacher: 'teacher@juniper-flats.example',
+    name: 'Period 3 Science',
+    grade_band: '6-8',
+    student_count: 26,
+    join_code: 'JFMS3K7Q',
+  },
+  {
+    teacher: 'teacher@juniper-flats.example',
+    name: 'Engineering Club',
+    grade_band: '6-8',
+    student_count: 14,
+    join_code: 'JFCLUB42',
+  },
+  {
+    teacher: 'teacher@larkspur.example',
+    name: 'Room 12 Explorers',
+    grade_band: '3-5',
+    student_count: 22,
+    join_code: 'LRK12RMZ',
+  },
+  {
+    teacher: 'teacher@bright-creek.example',
+    name: 'Physics 2',
+    grade_band: '9-12',
+    student_count: 31,
+    join_code: 'BCHPHY2X',
+  },
 ] as const;
 
 export async function seed(knex: Knex): Promise<void> {
-  const schools = await knex('schools').insert(SCHOOLS.map((s) => ({ ...s, country: 'US', status: 'approved' }))).returning(['id', 'name']);
+  const schools = await knex('schools')
+    .insert(SCHOOLS.map((s) => ({ ...s, country: 'US', status: 'approved' })))
+    .returning(['id', 'name']);
   const schoolId = (name: string) => schools.find((s) => s.name === name)?.id ?? null;
 
   const users = [];
@@ -41,7 +85,13 @@ export async function seed(knex: Knex): Promise<void> {
   const userBy = (email: string) => inserted.find((u) => u.email === email)!;
 
   const classes = await knex('classes')
-    .insert(CLASSES.map(({ teacher, ...c }) => ({ ...c, teacher_id: userBy(teacher).id, school_id: userBy(teacher).school_id })))
+    .insert(
+      CLASSES.map(({ teacher, ...c }) => ({
+        ...c,
+        teacher_id: userBy(teacher).id,
+        school_id: userBy(teacher).school_id,
+      })),
+    )
     .returning(['id', 'name', 'teacher_id']);
   const classBy = (name: string) => classes.find((c) => c.name === name)!;
 
@@ -53,11 +103,64 @@ export async function seed(knex: Knex): Promise<void> {
   const daysAgo = (d: number) => new Date(now - d * 86_400_000);
 
   await knex('entries').insert([
-    { class_id: period3.id, author_kind: 'team', team_name: 'Team Comet', title: 'Our probe survived the shake table', body: 'Two tabs came loose on the first run; we added glue and it held for all three runs.', state: 'published', teacher_approved: true, submitted_at: daysAgo(9), reviewed_at: daysAgo(8), published_at: daysAgo(8), reviewed_by: coordinator.id, activity_slug: 'shake-test' },
-    { class_id: period3.id, author_kind: 'team', team_name: 'Team Nebula', title: 'Blanket versus no blanket', body: 'With the foil blanket our puck warmed more slowly under the lamp.', state: 'submitted', teacher_approved: true, submitted_at: daysAgo(2), activity_slug: 'thermal-cycling' },
-    { class_id: room12.id, author_kind: 'teacher', title: 'Room 12 built the Wren', body: 'Every team finished the body; the solar panels were the hardest part.', state: 'returned', review_note: 'Lovely! Please remove the photo that shows a student\'s face, then resubmit.', submitted_at: daysAgo(5), reviewed_at: daysAgo(4), reviewed_by: coordinator.id },
-    { class_id: physics.id, author_kind: 'team', team_name: 'Magnetos', title: 'How fast does a magnet fade?', body: 'We measured the field of a fridge magnet from 2 cm to 20 cm.', state: 'draft', activity_slug: 'keep-it-non-magnetic' },
-    { class_id: physics.id, author_kind: 'team', team_name: 'Spam bots', title: 'Buy now', body: 'Off-topic post.', state: 'declined', teacher_approved: true, review_note: 'Off topic for the journal.', submitted_at: daysAgo(3), reviewed_at: daysAgo(3), reviewed_by: coordinator.id },
+    {
+      class_id: period3.id,
+      author_kind: 'team',
+      team_name: 'Team Comet',
+      title: 'Our probe survived the shake table',
+      body: 'Two tabs came loose on the first run; we added glue and it held for all three runs.',
+      state: 'published',
+      teacher_approved: true,
+      submitted_at: daysAgo(9),
+      reviewed_at: daysAgo(8),
+      published_at: daysAgo(8),
+      reviewed_by: coordinator.id,
+      activity_slug: 'shake-test',
+    },
+    {
+      class_id: period3.id,
+      author_kind: 'team',
+      team_name: 'Team Nebula',
+      title: 'Blanket versus no blanket',
+      body: 'With the foil blanket our puck warmed more slowly under the lamp.',
+      state: 'submitted',
+      teacher_approved: true,
+      submitted_at: daysAgo(2),
+      activity_slug: 'thermal-cycling',
+    },
+    {
+      class_id: room12.id,
+      author_kind: 'teacher',
+      title: 'Room 12 built the Wren',
+      body: 'Every team finished the body; the solar panels were the hardest part.',
+      state: 'returned',
+      review_note: "Lovely! Please remove the photo that shows a student's face, then resubmit.",
+      submitted_at: daysAgo(5),
+      reviewed_at: daysAgo(4),
+      reviewed_by: coordinator.id,
+    },
+    {
+      class_id: physics.id,
+      author_kind: 'team',
+      team_name: 'Magnetos',
+      title: 'How fast does a magnet fade?',
+      body: 'We measured the field of a fridge magnet from 2 cm to 20 cm.',
+      state: 'draft',
+      activity_slug: 'keep-it-non-magnetic',
+    },
+    {
+      class_id: physics.id,
+      author_kind: 'team',
+      team_name: 'Spam bots',
+      title: 'Buy now',
+      body: 'Off-topic post.',
+      state: 'declined',
+      teacher_approved: true,
+      review_note: 'Off topic for the journal.',
+      submitted_at: daysAgo(3),
+      reviewed_at: daysAgo(3),
+      reviewed_by: coordinator.id,
+    },
   ]);
 
   await knex('events').insert({

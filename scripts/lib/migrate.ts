@@ -1,10 +1,34 @@
 /** Runs knex migrations and the demo seed against a database URL (scripts and tests). */
+import { readdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import knexFactory, { type Knex } from 'knex';
 import config from '../../knexfile';
+import { PROJECT_ROOT } from './postgres';
+
+const MIGRATIONS_DIR = join(PROJECT_ROOT, 'migrations');
+
+/**
+ * Loads migrations with this module's own dynamic import, so the same TypeScript files load under tsx
+ * (scripts) and under vitest (tests), where knex's built-in loader cannot import .ts files.
+ */
+const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () =>
+    readdirSync(MIGRATIONS_DIR)
+      .filter((f) => /^\d{14}_.+\.ts$/.test(f))
+      .sort(),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => (await import(pathToFileURL(join(MIGRATIONS_DIR, name)).href)) as Knex.Migration,
+};
 
 /** A Knex instance on the URL with the project's migration and seed settings. */
 export function knexFor(url: string): Knex {
-  return knexFactory({ ...config.development, connection: url, pool: { min: 0, max: 4 } });
+  return knexFactory({
+    ...config.development,
+    migrations: { tableName: config.development.migrations?.tableName, migrationSource },
+    connection: url,
+    pool: { min: 0, max: 4 },
+  });
 }
 
 /** Brings the schema up to date; returns the names of migrations that ran. */

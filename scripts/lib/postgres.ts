@@ -58,13 +58,16 @@ function ensureBinaries(): void {
   if (existsSync(join(PG_BIN, 'postgres'))) return;
   console.log('[db] PostgreSQL server binaries missing: installing Debian package "postgresql"…');
   aptInstall(['postgresql']);
-  if (!existsSync(join(PG_BIN, 'postgres'))) throw new Error(`PostgreSQL installed, but ${PG_BIN}/postgres is still missing; set KW_PG_BIN.`);
+  if (!existsSync(join(PG_BIN, 'postgres')))
+    throw new Error(`PostgreSQL installed, but ${PG_BIN}/postgres is still missing; set KW_PG_BIN.`);
 }
 
 function isRunning(dir: string): boolean {
   if (!existsSync(join(dir, 'PG_VERSION'))) return false;
   const cmd = join(PG_BIN, 'pg_ctl');
-  const [file, argv] = isRoot ? ['runuser', ['-u', 'postgres', '--', cmd, '-D', dir, 'status']] : [cmd, ['-D', dir, 'status']];
+  const [file, argv] = isRoot
+    ? ['runuser', ['-u', 'postgres', '--', cmd, '-D', dir, 'status']]
+    : [cmd, ['-D', dir, 'status']];
   return spawnSync(file, argv).status === 0;
 }
 
@@ -93,7 +96,18 @@ export function postgresEnsure(options: EnsureOptions = {}): void {
   const serverOptions = [`-c listen_addresses=127.0.0.1`, `-p ${PG_PORT}`, `-k ${dir}`];
   if (options.fast) serverOptions.push('-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off');
   console.log(`[db] starting PostgreSQL on 127.0.0.1:${PG_PORT}`);
-  asPostgres('pg_ctl', ['-D', dir, '-l', join(dir, 'server.log'), '-w', '-t', '60', '-o', serverOptions.join(' '), 'start']);
+  asPostgres('pg_ctl', [
+    '-D',
+    dir,
+    '-l',
+    join(dir, 'server.log'),
+    '-w',
+    '-t',
+    '60',
+    '-o',
+    serverOptions.join(' '),
+    'start',
+  ]);
 }
 
 /** Stops the cluster if it runs. */

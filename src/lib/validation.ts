@@ -21,5 +21,8 @@ export function parseInput<Out, In>(schema: ZodType<Out, ZodTypeDef, In>, input:
   const fields = zodFieldErrors(result.error);
   const first = result.error.issues[0];
   const where = first && first.path.length > 0 ? `${first.path.join('.')}: ` : '';
-  throw new InputError(`The ${what} has ${result.error.issues.length === 1 ? 'a problem' : `${result.error.issues.length} problems`}. ${where}${first?.message ?? ''}`.trim(), fields);
+  throw new InputError(
+    `The ${what} has ${result.error.issues.length === 1 ? 'a problem' : `${result.error.issues.length} problems`}. ${where}${first?.message ?? ''}`.trim(),
+    fields,
+  );
 }

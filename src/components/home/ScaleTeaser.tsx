@@ -61,7 +61,9 @@ export default function ScaleTeaser() {
         {fits ? (
           <span className="font-semibold text-fold-dark">it fits on one {sheet.label} sheet.</span>
         ) : (
-          <span className="font-semibold text-caution">too wide for {sheet.label}; pick a smaller scale or tile it.</span>
+          <span className="font-semibold text-caution">
+            too wide for {sheet.label}; pick a smaller scale or tile it.
+          </span>
         )}
       </p>
     </div>

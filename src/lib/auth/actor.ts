@@ -7,7 +7,15 @@ export type Role = (typeof ROLES)[number];
 
 export type Actor =
   | { kind: 'anonymous' }
-  | { kind: 'user'; userId: string; role: Role; schoolId: string | null; email: string; displayName: string; sessionId: string }
+  | {
+      kind: 'user';
+      userId: string;
+      role: Role;
+      schoolId: string | null;
+      email: string;
+      displayName: string;
+      sessionId: string;
+    }
   | { kind: 'class'; classId: string; classSessionId: string };
 
 /** Who a page or endpoint admits: "anyone", a class session, or accounts of the listed roles. */

@@ -11,7 +11,11 @@ export function db(): Knex {
   if (!instance) {
     const url = process.env.DATABASE_URL;
     if (!url) throw new Error('DATABASE_URL is not set; start the app with `npm start` or `npm run dev`.');
-    instance = knexFactory({ client: 'pg', connection: url, pool: { min: 0, max: Number(process.env.DATABASE_POOL_MAX ?? 10) } });
+    instance = knexFactory({
+      client: 'pg',
+      connection: url,
+      pool: { min: 0, max: Number(process.env.DATABASE_POOL_MAX ?? 10) },
+    });
   }
   return instance;
 }

@@ -17,7 +17,11 @@ export function json(data: unknown, status = 200, headers: Record<string, string
 }
 
 /** A JSON error response of the shared shape. */
-export function errorResponse(status: number, body: ErrorBody['error'], headers: Record<string, string> = {}): Response {
+export function errorResponse(
+  status: number,
+  body: ErrorBody['error'],
+  headers: Record<string, string> = {},
+): Response {
   return json({ error: body }, status, headers);
 }
 
@@ -50,7 +54,9 @@ export const DEFAULT_JSON_LIMIT_BYTES = 1_000_000;
 export async function readJson(request: Request, limitBytes = DEFAULT_JSON_LIMIT_BYTES): Promise<unknown> {
   const type = request.headers.get('content-type') ?? '';
   if (!type.toLowerCase().includes('application/json')) {
-    throw new InputError(`Send the request body as JSON (Content-Type: application/json); received "${type || 'none'}".`);
+    throw new InputError(
+      `Send the request body as JSON (Content-Type: application/json); received "${type || 'none'}".`,
+    );
   }
   const text = await readTextCapped(request, limitBytes);
   if (text.trim() === '') throw new InputError('The request body is empty; send a JSON object.');

@@ -14,7 +14,13 @@ export const SHEET_SIZES = {
   letter: { id: 'letter', label: 'US Letter', widthMm: inchToMm(8.5), heightMm: inchToMm(11), kind: 'paper' },
   legal: { id: 'legal', label: 'US Legal', widthMm: inchToMm(8.5), heightMm: inchToMm(14), kind: 'paper' },
   tabloid: { id: 'tabloid', label: 'Tabloid', widthMm: inchToMm(11), heightMm: inchToMm(17), kind: 'paper' },
-  'panel-1220x2440': { id: 'panel-1220x2440', label: 'Panel 1220 × 2440 mm', widthMm: 1220, heightMm: 2440, kind: 'stock' },
+  'panel-1220x2440': {
+    id: 'panel-1220x2440',
+    label: 'Panel 1220 × 2440 mm',
+    widthMm: 1220,
+    heightMm: 2440,
+    kind: 'stock',
+  },
 } as const satisfies Record<string, SheetSize>;
 
 export type SheetSizeId = keyof typeof SHEET_SIZES;

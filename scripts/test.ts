@@ -1,0 +1,121 @@
+/**
+ * `npm test`: lint and type checks, then vitest (unit tests of src/lib, database tests and API tests
+ * against the built server on the real PostgreSQL), then browser specs in Debian's chromium. Every runner's
+ * counts are added up; the last line printed is "N passed, N failed" (", N skipped" when any were), and the
+ * exit status is non-zero on any failure.
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { PROJECT_ROOT, TEST_DATABASE, databaseReset, databaseUrl } from './lib/postgres';
+import { databaseUp } from './db';
+import { migrateLatest, seedDemoIfEmpty } from './lib/migrate';
+import { smtpFakeStart } from './lib/smtp-fake';
+import { appBuild } from './lib/build';
+import { appEnv } from './lib/app-env';
+import { serverStart } from './lib/server';
+import { aptInstall } from './lib/apt';
+
+interface Counts {
+  passed: number;
+  failed: number;
+  skipped: number;
+}
+const total: Counts = { passed: 0, failed: 0, skipped: 0 };
+const reportDir = join(PROJECT_ROOT, '.data', 'test-reports');
+
+function step(name: string, command: string, args: string[], env: NodeJS.ProcessEnv = process.env): boolean {
+  console.log(`\n=== ${name} ===`);
+  const ok = spawnSync(command, args, { cwd: PROJECT_ROOT, stdio: 'inherit', env }).status === 0;
+  if (ok) total.passed += 1;
+  else total.failed += 1;
+  console.log(`--- ${name}: ${ok ? 'passed' : 'FAILED'}`);
+  return ok;
+}
+
+function vitest(name: string, config: string, env: NodeJS.ProcessEnv): void {
+  console.log(`\n=== ${name} ===`);
+  const out = join(reportDir, `${name.replace(/\W+/g, '-')}.json`);
+  rmSync(out, { force: true });
+  const res = spawnSync(
+    'npx',
+    ['vitest', 'run', '--config', config, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`],
+    {
+      cwd: PROJECT_ROOT,
+      stdio: 'inherit',
+      env,
+    },
+  );
+  if (!existsSync(out)) {
+    console.log(`--- ${name}: no report (exit ${res.status}); counted as one failure`);
+    total.failed += 1;
+    return;
+  }
+  const report = JSON.parse(readFileSync(out, 'utf8')) as {
+    numPassedTests: number;
+    numFailedTests: number;
+    numPendingTests: number;
+    numTodoTests: number;
+    numFailedTestSuites: number;
+  };
+  total.passed += report.numPassedTests;
+  total.failed +=
+    report.numFailedTests +
+    (report.numFailedTests === 0 && res.status !== 0 ? Math.max(1, report.numFailedTestSuites) : 0);
+  total.skipped += report.numPendingTests + report.numTodoTests;
+}
+
+function chromiumEnsure(): void {
+  if (existsSync('/usr/bin/chromium')) return;
+  console.log('[test] /usr/bin/chromium missing: installing Debian packages chromium and poppler-utils…');
+  aptInstall(['chromium', 'poppler-utils']);
+}
+
+async function main(): Promise<void> {
+  mkdirSync(reportDir, { recursive: true });
+  const host = '127.0.0.1';
+  const port = Number(process.env.KW_TEST_PORT ?? 4322);
+  const smtpPort = Number(process.env.KW_TEST_SMTP_PORT ?? 2526);
+  const mailHttpPort = Number(process.env.KW_TEST_MAIL_HTTP_PORT ?? 2581);
+
+  step('lint (eslint + prettier)', 'npm', ['run', '--silent', 'lint']);
+  step('types (astro check)', 'npm', ['run', '--silent', 'check']);
+
+  await databaseUp();
+  const dbUrl = databaseUrl(TEST_DATABASE);
+  await databaseReset(TEST_DATABASE);
+  await migrateLatest(dbUrl);
+  await seedDemoIfEmpty(dbUrl);
+  const mail = await smtpFakeStart(smtpPort, mailHttpPort);
+  chromiumEnsure();
+  appBuild();
+  const env = appEnv({ databaseUrl: dbUrl, host, port, smtpPort, mailHttpPort });
+  const serverLog = join(reportDir, 'server.log');
+  const server = await serverStart({ ...env, KW_TEST_ROUTES: '1' }, { logFile: serverLog });
+  const testEnv = {
+    ...env,
+    KW_TEST_BASE_URL: server.url,
+    KW_TEST_MAIL_URL: `http://127.0.0.1:${mailHttpPort}`,
+    KW_TEST_DATABASE_URL: dbUrl,
+    KW_TEST_SERVER_LOG: serverLog,
+    KW_ADMIN_DATABASE_URL: databaseUrl('postgres'),
+  };
+  try {
+    vitest('unit, database and API tests', 'vitest.config.ts', testEnv);
+    vitest('browser tests', 'vitest.browser.config.ts', testEnv);
+  } finally {
+    await server.stop();
+    await mail.close();
+  }
+}
+
+main()
+  .catch((err) => {
+    console.error(err instanceof Error ? err.message : err);
+    total.failed += 1;
+  })
+  .finally(() => {
+    const line = `${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`;
+    console.log(`\n${line}`);
+    process.exit(total.failed > 0 ? 1 : 0);
+  });
