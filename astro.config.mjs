@@ -6,6 +6,8 @@ import tailwindcss from '@tailwindcss/vite';
 
 export default defineConfig({
   output: 'server',
+  // KW_OUT_DIR lets two test runs on one machine build side by side (DEVELOPERS.md).
+  outDir: process.env.KW_OUT_DIR ?? './dist',
   adapter: node({ mode: 'standalone' }),
   integrations: [react()],
   server: {

@@ -22,7 +22,7 @@ interface Counts {
   skipped: number;
 }
 const total: Counts = { passed: 0, failed: 0, skipped: 0 };
-const reportDir = join(PROJECT_ROOT, '.data', 'test-reports');
+const reportDir = join(PROJECT_ROOT, '.data', `test-reports-${process.env.KW_TEST_PORT ?? 4322}`);
 
 function step(name: string, command: string, args: string[], env: NodeJS.ProcessEnv = process.env): boolean {
   console.log(`\n=== ${name} ===`);

@@ -15,7 +15,7 @@ export const PROJECT_ROOT = resolve(dirname(new URL(import.meta.url).pathname), 
 const PG_BIN = process.env.KW_PG_BIN ?? '/usr/lib/postgresql/15/bin';
 export const PG_PORT = Number(process.env.KW_PG_PORT ?? 54329);
 export const APP_DATABASE = 'kitwright';
-export const TEST_DATABASE = 'kitwright_test';
+export const TEST_DATABASE = process.env.KW_TEST_DATABASE ?? 'kitwright_test';
 
 const isRoot = process.getuid?.() === 0;
 

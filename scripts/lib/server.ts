@@ -14,7 +14,7 @@ export interface RunningServer {
 export async function serverStart(env: NodeJS.ProcessEnv, opts: { logFile?: string } = {}): Promise<RunningServer> {
   const out = opts.logFile ? openSync(opts.logFile, 'w') : 'inherit';
   const url = `http://${env.HOST}:${env.PORT}`;
-  const child = spawn(process.execPath, [join(PROJECT_ROOT, 'dist', 'server', 'entry.mjs')], {
+  const child = spawn(process.execPath, [join(PROJECT_ROOT, process.env.KW_OUT_DIR ?? 'dist', 'server', 'entry.mjs')], {
     cwd: PROJECT_ROOT,
     env,
     stdio: ['ignore', out, out],
