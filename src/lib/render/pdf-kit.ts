@@ -1,0 +1,122 @@
+/**
+ * The kit as one PDF, one page per sheet at the sheet's exact size (jspdf writes the MediaBox in points,
+ * 1 pt = 1/72 in, ISO 32000-1:2008 §8.3.2.3), drawn as vector paths with the shipped KitwrightSans font
+ * embedded. Pure: the caller passes the font bytes (the server reads them with fonts.server.ts).
+ */
+import { jsPDF } from 'jspdf';
+import type { Vec2Mm } from '../geometry/types';
+import { placementApply } from '../layout/placement';
+import type { KitLayout, LaidOutSheet } from '../layout/types';
+import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
+import { pieceLines } from './piece-lines';
+import { sheetScene } from './sheet-scene';
+
+export interface PdfFonts {
+  /** KitwrightSans-Regular.ttf, the whole file. */
+  fontRegular: Uint8Array;
+  /** KitwrightSans-Bold.ttf, the whole file. */
+  fontBold: Uint8Array;
+}
+
+/** Family name under which the fonts are registered in the PDF. */
+export const PDF_FONT_FAMILY = 'KitwrightSans';
+const PT_PER_MM = 72 / 25.4;
+
+/** The PDF bytes of a kit; a kit without sheets gives a PDF of its single empty first page layout. */
+export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
+  const first = kit.sheets[0];
+  const pageFormat = (s: Pick<LaidOutSheet, 'widthMm' | 'heightMm'>): [number, number] => [s.widthMm, s.heightMm];
+  const doc = new jsPDF({
+    unit: 'mm',
+    format: first ? pageFormat(first) : [kit.sheetSize.widthMm, kit.sheetSize.heightMm],
+    orientation: 'portrait',
+    compress: true,
+    putOnlyUsedFonts: true,
+  });
+  doc.addFileToVFS('KitwrightSans-Regular.ttf', pdfBase64(fonts.fontRegular));
+  doc.addFont('KitwrightSans-Regular.ttf', PDF_FONT_FAMILY, 'normal');
+  doc.addFileToVFS('KitwrightSans-Bold.ttf', pdfBase64(fonts.fontBold));
+  doc.addFont('KitwrightSans-Bold.ttf', PDF_FONT_FAMILY, 'bold');
+  doc.setProperties({
+    title: kit.title,
+    subject: `Paper model kit, scale 1:${kit.scaleDenominator}`,
+    creator: `Kitwright engine ${kit.engineVersion}`,
+  });
+  kit.sheets.forEach((sheet, index) => {
+    if (index > 0) doc.addPage(pageFormat(sheet), 'portrait');
+    pdfSheet(doc, kit, sheet);
+  });
+  return new Uint8Array(doc.output('arraybuffer'));
+}
+
+function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
+  const byId = new Map(kit.pieces.map((p) => [p.id, p]));
+  const scene = sheetScene(kit, sheet);
+  doc.setLineJoin('round');
+  for (const placement of sheet.placements) {
+    const piece = byId.get(placement.pieceId);
+    if (!piece) continue;
+    const lines = pieceLines(piece, placement, (polylines) =>
+      polylines.map((line) => line.map((p) => placementApply(placement, p))),
+    );
+    if (lines.tabs.length) {
+      doc.saveGraphicsState();
+      const w = placement.tile?.windowMm;
+      if (w) doc.rect(w.xMm, w.yMm, w.widthMm, w.heightMm, null).clip().discardPath();
+      doc.setFillColor(GLUE_TINT);
+      for (const tab of lines.tabs) pdfPolygonFill(doc, tab);
+      doc.restoreGraphicsState();
+    }
+    pdfPolylines(doc, lines.cut, LINE_STYLES.cut);
+    pdfPolylines(doc, lines.mountain, LINE_STYLES.mountain);
+    pdfPolylines(doc, lines.valley, LINE_STYLES.valley);
+  }
+  for (const fill of scene.fills) {
+    doc.setFillColor(fill.color);
+    for (const r of fill.rects) doc.rect(r.xMm, r.yMm, r.widthMm, r.heightMm, 'F');
+  }
+  for (const stroke of scene.strokes) pdfPolylines(doc, [stroke.points], stroke);
+  doc.setTextColor(TEXT_COLOR);
+  for (const t of scene.texts) {
+    doc.setFont(PDF_FONT_FAMILY, t.bold ? 'bold' : 'normal');
+    doc.setFontSize(t.sizeMm * PT_PER_MM);
+    const half = t.anchor === 'middle' ? doc.getTextWidth(t.text) / 2 : 0;
+    const x = t.atMm[0] - half * Math.cos(t.angleRad);
+    const y = t.atMm[1] - half * Math.sin(t.angleRad);
+    // jspdf turns text counter-clockwise on the page; the scene's angles are clockwise.
+    doc.text(t.text, x, y, { baseline: 'middle', angle: t.angleRad ? (-t.angleRad * 180) / Math.PI : 0 });
+  }
+}
+
+function pdfPolylines(
+  doc: jsPDF,
+  polylines: readonly (readonly Vec2Mm[])[],
+  style: { widthMm: number; color: string; dashMm: readonly number[] },
+) {
+  if (polylines.length === 0) return;
+  doc.setDrawColor(style.color);
+  doc.setLineWidth(style.widthMm);
+  doc.setLineDashPattern([...style.dashMm], 0);
+  for (const line of polylines) {
+    if (line.length < 2) continue;
+    doc.moveTo(line[0]![0], line[0]![1]);
+    for (let i = 1; i < line.length; i++) doc.lineTo(line[i]![0], line[i]![1]);
+  }
+  doc.stroke();
+}
+
+function pdfPolygonFill(doc: jsPDF, polygon: readonly Vec2Mm[]) {
+  if (polygon.length < 3) return;
+  doc.moveTo(polygon[0]![0], polygon[0]![1]);
+  for (let i = 1; i < polygon.length; i++) doc.lineTo(polygon[i]![0], polygon[i]![1]);
+  doc.close();
+  doc.fill();
+}
+
+/** Base64 of bytes without Node's Buffer (btoa exists in browsers and Node ≥ 16). */
+export function pdfBase64(bytes: Uint8Array): string {
+  let binary = '';
+  const chunk = 0x8000;
+  for (let i = 0; i < bytes.length; i += chunk) binary += String.fromCharCode(...bytes.subarray(i, i + chunk));
+  return btoa(binary);
+}

@@ -1,0 +1,59 @@
+/**
+ * Cutting lines down to a tile's window: Liang–Barsky parametric clipping (Liang & Barsky, "A new concept
+ * and method for line clipping", ACM TOG 3(1), 1984). Only the parts of the original lines inside the window
+ * are kept, so a tile's cut group never gains a cut along the window edge.
+ */
+import type { Vec2Mm } from '../geometry/types';
+import type { RectMm } from '../layout/types';
+
+/** The part of segment a→b inside the rectangle, or null when none of it is. */
+export function segmentClipToRect(a: Vec2Mm, b: Vec2Mm, rect: RectMm): [Vec2Mm, Vec2Mm] | null {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  let t0 = 0;
+  let t1 = 1;
+  const edges: [number, number][] = [
+    [-dx, a[0] - rect.xMm],
+    [dx, rect.xMm + rect.widthMm - a[0]],
+    [-dy, a[1] - rect.yMm],
+    [dy, rect.yMm + rect.heightMm - a[1]],
+  ];
+  for (const [p, q] of edges) {
+    if (p === 0) {
+      if (q < 0) return null;
+      continue;
+    }
+    const t = q / p;
+    if (p < 0) t0 = Math.max(t0, t);
+    else t1 = Math.min(t1, t);
+    if (t0 > t1) return null;
+  }
+  return [
+    [a[0] + t0 * dx, a[1] + t0 * dy],
+    [a[0] + t1 * dx, a[1] + t1 * dy],
+  ];
+}
+
+/**
+ * A polyline (closed when `closed`) clipped to the rectangle, as the open polylines that stay inside;
+ * a rectangle of undefined (no window) returns the polyline itself.
+ */
+export function segmentClipPolyline(points: readonly Vec2Mm[], closed: boolean, rect?: RectMm): Vec2Mm[][] {
+  if (!rect) return [closed && points.length > 0 ? [...points, points[0]!] : [...points]];
+  const out: Vec2Mm[][] = [];
+  let current: Vec2Mm[] = [];
+  const count = closed ? points.length : points.length - 1;
+  for (let i = 0; i < count; i++) {
+    const clipped = segmentClipToRect(points[i]!, points[(i + 1) % points.length]!, rect);
+    if (!clipped) continue;
+    const last = current[current.length - 1];
+    if (last && Math.abs(last[0] - clipped[0][0]) < 1e-9 && Math.abs(last[1] - clipped[0][1]) < 1e-9)
+      current.push(clipped[1]);
+    else {
+      if (current.length > 1) out.push(current);
+      current = [clipped[0], clipped[1]];
+    }
+  }
+  if (current.length > 1) out.push(current);
+  return out;
+}
