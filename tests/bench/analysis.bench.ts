@@ -1,0 +1,52 @@
+/**
+ * Benchmark (a script, not a test): Welch PSD of a one-hour, 100 Hz, three-axis record (360 000 samples per
+ * axis) with the vibration tool's default segment length, and the whole vibration analysis of the same
+ * record. Prints min/median/max ms over the runs after warm-up and the peak resident set size.
+ * Target: PSD median ≤ 300 ms on the 2-core reference machine.
+ */
+import { performance } from 'node:perf_hooks';
+import { VibrationInputSchema, vibrationAnalyse } from '../../src/lib/analysis/vibration';
+import { welchDefaultSegmentLength, welchPsd } from '../../src/lib/analysis/welch-psd';
+
+const FS = 100;
+const N = 3600 * FS;
+const WARMUP = 3;
+const RUNS = 15;
+
+let seed = 12345;
+const noise = () => {
+  seed = (seed * 1103515245 + 12345) % 2147483648;
+  return seed / 2147483648 - 0.5;
+};
+const timeS = Array.from({ length: N }, (_, i) => i / FS);
+const axes = [7, 13, 29].map((f) => Float64Array.from({ length: N }, (_, i) => 0.3 * Math.sin((2 * Math.PI * f * i) / FS) + 0.1 * noise()));
+const segment = welchDefaultSegmentLength(N)!;
+let peakRss = process.memoryUsage().rss;
+
+function measure(label: string, run: () => void): void {
+  for (let i = 0; i < WARMUP; i++) run();
+  const times: number[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    const t0 = performance.now();
+    run();
+    times.push(performance.now() - t0);
+    peakRss = Math.max(peakRss, process.memoryUsage().rss);
+  }
+  times.sort((a, b) => a - b);
+  const f = (v: number) => v.toFixed(1);
+  console.log(`${label}: min ${f(times[0]!)} ms, median ${f(times[RUNS >> 1]!)} ms, max ${f(times[RUNS - 1]!)} ms (${RUNS} runs after ${WARMUP} warm-up)`);
+}
+
+console.log(`record: ${N.toLocaleString('en-US')} samples per axis × 3 axes at ${FS} Hz, segment ${segment}, 50 % overlap`);
+measure('Welch PSD, 3 axes', () => {
+  for (const a of axes) welchPsd(a, FS, segment);
+});
+measure('Welch PSD, 3 axes, segment 256 (many short segments)', () => {
+  for (const a of axes) welchPsd(a, FS, 256);
+});
+const input = VibrationInputSchema.parse({ timeS, x: Array.from(axes[0]!), y: Array.from(axes[1]!), z: Array.from(axes[2]!), units: 'g' });
+measure('vibrationAnalyse (checks, stats, PSD, bands)', () => {
+  vibrationAnalyse(input);
+});
+const peak = Math.max(peakRss, process.resourceUsage().maxRSS * 1024);
+console.log(`peak RSS: ${(peak / 1_048_576).toFixed(0)} MiB`);
