@@ -11,7 +11,7 @@ import { appendageDirection, appendageFootMm, frameAlongAxis, frameAroundAxis } 
 import { coneDevelopment, conePiece } from './cone-development';
 import { tubePiece } from './tube-pattern';
 import { deployablePanelFrame, panelBodyLabel, panelPiece } from './panel-pattern';
-import { wireAnchorPiece, wireBoomThread, WIRE_ANCHOR_SIZE_MM } from './wire-boom';
+import { wireAnchorPiece, wireAnchorPlacement, wireBoomThread } from './wire-boom';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN, paperOverlapMm, paperTabDepthMm } from './paper';
 import { vec3Combine } from './vec';
 
@@ -81,8 +81,9 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
       }
       case 'wire-boom': {
         const num = next();
-        pieces.push(wireAnchorPiece({ ...base, id: `${a.id}-anchor`, label: `${a.label} anchor`, face, footMm: foot, sideMm: WIRE_ANCHOR_SIZE_MM, tabNumber: num }));
-        bodyPiece.edgeLabels.push(panelBodyLabel(body.frames.get(a.face)!, foot, num));
+        const spot = wireAnchorPlacement(face, foot);
+        pieces.push(wireAnchorPiece({ ...base, id: `${a.id}-anchor`, label: `${a.label} anchor`, face, footMm: spot.centreMm, sideMm: spot.sideMm, tabNumber: num }));
+        bodyPiece.edgeLabels.push(panelBodyLabel(body.frames.get(a.face)!, spot.centreMm, num));
         threads.push(wireBoomThread(a.id, a.label, a.lengthM, N));
         break;
       }

@@ -49,9 +49,6 @@ const BoxBodySchema = z.object({
   widthM: lengthM('the box width (x)').optional(),
   depthM: lengthM('the box depth (y)').optional(),
   heightM: lengthM('the box height (z)').optional(),
-}).refine((b) => (b.smallsat !== undefined) !== (b.widthM !== undefined && b.depthM !== undefined && b.heightM !== undefined)
-  && (b.smallsat === undefined || (b.widthM === undefined && b.depthM === undefined && b.heightM === undefined)), {
-  message: 'a box needs either a smallsat size (e.g. "3U") or all of widthM, depthM and heightM, not both',
 });
 
 const CylinderBodySchema = z.object({
@@ -64,7 +61,13 @@ const CylinderBodySchema = z.object({
     .max(CYLINDER_FACETS_MAX, `a cylinder has at most ${CYLINDER_FACETS_MAX} facets`),
 });
 
-export const BodySchema = z.union([PrismBodySchema, BoxBodySchema, CylinderBodySchema]);
+export const BodySchema = z.discriminatedUnion('kind', [PrismBodySchema, BoxBodySchema, CylinderBodySchema]).superRefine((b, ctx) => {
+  if (b.kind !== 'box') return;
+  const dims = [b.widthM, b.depthM, b.heightM].filter((d) => d !== undefined).length;
+  if ((b.smallsat !== undefined) === (dims > 0) || (b.smallsat === undefined && dims < 3)) {
+    ctx.addIssue({ code: 'custom', message: 'a box needs either a smallsat size (e.g. "3U") or all of widthM, depthM and heightM, not both' });
+  }
+});
 
 /** A body face: the top, the bottom, or side wall i (0-based, side 0 faces +x). */
 export const FaceRefSchema = z.string().regex(/^(top|bottom|side:\d{1,3})$/, 'face must be "top", "bottom" or "side:<number>"');

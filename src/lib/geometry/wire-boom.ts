@@ -41,3 +41,30 @@ export function wireAnchorPiece(spec: { id: string; partId: string; label: strin
     rootFrame: frame,
   });
 }
+
+/**
+ * The anchor's centre and side on its face: the foot point and WIRE_ANCHOR_SIZE_MM when the square fits
+ * inside the face, else moved toward the face centre (and, on a very small face, shrunk) until it does.
+ */
+export function wireAnchorPlacement(face: BodyFace, footMm: Vec3Mm): { centreMm: Vec3Mm; sideMm: number } {
+  const uv = face.polygonMm.map((p) => {
+    const d = vec3Combine([1, p], [-1, face.centreMm]);
+    return [d[0] * face.uAxis[0] + d[1] * face.uAxis[1] + d[2] * face.uAxis[2], d[0] * face.vAxis[0] + d[1] * face.vAxis[1] + d[2] * face.vAxis[2]] as const;
+  });
+  const f = vec3Combine([1, footMm], [-1, face.centreMm]);
+  const foot = [f[0] * face.uAxis[0] + f[1] * face.uAxis[1] + f[2] * face.uAxis[2], f[0] * face.vAxis[0] + f[1] * face.vAxis[1] + f[2] * face.vAxis[2]] as const;
+  const inside = (x: number, y: number) => uv.every((a, i) => {
+    const b = uv[(i + 1) % uv.length]!;
+    return (b[0] - a[0]) * (y - a[1]) - (b[1] - a[1]) * (x - a[0]) >= 0;
+  });
+  for (let side = WIRE_ANCHOR_SIZE_MM; side > 1e-6; side *= 0.8) {
+    for (let t = 1; t >= 0; t -= 0.05) {
+      const [x, y] = [foot[0] * t, foot[1] * t];
+      const h = side / 2;
+      if (inside(x - h, y - h) && inside(x + h, y - h) && inside(x + h, y + h) && inside(x - h, y + h)) {
+        return { centreMm: vec3Combine([1, face.centreMm], [x, face.uAxis], [y, face.vAxis]), sideMm: side };
+      }
+    }
+  }
+  return { centreMm: face.centreMm, sideMm: 0 };
+}

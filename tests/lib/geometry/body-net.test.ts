@@ -1,0 +1,85 @@
+import { describe, expect, test } from 'vitest';
+import polygonClipping from 'polygon-clipping';
+import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
+import { hingeTreeFold } from '../../../src/lib/geometry/hinge-tree';
+import type { Piece } from '../../../src/lib/geometry/types';
+import { DEMO_IDS, demoModel, model, sub, dot, cross } from './fixtures';
+
+const prism = (sides: number, sizeM: number, heightM: number) => model({ body: { kind: 'prism', sides, across: 'corners', sizeM, heightM } });
+const bodyOf = (m: ReturnType<typeof model>, n = 10, gsm = 160) => modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.find((p) => p.partKind === 'body')!;
+const clip = (poly: readonly (readonly [number, number])[]) => [[...poly.map((p) => [p[0], p[1]] as [number, number])]];
+const areaOf = (mp: ReturnType<typeof polygonClipping.union>) => mp.reduce((s, poly) => s + poly.reduce((t, ring, i) => t + (i === 0 ? 1 : -1) * Math.abs(ringArea(ring)), 0), 0);
+const ringArea = (r: [number, number][]) => r.reduce((s, p, i) => s + p[0] * r[(i + 1) % r.length]![1] - r[(i + 1) % r.length]![0] * p[1], 0) / 2;
+
+describe('bodyNet (through modelPatterns)', () => {
+  test.each([3, 4, 6, 7, 12, 24])('keeps the surface area of a %i-sided prism', (n) => {
+    const R = 1; // across corners 2 m → circumradius 1 m → 100 mm at 1:10
+    const piece = bodyOf(prism(n, 2 * R, 0.5));
+    // CRC Standard Mathematical Tables: regular n-gon area (n/2)·R²·sin(2π/n), side 2R·sin(π/n).
+    const Rmm = 100, H = 50;
+    const expected = 2 * (n / 2) * Rmm ** 2 * Math.sin((2 * Math.PI) / n) + n * 2 * Rmm * Math.sin(Math.PI / n) * H;
+    expect(piece.faceAreaMm2).toBeCloseTo(expected, 6);
+  });
+
+  test('gives a one-piece net of F faces exactly F − 1 folds between faces', () => {
+    for (const n of [3, 6, 24]) {
+      const piece = bodyOf(prism(n, 2, 0.5));
+      // Euler / net theory (checks.md): a one-piece net of F faces has F − 1 folds.
+      expect(piece.hinge.faces.length).toBe(n + 2);
+      expect(piece.hinge.joints.length).toBe(n + 1);
+      expect(piece.folds.filter((f) => f.tabNumber === undefined).length).toBe(n + 1);
+    }
+  });
+
+  test('marks each fold mountain or valley by the side the child face folds to', () => {
+    for (const id of DEMO_IDS) {
+      for (const piece of modelPatterns(demoModel(id), { scaleDenominator: 20, paperGsm: 120 }).pieces) {
+        const folded = new Map(hingeTreeFold(piece.hinge, 0.5).map((f) => [f.id, f.polygonMm]));
+        piece.hinge.joints.forEach((j, i) => {
+          const p = folded.get(j.parent)!, c = folded.get(j.child)!;
+          const normal = cross(sub(p[1]!, p[0]!), sub(p[2]!, p[0]!));
+          const centroid = c.reduce((s, v) => [s[0] + v[0] / c.length, s[1] + v[1] / c.length, s[2] + v[2] / c.length] as [number, number, number], [0, 0, 0] as [number, number, number]);
+          const side = dot(sub(centroid, p[0]!), normal);
+          // Mountain: seen from the printed side the child drops away behind the paper.
+          expect(piece.folds[i]!.kind, `${piece.id} joint ${i}`).toBe(side < 0 ? 'mountain' : 'valley');
+        });
+      }
+    }
+  });
+
+  test('pairs every tab number with exactly one edge label across the kit', () => {
+    for (const id of DEMO_IDS) {
+      const pieces = modelPatterns(demoModel(id), { scaleDenominator: 20, paperGsm: 160 }).pieces;
+      const tabs = pieces.flatMap((p) => p.tabs.map((t) => t.number)).sort((a, b) => a - b);
+      const labels = pieces.flatMap((p) => p.edgeLabels.map((l) => l.number)).sort((a, b) => a - b);
+      expect(new Set(tabs).size).toBe(tabs.length);
+      expect(labels).toEqual(tabs);
+    }
+  });
+
+  test('puts a tab on every glued edge pair of a prism: 1 + 2(n − 1) of them', () => {
+    for (const n of [3, 5, 8]) expect(bodyOf(prism(n, 2, 0.5)).tabs.length).toBe(1 + 2 * (n - 1));
+  });
+
+  test('keeps tabs clear of faces and of each other (checked with polygon-clipping)', () => {
+    for (const m of [prism(6, 2, 0.5), prism(24, 2, 0.5), demoModel('thermal-puck'), demoModel('wren-3u')]) {
+      const piece: Piece = bodyOf(m, 5);
+      const polys = [...piece.hinge.faces.map((f) => f.polygonMm), ...piece.tabs.map((t) => t.polygonMm)].filter((p) => p.length >= 3);
+      for (let i = 0; i < polys.length; i++) {
+        for (let j = i + 1; j < polys.length; j++) {
+          const overlap = areaOf(polygonClipping.intersection(clip(polys[i]!), clip(polys[j]!)));
+          expect(overlap, `${piece.id} polygons ${i} and ${j}`).toBeLessThan(1e-6);
+        }
+      }
+      // The outline is the union of faces and tabs (reference library's union against ours).
+      const union = areaOf(polygonClipping.union(clip(polys[0]!), ...polys.slice(1).map(clip)));
+      expect(Math.abs(ringArea(piece.outlineMm.map((p) => [p[0], p[1]]))) ).toBeCloseTo(union, 4);
+    }
+  });
+
+  test('widens tabs on heavier paper', () => {
+    const light = bodyOf(prism(6, 2, 0.5), 5, 80), heavy = bodyOf(prism(6, 2, 0.5), 5, 300);
+    const depth = (p: Piece) => Math.max(...p.tabs[0]!.polygonMm.map((v) => Math.abs(v[0] - p.tabs[0]!.polygonMm[0]![0])));
+    expect(depth(heavy)).toBeGreaterThan(depth(light));
+  });
+});
