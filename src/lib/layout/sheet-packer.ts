@@ -18,7 +18,8 @@ import {
   sheetFurnitureLayout,
   sheetFurniturePrintable,
 } from './sheet-furniture';
-import { TILE_OVERLAP_MM, tilingPiece } from './tiling';
+import { TILE_CAPTION_MM, TILE_OVERLAP_MM, tilingPiece } from './tiling';
+import type { PieceTile } from './tiling';
 import type { KitLayout, LaidOutSheet, RectMm, SheetSize } from './types';
 
 /** The most sheets one kit may have; more is refused with advice (issue 4). */
@@ -41,11 +42,14 @@ interface PackItem {
   rotationRad: number;
   widthMm: number;
   heightMm: number;
+  /** A tile of a large piece, laid out with its window's top-left corner at the sheet origin. */
+  tile?: PieceTile;
 }
 
 /**
  * Sheets holding `copies` of every piece, inside the printable margin and clear of the furniture, numbered
- * from 1; no pieces gives one empty sheet (it still carries the legend). Throws InputError when more than
+ * from 1; no pieces gives one empty sheet (it still carries the legend). Tiles of large pieces are packed
+ * like pieces (without quarter turns), so short tiles share sheets. Throws InputError when more than
  * MAX_SHEETS would be needed.
  */
 export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): LaidOutSheet[] {
@@ -54,28 +58,36 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
   const freeFirst = freeSpaceRects(printable, sheetFurnitureLayout(printable, options.units, true).obstacles);
   const freeOther = freeSpaceRects(printable, sheetFurnitureLayout(printable, options.units, false).obstacles);
   const tileWindow: RectMm = {
-    ...printable,
-    heightMm: printable.heightMm - sheetFurnitureCheckSquareMm(options.units) - SHEET_FURNITURE_GAP_MM,
+    xMm: 0,
+    yMm: 0,
+    widthMm: printable.widthMm,
+    heightMm:
+      printable.heightMm - sheetFurnitureCheckSquareMm(options.units) - SHEET_FURNITURE_GAP_MM - TILE_CAPTION_MM,
   };
-  const packed: PackItem[] = [];
-  const tiled: PackItem[] = [];
+  const overlap = options.overlapMm ?? TILE_OVERLAP_MM;
+  const items: PackItem[] = [];
+  let letter = 0;
   for (const piece of pieces) {
     const rotationRad = pieceOrientationRad(piece.outlineMm);
     const box = placementBounds({ xMm: 0, yMm: 0, rotationRad, mirrored: false }, piece);
     const item = { piece, rotationRad, widthMm: box.widthMm, heightMm: box.heightMm };
-    (freeOther.some((r) => boxFits(item, r)) ? packed : tiled).push(item);
+    if (freeOther.some((r) => boxFits(item, r))) {
+      for (let copy = 0; copy < options.copies; copy++) items.push(item);
+      continue;
+    }
+    for (let copy = 0; copy < options.copies; copy++) {
+      for (const tile of tilingPiece(piece, rotationRad, tileWindow, overlap, letter)) {
+        letter += tile.alignmentMarks.length / 2;
+        const w = tile.placement.tile!.windowMm;
+        items.push({ piece, rotationRad, widthMm: w.widthMm, heightMm: w.heightMm + TILE_CAPTION_MM, tile });
+      }
+    }
   }
-  const tilesPerCopy = tiled.reduce(
-    (n, item) => n + tilingPiece(item.piece, item.rotationRad, tileWindow, options.overlapMm).length,
-    0,
-  );
   const usableArea = freeOther.reduce((a, r) => Math.max(a, r.widthMm * r.heightMm), 0);
-  const packedArea = packed.reduce((a, i) => a + (i.widthMm + spacing) * (i.heightMm + spacing), 0);
-  const lowerBound = Math.ceil((options.copies * packedArea) / usableArea) + options.copies * tilesPerCopy;
-  if (lowerBound > MAX_SHEETS) throw sheetPackTooMany(lowerBound, options);
+  const area = items.reduce((a, i) => a + (i.widthMm + spacing) * (i.heightMm + spacing), 0);
+  const lowerBound = Math.ceil(area / usableArea);
+  if (lowerBound > MAX_SHEETS) throw sheetPackTooMany(lowerBound, pieces, options);
 
-  const items: PackItem[] = [];
-  for (let copy = 0; copy < options.copies; copy++) items.push(...packed);
   items.sort(
     (a, b) =>
       Math.max(b.widthMm, b.heightMm) - Math.max(a.widthMm, a.heightMm) ||
@@ -94,40 +106,42 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
     bin.freeRects = free.map((r) => new Rectangle(r.widthMm + spacing, r.heightMm + spacing, r.xMm, r.yMm));
     const left: PackItem[] = [];
     for (const item of remaining) {
-      const rect = bin.add(item.widthMm, item.heightMm, null);
+      const rect = bin.add(new Rectangle(item.widthMm, item.heightMm, 0, 0, false, !item.tile));
       if (!rect) {
         left.push(item);
         continue;
       }
-      const rotationRad = rect.rot ? item.rotationRad + Math.PI / 2 : item.rotationRad;
-      sheet.placements.push({ pieceId: item.piece.id, ...placementAtCorner(item.piece, rotationRad, rect.x, rect.y) });
+      if (item.tile) sheetPackTile(sheet, item.tile, rect.x, rect.y);
+      else {
+        const rotationRad = rect.rot ? item.rotationRad + Math.PI / 2 : item.rotationRad;
+        sheet.placements.push({
+          pieceId: item.piece.id,
+          ...placementAtCorner(item.piece, rotationRad, rect.x, rect.y),
+        });
+      }
     }
-    // A piece that fits no empty sheet was sent to tiling above, so every round places something.
+    // Every item fits an empty sheet (pieces that do not were tiled above), so every round places something.
     if (left.length === remaining.length && remaining.length > 0)
       throw new Error('sheet-packer: no progress on an empty sheet');
     sheets.push(sheet);
     remaining = left;
   }
-  let letter = 0;
-  for (let copy = 0; copy < options.copies; copy++) {
-    for (const item of tiled) {
-      for (const tile of tilingPiece(
-        item.piece,
-        item.rotationRad,
-        tileWindow,
-        options.overlapMm ?? TILE_OVERLAP_MM,
-        letter,
-      )) {
-        const sheet = emptySheet(sheets.length + 1, options.sheetSize, printable);
-        sheet.placements.push(tile.placement);
-        sheet.alignmentMarks.push(...tile.alignmentMarks);
-        letter += tile.alignmentMarks.length;
-        sheets.push(sheet);
-      }
-    }
-  }
-  if (sheets.length > MAX_SHEETS) throw sheetPackTooMany(sheets.length, options);
+  if (sheets.length > MAX_SHEETS) throw sheetPackTooMany(sheets.length, pieces, options);
   return sheets;
+}
+
+/** Puts a tile laid out at the origin onto a sheet with its window's corner at (xMm, yMm). */
+function sheetPackTile(sheet: LaidOutSheet, tile: PieceTile, xMm: number, yMm: number) {
+  const p = tile.placement;
+  const t = p.tile!;
+  sheet.placements.push({
+    ...p,
+    xMm: p.xMm + xMm,
+    yMm: p.yMm + yMm,
+    tile: { ...t, windowMm: { ...t.windowMm, xMm: t.windowMm.xMm + xMm, yMm: t.windowMm.yMm + yMm } },
+  });
+  for (const m of tile.alignmentMarks)
+    sheet.alignmentMarks.push({ atMm: [m.atMm[0] + xMm, m.atMm[1] + yMm], letter: m.letter });
 }
 
 function boxFits(item: Pick<PackItem, 'widthMm' | 'heightMm'>, r: RectMm): boolean {
@@ -141,8 +155,16 @@ function emptySheet(number: number, size: SheetSize, printableMm: RectMm): LaidO
   return { number, widthMm: size.widthMm, heightMm: size.heightMm, printableMm, placements: [], alignmentMarks: [] };
 }
 
-function sheetPackTooMany(sheetCount: number, options: SheetPackOptions): InputError {
-  const perCopy = sheetCount / options.copies;
+function sheetPackTooMany(sheetCount: number, pieces: readonly Piece[], options: SheetPackOptions): InputError {
+  // Copies share sheets a little, so one copy packed alone gives an advice that is sure to work.
+  let perCopy = Infinity;
+  if (options.copies > 1) {
+    try {
+      perCopy = sheetPack(pieces, { ...options, copies: 1 }).length;
+    } catch {
+      perCopy = Infinity;
+    }
+  }
   const copiesThatFit = Math.floor(MAX_SHEETS / perCopy);
   const advice =
     copiesThatFit >= 1

@@ -10,6 +10,9 @@ import type { AlignmentMark, Placement, RectMm } from './types';
 /** Width of the strip two neighbouring tiles share, mm (common practice, no source). */
 export const TILE_OVERLAP_MM = 12;
 
+/** Band kept below each tile's window for its caption (which row and column it is), mm. */
+export const TILE_CAPTION_MM = 4;
+
 /** One tile of a piece: its placement (with `tile` set) and the marks printed on its sheet. */
 export interface PieceTile {
   placement: Placement;

@@ -10,6 +10,7 @@ import {
   sheetFurnitureFooterText,
   sheetFurnitureLayout,
 } from '../layout/sheet-furniture';
+import { TILE_CAPTION_MM } from '../layout/tiling';
 import type { KitLayout, LaidOutSheet, Placement, RectMm } from '../layout/types';
 import { GLUE_TINT, GUIDE_STYLE, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { qrRects } from './qr';
@@ -109,7 +110,12 @@ function upright(angleRad: number): number {
 function scenePieceTexts(scene: SheetScene, piece: Piece, placement: Placement) {
   const window = placement.tile?.windowMm;
   const box = placementBounds(placement, piece);
-  const sizeMm = Math.min(LABEL_SIZE_MM, Math.min(box.widthMm, box.heightMm) / 5);
+  // Average glyph advance of the font is about 0.6 em (from memory: DejaVu Sans Bold); keep the label inside.
+  const sizeMm = Math.min(
+    LABEL_SIZE_MM,
+    Math.min(box.widthMm, box.heightMm) / 5,
+    (0.8 * box.widthMm) / (0.6 * piece.label.length),
+  );
   const center = placementApply(placement, polygonCentroid(piece.hinge.faces[0]?.polygonMm ?? piece.outlineMm));
   if (sizeMm >= 1.2 && inside(center, window))
     scene.texts.push(text(piece.label, center, sizeMm, 'labels', { bold: true }));
@@ -147,8 +153,11 @@ function sceneTileGuides(scene: SheetScene, placement: Placement) {
       [w.xMm, w.yMm],
     ],
   });
-  const where = `Tile row ${tile.row + 1} of ${tile.rows}, column ${tile.col + 1} of ${tile.cols}: glue the shaded strip under the next tile, letters on letters`;
-  scene.texts.push(text(where, [w.xMm, b + 2.2], 2.4, 'furniture', { anchor: 'start' }));
+  const step = strips.length
+    ? ': glue the shaded strip under the next tile, letters on letters'
+    : ': lay it over the tiles before it';
+  const where = `Tile row ${tile.row + 1} of ${tile.rows}, column ${tile.col + 1} of ${tile.cols}${step}`;
+  scene.texts.push(text(where, [w.xMm, b + TILE_CAPTION_MM / 2], 2.2, 'furniture', { anchor: 'start' }));
 }
 
 function sceneFurniture(scene: SheetScene, kit: KitLayout, sheet: LaidOutSheet) {

@@ -14,6 +14,8 @@ function group(svg: string, id: string): string {
 describe('svgSheet', () => {
   const kit = fixtureKit('letter', 'us');
   const svg = svgSheet(kit, kit.sheets[0]!);
+  const cubeSheet = kit.sheets.find((s) => s.placements.some((p) => p.pieceId === 'cube'))!;
+  const cubeSvg = svgSheet(kit, cubeSheet);
 
   test('is sized in true millimetres with a viewBox in mm (215.9 × 279.4 for Letter, ASME Y14.1)', () => {
     expect(svg).toMatch(/<svg [^>]*width="215\.9mm" height="279\.4mm" viewBox="0 0 215\.9 279\.4"/);
@@ -22,12 +24,12 @@ describe('svgSheet', () => {
   test('has separate cut, mountain, valley, labels and artwork groups with the expected elements', () => {
     for (const id of ['cut', 'mountain-folds', 'valley-folds', 'labels', 'artwork', 'furniture'])
       expect(() => group(svg, id)).not.toThrow();
-    const pathsIn = (id: string) => (group(svg, id).match(/<path /g) ?? []).length;
-    const onSheet = kit.sheets[0]!.placements.length;
+    const pathsIn = (id: string) => (group(cubeSvg, id).match(/<path /g) ?? []).length;
+    const onSheet = cubeSheet.placements.length;
     expect(pathsIn('cut')).toBe(onSheet);
     expect(pathsIn('mountain-folds')).toBeGreaterThan(0);
     expect(pathsIn('valley-folds')).toBeGreaterThan(0);
-    expect((group(svg, 'labels').match(/<text /g) ?? []).length).toBeGreaterThanOrEqual(onSheet);
+    expect((group(cubeSvg, 'labels').match(/<text /g) ?? []).length).toBeGreaterThanOrEqual(onSheet);
   });
 
   test('keeps the cut group to stroked paths with no fill, text or other elements', () => {
@@ -42,6 +44,7 @@ describe('svgSheet', () => {
   test('places each outline where placementApply puts it (svg-path-commander bbox equals the placed box)', () => {
     const cutPaths = [...group(svg, 'cut').matchAll(/<path d="([^"]*)"/g)].map((m) => m[1]!);
     kit.sheets[0]!.placements.forEach((placement, i) => {
+      if (placement.tile) return;
       const piece = kit.pieces.find((p) => p.id === placement.pieceId)!;
       const pts = placementOutline(placement, piece);
       const box = SVGPathCommander.getPathBBox(cutPaths[i]!);

@@ -1,0 +1,109 @@
+/**
+ * The kit pipeline: a validated request → patterns (model engine) → sheet layout → PDF, SVG per sheet,
+ * STL and JSON, with a content hash of the inputs and engine version. Pure; the caller passes the font bytes.
+ */
+import { modelMesh } from '../geometry/model-mesh';
+import { modelPatterns } from '../geometry/model-patterns';
+import type { Model } from '../geometry/model-schema';
+import type { ModelMesh, Piece, WireBoomThread } from '../geometry/types';
+import { cutListRows } from '../layout/cut-list';
+import { sheetPack } from '../layout/sheet-packer';
+import { sheetSize } from '../layout/sheet-sizes';
+import type { KitLayout } from '../layout/types';
+import { kitJson } from '../render/kit-json';
+import { pdfKit } from '../render/pdf-kit';
+import type { PdfFonts } from '../render/pdf-kit';
+import { stlBinary } from '../render/stl';
+import { svgSheet } from '../render/svg-sheet';
+import { contentHash } from './content-hash';
+import { ENGINE_VERSION } from './engine-version';
+import type { KitRequest } from './kit-request';
+
+/** The model engine as the pipeline uses it (src/lib/geometry provides it; tests may pass fixtures). */
+export interface KitEngine {
+  patterns(model: Model, scaleDenominator: number, paperGsm: number): { pieces: Piece[]; threads: WireBoomThread[] };
+  mesh(model: Model, scaleDenominator: number): ModelMesh;
+}
+
+/** The model engine of src/lib/geometry. */
+export const GEOMETRY_KIT_ENGINE: KitEngine = {
+  patterns: (model, scaleDenominator, paperGsm) => modelPatterns(model, { scaleDenominator, paperGsm }),
+  mesh: modelMesh,
+};
+
+export type KitStage = 'patterns' | 'layout' | 'pdf' | 'svg' | 'stl' | 'json';
+export type KitOutput = 'pdf' | 'svg' | 'stl' | 'json';
+
+export interface KitBuildOptions {
+  /** The model engine; src/lib/geometry's modelPatterns and modelMesh when left out. */
+  engine?: KitEngine;
+  /** Which files to make; all four when left out. */
+  outputs?: readonly KitOutput[];
+  /** Called as each stage ends (fraction 1) and, for the PDF, as it starts (fraction 0). */
+  onProgress?: (stage: KitStage, fraction: number) => void;
+  /** Cancels between stages: the promise rejects with the signal's reason. */
+  signal?: AbortSignal;
+}
+
+export interface KitBuild {
+  layout: KitLayout;
+  /** SHA-256 hex of the request and ENGINE_VERSION. */
+  contentHash: string;
+  pdf?: Uint8Array;
+  svgSheets?: string[];
+  stl?: Uint8Array;
+  json?: string;
+}
+
+/**
+ * Builds a kit from a request already parsed by KitRequestSchema; throws InputError (from the engine or the
+ * packer) when the request cannot make a kit, e.g. more than MAX_SHEETS sheets.
+ */
+export async function buildKit(request: KitRequest, fonts: PdfFonts, options: KitBuildOptions = {}): Promise<KitBuild> {
+  const engine = options.engine ?? GEOMETRY_KIT_ENGINE;
+  const outputs = new Set(options.outputs ?? ['pdf', 'svg', 'stl', 'json']);
+  const step = async (stage: KitStage) => {
+    options.onProgress?.(stage, 1);
+    // Yield so a UI can repaint and a cancel can land between stages.
+    await Promise.resolve();
+    options.signal?.throwIfAborted();
+  };
+  options.signal?.throwIfAborted();
+  const hash = contentHash(request);
+  const { pieces, threads } = engine.patterns(request.model, request.scaleDenominator, request.paperGsm);
+  await step('patterns');
+  const size = sheetSize(request.sheetSizeId);
+  const sheets = sheetPack(pieces, { sheetSize: size, units: request.units, copies: request.copies });
+  const layout: KitLayout = {
+    title: request.title ?? request.model.name,
+    scaleDenominator: request.scaleDenominator,
+    sheetSize: size,
+    units: request.units,
+    pieces,
+    sheets,
+    threads,
+    cutList: size.kind === 'stock' ? cutListRows(pieces, sheets) : [],
+    qrUrl: request.qrUrl,
+    engineVersion: ENGINE_VERSION,
+  };
+  await step('layout');
+  const build: KitBuild = { layout, contentHash: await hash };
+  if (outputs.has('pdf')) {
+    options.onProgress?.('pdf', 0);
+    build.pdf = pdfKit(layout, fonts);
+    await step('pdf');
+  }
+  if (outputs.has('svg')) {
+    build.svgSheets = sheets.map((sheet) => svgSheet(layout, sheet));
+    await step('svg');
+  }
+  if (outputs.has('stl')) {
+    build.stl = stlBinary(engine.mesh(request.model, request.scaleDenominator));
+    await step('stl');
+  }
+  if (outputs.has('json')) {
+    build.json = kitJson(layout, build.contentHash);
+    await step('json');
+  }
+  return build;
+}

@@ -1,0 +1,46 @@
+/**
+ * What a teacher asks for when generating a kit: a model, a scale, a sheet, paper weight, copies, units and
+ * the kit page the QR code points at. Validated once at the boundary (API route or island).
+ */
+import { z } from 'zod';
+import { ModelSchema } from '../geometry/model-schema';
+import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
+import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
+import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
+
+/** Kits per class: one per team; 40 teams is more than any class has (common practice, no source). */
+export const KIT_COPIES_MAX = 40;
+
+export const KitRequestSchema = z.object({
+  /** The spacecraft, in real metres. */
+  model: ModelSchema,
+  /** Title printed on every sheet; the model's name when left out. */
+  title: z.string().trim().min(1).max(80).optional(),
+  /** The kit is 1:N of the real spacecraft; N ≥ 1. */
+  scaleDenominator: z
+    .number({ invalid_type_error: 'scale must be a number N of 1:N' })
+    .finite('scale must be a finite number')
+    .min(1, 'scale must be 1:1 or smaller, e.g. 20 for 1:20')
+    .max(SCALE_DENOMINATOR_MAX, `scale must be at most 1:${SCALE_DENOMINATOR_MAX}`),
+  /** Paper or stock: a5, a4, a3, letter, legal, tabloid or panel-1220x2440. */
+  sheetSizeId: z.enum(SHEET_SIZE_IDS),
+  /** Paper weight in g/m², which sets tab widths and fold allowances. */
+  paperGsm: z
+    .number()
+    .min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`)
+    .max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`)
+    .default(160),
+  /** Kits per class (one per team). */
+  copies: z
+    .number()
+    .int('copies must be a whole number')
+    .min(1, 'copies must be at least 1')
+    .max(KIT_COPIES_MAX, `copies must be at most ${KIT_COPIES_MAX}`)
+    .default(1),
+  /** Units for printed sizes and the check square. */
+  units: z.enum(['metric', 'us']).default('metric'),
+  /** The kit page the first sheet's QR code links to. */
+  qrUrl: z.string().url('qrUrl must be an absolute URL').max(300),
+});
+export type KitRequest = z.infer<typeof KitRequestSchema>;
+export type KitRequestInput = z.input<typeof KitRequestSchema>;
