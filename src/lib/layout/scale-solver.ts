@@ -223,6 +223,6 @@ export function solveKitScale(
     paper,
     venue: room,
     alternatives,
-    explanation: `No one scale does both: to fit the ${venue.label} the model must be at 1:${room.usualScaleDenominator} or smaller, but below 1:${paper.smallestValidDenominator} its smallest pieces or tabs are too small to cut and glue. Build the paper model at 1:${paper.scaleDenominator} and lay the booms out separately at 1:${room.scaleDenominator}, clearly labelled as a different scale.`,
+    explanation: `No one scale does both: to fit the ${venue.label} the model must be at 1:${room.scaleDenominator} or smaller, but below 1:${paper.smallestValidDenominator} its smallest pieces or tabs are too small to cut and glue. Build the paper model at 1:${paper.scaleDenominator} and lay the booms out separately at 1:${room.scaleDenominator}, clearly labelled as a different scale.`,
   };
 }

@@ -12,6 +12,7 @@ import { scaleUsualAtLeast } from './scale-ratios';
 
 export interface Venue {
   id: string;
+  /** Lower-case words that read after "the" ("fits the classroom (9 × 7 m)"). */
   label: string;
   lengthMm: number;
   widthMm: number;
@@ -23,28 +24,28 @@ export const VENUES = {
   // Common practice, no source: a typical classroom floor, with desks pushed back.
   classroom: {
     id: 'classroom',
-    label: 'Classroom (9 × 7 m)',
+    label: 'classroom (9 × 7 m)',
     lengthMm: 9000,
     widthMm: 7000,
     source: 'common practice, no source',
   },
   'gym-fiba': {
     id: 'gym-fiba',
-    label: 'Gym, FIBA basketball court (28 × 15 m)',
+    label: 'gym with a FIBA basketball court (28 × 15 m)',
     lengthMm: 28000,
     widthMm: 15000,
     source: 'FIBA Official Basketball Rules, art. 2',
   },
   'gym-nfhs': {
     id: 'gym-nfhs',
-    label: 'Gym, high-school basketball court (84 × 50 ft)',
+    label: 'gym with a high-school basketball court (84 × 50 ft)',
     lengthMm: feetToMm(84),
     widthMm: feetToMm(50),
     source: 'NFHS basketball rules, rule 1',
   },
   'football-field': {
     id: 'football-field',
-    label: 'Football field with end zones (360 × 160 ft)',
+    label: 'football field with end zones (360 × 160 ft)',
     lengthMm: feetToMm(360),
     widthMm: feetToMm(160),
     source: 'NFHS football rules, rule 1',
@@ -72,7 +73,7 @@ export const CustomVenueSchema = z.object({
 export function venueCustom({ lengthM, widthM }: z.infer<typeof CustomVenueSchema>): Venue {
   return {
     id: 'custom',
-    label: `Custom (${lengthM} × ${widthM} m)`,
+    label: `space of ${lengthM} × ${widthM} m`,
     lengthMm: lengthM * 1000,
     widthMm: widthM * 1000,
     source: 'entered by the teacher',
