@@ -16,6 +16,8 @@ import {
   iso14644SamplingLocations,
 } from './iso-14644';
 
+/** Largest JSON clean-room request, bytes. */
+export const CLEANROOM_JSON_MAX_BYTES = 1_000_000;
 export const CLEANROOM_MAX_LOCATIONS = 200;
 export const CLEANROOM_MAX_SAMPLES_PER_LOCATION = 20;
 export const CLEANROOM_MAX_AREA_M2 = 100_000;

@@ -6,6 +6,8 @@
  */
 import { z } from 'zod';
 
+/** Largest JSON equilibrium-temperature request, bytes. */
+export const EQUILIBRIUM_JSON_MAX_BYTES = 10_000;
 /** Stefan–Boltzmann constant, W m⁻² K⁻⁴ (CODATA 2018, exact). */
 export const STEFAN_BOLTZMANN_W_PER_M2_K4 = 5.670374419e-8;
 /** Total solar irradiance at 1 AU, W/m² (Kopp & Lean, Geophys. Res. Lett. 38, L01706, 2011). */

@@ -8,6 +8,8 @@ import { z } from 'zod';
 import { InputError } from '../errors';
 import { linearFit } from './least-squares';
 
+/** Largest JSON magnetic request, bytes. */
+export const MAGNETIC_JSON_MAX_BYTES = 200_000;
 /** Vacuum permeability μ0, N/A² (CODATA 2018). */
 export const MU0_N_PER_A2 = 1.25663706212e-6;
 /** Typical magnitude of Earth's surface field, µT (from memory: World Magnetic Model, about 25–65 µT). */

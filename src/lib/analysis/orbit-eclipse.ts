@@ -5,6 +5,8 @@
  */
 import { z } from 'zod';
 
+/** Largest JSON eclipse request, bytes. */
+export const ORBIT_ECLIPSE_JSON_MAX_BYTES = 10_000;
 /** WGS 84 equatorial radius, km (NIMA TR8350.2). */
 export const EARTH_RADIUS_KM = 6378.137;
 /** WGS 84 Earth gravitational parameter GM, km³/s² (NIMA TR8350.2). */

@@ -6,6 +6,8 @@
 import { z } from 'zod';
 import { InputError } from '../errors';
 
+/** Largest JSON PSD-profile request, bytes. */
+export const PSD_PROFILE_JSON_MAX_BYTES = 50_000;
 /** Most breakpoints a profile may have. */
 export const PSD_PROFILE_MAX_BREAKPOINTS = 100;
 /** Frequency bounds for a breakpoint, Hz. */

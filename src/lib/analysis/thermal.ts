@@ -9,6 +9,8 @@ import { linearFit } from './least-squares';
 import { newtonCoolingFit, type NewtonCoolingFit } from './newton-cooling';
 import { timeSeriesAssertIncreasing } from './time-series';
 
+/** Largest JSON thermal request, bytes. */
+export const THERMAL_JSON_MAX_BYTES = 4_000_000;
 /** Most runs in one request. */
 export const THERMAL_MAX_RUNS = 8;
 /** Most readings in one run. */

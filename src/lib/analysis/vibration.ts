@@ -27,6 +27,8 @@ import {
 export const VIBRATION_MAX_SAMPLES = 400_000;
 /** Fewest samples: WELCH_MIN_SEGMENTS half-overlapping segments of WELCH_MIN_SEGMENT_LENGTH. */
 export const VIBRATION_MIN_SAMPLES = ((WELCH_MIN_SEGMENTS + 1) * WELCH_MIN_SEGMENT_LENGTH) / 2;
+/** Largest JSON vibration request, bytes (send longer records as CSV text). */
+export const VIBRATION_JSON_MAX_BYTES = 16_000_000;
 /** Most frequency bands a request may ask for. */
 export const VIBRATION_MAX_BANDS = 20;
 /** How many dominant frequencies are reported. */

@@ -1,0 +1,15 @@
+/**
+ * POST /api/analysis/cleanroom — the clean-room tool. Body: JSON CleanroomInputSchema (src/lib/analysis/cleanroom.ts), at most
+ * CLEANROOM_JSON_MAX_BYTES bytes (413 above). Answers { result, savedResult }.
+ */
+import { endpoint } from '../../../lib/http/endpoint';
+import { readJson } from '../../../lib/http/respond';
+import { CLEANROOM_JSON_MAX_BYTES, CleanroomInputSchema, cleanroomClassify } from '../../../lib/analysis/cleanroom';
+import { cleanroomSavedResult } from '../../../lib/analysis/saved-result';
+import { parseInput } from '../../../lib/validation';
+
+export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {
+  const input = parseInput(CleanroomInputSchema, await readJson(request, CLEANROOM_JSON_MAX_BYTES));
+  const result = cleanroomClassify(input);
+  return { result, savedResult: cleanroomSavedResult(result) };
+});

@@ -1,0 +1,15 @@
+/**
+ * POST /api/analysis/orbit-eclipse — orbit period and eclipse length. Body: JSON OrbitEclipseInputSchema (src/lib/analysis/orbit-eclipse.ts), at most
+ * ORBIT_ECLIPSE_JSON_MAX_BYTES bytes (413 above). Answers { result, savedResult }.
+ */
+import { endpoint } from '../../../lib/http/endpoint';
+import { readJson } from '../../../lib/http/respond';
+import { ORBIT_ECLIPSE_JSON_MAX_BYTES, OrbitEclipseInputSchema, orbitEclipse } from '../../../lib/analysis/orbit-eclipse';
+import { orbitEclipseSavedResult } from '../../../lib/analysis/saved-result';
+import { parseInput } from '../../../lib/validation';
+
+export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {
+  const input = parseInput(OrbitEclipseInputSchema, await readJson(request, ORBIT_ECLIPSE_JSON_MAX_BYTES));
+  const result = orbitEclipse(input);
+  return { result, savedResult: orbitEclipseSavedResult(input, result) };
+});
