@@ -47,6 +47,7 @@ export function iso14644Limit(classN: number, sizeUm: number): number | null {
 
 // Annex A, Table A.1: [largest area in m², minimum number of sampling locations].
 // from memory: ISO 14644-1:2015 Table A.1 rows — check against the standard.
+// prettier-ignore
 const TABLE_A1: readonly (readonly [number, number])[] = [
   [2, 1], [4, 2], [6, 3], [8, 4], [10, 5], [24, 6], [28, 7], [32, 8], [36, 9], [52, 10],
   [56, 11], [64, 12], [68, 13], [72, 14], [76, 15], [104, 16], [108, 17], [116, 18], [148, 19],
