@@ -6,9 +6,14 @@
 import type { Vec2Mm } from './types';
 import { pointsBounds, vec2Add, vec2Cross, vec2Length, vec2Scale, vec2Sub, vec2Unit } from './vec';
 
-/** Side slants tried, radians from the edge's perpendicular: gentle first, steeper where a neighbour crowds. */
-const TAPERS_RAD = [30, 45, 60, 70, 76, 82].map((d) => (d * Math.PI) / 180);
-/** The clearance probe is this much wider than the tab it tests (radians), so fitted tabs never touch. */
+/**
+ * Side slants tried at the (a, b) ends, degrees from the edge's perpendicular: gentle first, then one end
+ * steep where a neighbouring face leaves only a narrow wedge (a cap beside its hinge wall), then both.
+ */
+const STEEP_DEG = [60, 76, 82, 86, 88, 89.5];
+const TAPER_PAIRS_RAD = [[30, 30], [45, 45], ...STEEP_DEG.flatMap((d) => [[30, d], [d, 30]]), ...STEEP_DEG.map((d) => [d, d])]
+  .map(([a, b]) => [(a! * Math.PI) / 180, (b! * Math.PI) / 180] as const);
+/** The clearance probe's sides lean out by this much more (radians, at most half the side's own angle). */
 const PROBE_WIDEN_RAD = (3 * Math.PI) / 180;
 const BISECTION_STEPS = 16;
 
@@ -25,10 +30,11 @@ export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: r
   const edgeMm = vec2Length(vec2Sub(b, a));
   const near = obstacles.filter((o) => boundsNear(o, a, b, depthWantedMm));
   let best: FittedTab = { polygonMm: [], depthMm: 0 };
-  for (const taper of TAPERS_RAD) {
-    const depthCap = Math.min(depthWantedMm, (0.98 * edgeMm) / (2 * Math.tan(taper)));
+  for (const taper of TAPER_PAIRS_RAD) {
+    const depthCap = Math.min(depthWantedMm, (0.98 * edgeMm) / (Math.tan(taper[0]) + Math.tan(taper[1])));
     if (depthCap <= best.depthMm) continue;
-    const fits = (d: number) => !near.some((o) => convexOverlap(tabPolygon(a, b, d, taper - PROBE_WIDEN_RAD, true), o));
+    const probe = taper.map((t) => t - Math.min(PROBE_WIDEN_RAD, (Math.PI / 2 - t) / 2)) as unknown as readonly [number, number];
+    const fits = (d: number) => !near.some((o) => convexOverlap(tabPolygon(a, b, d, probe, true), o));
     let depth = depthCap;
     if (!fits(depth)) {
       let lo = 0;
@@ -47,12 +53,11 @@ export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: r
 }
 
 /** The trapezoid [b, a, a', b'] outside edge a→b; the probe form lifts its base corners off the edge. */
-function tabPolygon(a: Vec2Mm, b: Vec2Mm, depthMm: number, taperRad: number, probe: boolean): Vec2Mm[] {
+function tabPolygon(a: Vec2Mm, b: Vec2Mm, depthMm: number, taperRad: readonly [number, number], probe: boolean): Vec2Mm[] {
   const dir = vec2Unit(vec2Sub(b, a));
   const out: Vec2Mm = [dir[1], -dir[0]];
-  const inset = depthMm * Math.tan(Math.max(0, taperRad));
-  const a2 = vec2Add(vec2Add(a, vec2Scale(out, depthMm)), vec2Scale(dir, inset));
-  const b2 = vec2Add(vec2Sub(b, vec2Scale(dir, inset)), vec2Scale(out, depthMm));
+  const a2 = vec2Add(vec2Add(a, vec2Scale(out, depthMm)), vec2Scale(dir, depthMm * Math.tan(Math.max(0, taperRad[0]))));
+  const b2 = vec2Add(vec2Sub(b, vec2Scale(dir, depthMm * Math.tan(Math.max(0, taperRad[1])))), vec2Scale(out, depthMm));
   if (!probe) return [b, a, a2, b2];
   const lift = 1e-3 * depthMm;
   const a1 = vec2Add(a, vec2Scale(vec2Unit(vec2Sub(a2, a)), lift));

@@ -77,6 +77,26 @@ describe('bodyNet (through modelPatterns)', () => {
     }
   });
 
+  test('gives every glued pair a real tab, even beside a many-sided cap', () => {
+    for (const facets of [6, 24, 64, 256]) {
+      const piece = bodyOf(model({ body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.15, facets } }), 5);
+      for (const t of piece.tabs) expect(Math.abs(ringArea(t.polygonMm.map((p) => [p[0], p[1]]))), `${facets} facets, tab ${t.number}`).toBeGreaterThan(0);
+    }
+  });
+
+  test("folds a deployable panel's hinge strip as a valley when the panel stands straight out", () => {
+    const panel = modelPatterns(demoModel('wren-3u'), { scaleDenominator: 5, paperGsm: 160 }).pieces.find((p) => p.partKind === 'deployable-panel')!;
+    const strip = panel.folds.find((f) => f.tabNumber !== undefined)!;
+    expect(strip.kind).toBe('valley');
+    expect(strip.angleRad).toBeCloseTo(-Math.PI / 2, 12);
+  });
+
+  test('numbers the assembly steps body first, then one step per appendage', () => {
+    const pieces = modelPatterns(demoModel('skein-probe'), { scaleDenominator: 20, paperGsm: 160 }).pieces;
+    expect(pieces[0]!.partKind).toBe('body');
+    expect(pieces.map((p) => p.assemblyStep)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+  });
+
   test('widens tabs on heavier paper', () => {
     const light = bodyOf(prism(6, 2, 0.5), 5, 80), heavy = bodyOf(prism(6, 2, 0.5), 5, 300);
     const depth = (p: Piece) => Math.max(...p.tabs[0]!.polygonMm.map((v) => Math.abs(v[0] - p.tabs[0]!.polygonMm[0]![0])));
