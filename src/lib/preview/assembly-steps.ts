@@ -1,0 +1,70 @@
+/**
+ * The assembly steps of a kit in order: the pieces of each step, the numbered tabs to glue (the numbers
+ * printed on the sheets) and a plain-text description for screen readers.
+ */
+import type { PartKind, Piece } from '../geometry/types';
+
+export interface AssemblyStep {
+  /** 1-based position in the build, contiguous even if the pieces' step numbers have gaps. */
+  number: number;
+  pieceIds: string[];
+  pieceLabels: string[];
+  /** Tab numbers to glue in this step, ascending; each number of the kit appears in exactly one step. */
+  tabNumbers: number[];
+  /** One or two plain sentences naming the pieces, what to do and the tab numbers. */
+  description: string;
+}
+
+/** The steps of `pieces`, ordered by assemblyStep then by the pieces' order; no pieces gives []. */
+export function assemblySteps(pieces: readonly Piece[]): AssemblyStep[] {
+  const byStep = new Map<number, Piece[]>();
+  for (const p of pieces) byStep.set(p.assemblyStep, [...(byStep.get(p.assemblyStep) ?? []), p]);
+  const ordered = [...byStep.keys()].sort((a, b) => a - b);
+  return ordered.map((key, i) => {
+    const group = byStep.get(key)!;
+    const tabNumbers = [...new Set(group.flatMap((p) => p.tabs.map((t) => t.number)))].sort((a, b) => a - b);
+    const action = group.map((p) => assemblyAction(p.partKind, p.label, p.tabs.map((t) => t.number).sort((a, b) => a - b))).join(' ');
+    return {
+      number: i + 1,
+      pieceIds: group.map((p) => p.id),
+      pieceLabels: group.map((p) => p.label),
+      tabNumbers,
+      description: `Step ${i + 1} of ${ordered.length}: ${group.map((p) => p.label).join(', ')}. ${action}`,
+    };
+  });
+}
+
+/** Tab numbers in words with runs collapsed: [1, 2, 3, 5] → "tabs 1–3 and 5"; [] → "no tabs". */
+export function tabNumbersLabel(numbers: readonly number[]): string {
+  if (numbers.length === 0) return 'no tabs';
+  const sorted = [...numbers].sort((a, b) => a - b);
+  const runs: string[] = [];
+  let start = sorted[0]!;
+  for (let i = 1; i <= sorted.length; i++) {
+    if (i < sorted.length && sorted[i] === sorted[i - 1]! + 1) continue;
+    const end = sorted[i - 1]!;
+    runs.push(end === start ? `${start}` : end === start + 1 ? `${start} and ${end}` : `${start}–${end}`);
+    if (i < sorted.length) start = sorted[i]!;
+  }
+  const list = runs.length > 1 ? `${runs.slice(0, -1).join(', ')} and ${runs.at(-1)}` : runs[0]!;
+  return `${sorted.length === 1 ? 'tab' : 'tabs'} ${list}`;
+}
+
+function assemblyAction(kind: PartKind, label: string, tabs: number[]): string {
+  const t = tabNumbersLabel(tabs);
+  switch (kind) {
+    case 'body':
+      return `Fold along every fold line, then glue ${t}, each onto the edge printed with the same number.`;
+    case 'rigid-boom':
+      return `Roll the ${label.toLowerCase()} into a tube and glue its overlap strip (${t}) under the edge with the same number, then stand it on the body.`;
+    case 'dish':
+    case 'nozzle':
+      return `Curl the ${label.toLowerCase()} into a cone and glue ${t} under the edge with the same number, then glue it onto the body.`;
+    case 'wire-boom-anchor':
+      return `Lay the thread where the body is printed with ${tabs.join(', ')}, fold the anchor over it and glue ${t} there.`;
+    case 'deployable-panel':
+      return `Fold the hinge strip and glue ${t} onto the body where the same number is printed.`;
+    case 'solar-panel':
+      return `Glue the ${label.toLowerCase()} flat onto its face of the body${tabs.length > 0 ? `, with ${t}` : ''}.`;
+  }
+}
