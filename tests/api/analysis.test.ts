@@ -17,7 +17,12 @@ interface Answer {
 }
 
 async function post(path: string, body: string, contentType: string): Promise<Answer> {
-  const res = await fetch(`${BASE}/api/analysis/${path}`, { method: 'POST', headers: { 'content-type': contentType }, body, signal: AbortSignal.timeout(20_000) });
+  const res = await fetch(`${BASE}/api/analysis/${path}`, {
+    method: 'POST',
+    headers: { 'content-type': contentType },
+    body,
+    signal: AbortSignal.timeout(20_000),
+  });
   expect(res.headers.get('content-type')).toMatch(/application\/json/);
   return { status: res.status, body: await res.json() };
 }
@@ -33,7 +38,10 @@ function expectError(a: Answer, status: number, code: string, message?: RegExp):
 }
 
 function shakeCsv(n: number, f0 = 12.5): string {
-  const rows = Array.from({ length: n }, (_, i) => `${(i / FS).toFixed(2)},${(0.4 * Math.sin((2 * Math.PI * f0 * i) / FS)).toFixed(5)},0.01,1`);
+  const rows = Array.from(
+    { length: n },
+    (_, i) => `${(i / FS).toFixed(2)},${(0.4 * Math.sin((2 * Math.PI * f0 * i) / FS)).toFixed(5)},0.01,1`,
+  );
   return ['time_s,x_g,y_g,z_g', ...rows].join('\n');
 }
 
@@ -86,7 +94,12 @@ describe('POST /api/analysis/vibration', () => {
 
   it('analyses a JSON record', async () => {
     const timeS = Array.from({ length: 1000 }, (_, i) => i / FS);
-    const a = await postJson('vibration', { timeS, x: timeS.map((t) => Math.sin(2 * Math.PI * 5 * t)), y: timeS.map(() => 0), z: timeS.map(() => 9.8) });
+    const a = await postJson('vibration', {
+      timeS,
+      x: timeS.map((t) => Math.sin(2 * Math.PI * 5 * t)),
+      y: timeS.map(() => 0),
+      z: timeS.map(() => 9.8),
+    });
     expect(a.status).toBe(200);
     expect(a.body.result.units).toEqual({ input: 'm/s2', source: 'gravity' });
   });
@@ -125,7 +138,12 @@ describe('POST /api/analysis/vibration', () => {
   });
 
   it('answers 400 for a wrong content type and for malformed JSON', async () => {
-    expectError(await post('vibration', '<record/>', 'application/xml'), 400, 'invalid_input', /application\/json.*text\/csv/);
+    expectError(
+      await post('vibration', '<record/>', 'application/xml'),
+      400,
+      'invalid_input',
+      /application\/json.*text\/csv/,
+    );
     expectError(await post('vibration', '{"timeS": [0,', 'application/json'), 400, 'invalid_input', /not valid JSON/);
   });
 
@@ -140,7 +158,12 @@ describe('POST /api/analysis/vibration', () => {
   });
 
   it('answers 413 for more rows than the tool reads, even under the byte cap', async () => {
-    expectError(await postCsv('vibration', 'time,x,y,z\n' + '0,0,0,1\n'.repeat(400_001)), 413, 'too_large', /400,000 data rows/);
+    expectError(
+      await postCsv('vibration', 'time,x,y,z\n' + '0,0,0,1\n'.repeat(400_001)),
+      413,
+      'too_large',
+      /400,000 data rows/,
+    );
   });
 });
 
@@ -148,7 +171,9 @@ describe('POST /api/analysis/thermal', () => {
   const timeS = Array.from({ length: 40 }, (_, i) => i * 30);
   it('fits a run and returns τ with its uncertainty', async () => {
     // Incropera et al., ch. 5: T = T∞ + (T0 − T∞)·e^(−t/τ), noise-free, τ = 400 s.
-    const a = await postJson('thermal', { runs: [{ label: 'cooler', timeS, temperatureC: timeS.map((t) => 6 + 14 * Math.exp(-t / 400)) }] });
+    const a = await postJson('thermal', {
+      runs: [{ label: 'cooler', timeS, temperatureC: timeS.map((t) => 6 + 14 * Math.exp(-t / 400)) }],
+    });
     expect(a.status).toBe(200);
     expect(a.body.result.runs[0].fit.timeConstantS).toBeCloseTo(400, 2);
     expect(a.body.savedResult.plot.kind).toBe('line');
@@ -157,14 +182,22 @@ describe('POST /api/analysis/thermal', () => {
   it('reads CSV and refuses text and time going backwards', async () => {
     expect((await postCsv('thermal', 'time (min),lamp\n0,20\n1,24\n2,27\n3,29\n4,30\n5,30.5\n')).status).toBe(200);
     expectError(await postCsv('thermal', 'time,lamp\n0,20\n1,hot\n'), 400, 'invalid_input', /not a number/);
-    expectError(await postJson('thermal', { runs: [{ label: 'a', timeS: [0, 60, 30], temperatureC: [20, 21, 22] }] }), 400, 'invalid_input', /backwards/);
+    expectError(
+      await postJson('thermal', { runs: [{ label: 'a', timeS: [0, 60, 30], temperatureC: [20, 21, 22] }] }),
+      400,
+      'invalid_input',
+      /backwards/,
+    );
   });
 });
 
 describe('POST /api/analysis/cleanroom', () => {
   it('classifies a room and states the sampling locations its area needs', async () => {
     // ISO 14644-1:2015 Table 1: Class 7 allows 352 000 /m³ at 0.5 µm; Table A.1: ≤ 52 m² → 10 locations.
-    const locations = Array.from({ length: 10 }, (_, i) => ({ label: `P${i + 1}`, samples: [{ volume: 1, volumeUnit: 'm3', counts: [300_000, 50_000] }] }));
+    const locations = Array.from({ length: 10 }, (_, i) => ({
+      label: `P${i + 1}`,
+      samples: [{ volume: 1, volumeUnit: 'm3', counts: [300_000, 50_000] }],
+    }));
     const a = await postJson('cleanroom', { floorAreaM2: 50, sizesUm: [0.5, 1], locations });
     expect(a.status).toBe(200);
     expect(a.body.result.isoClass).toBe(7);
@@ -172,7 +205,11 @@ describe('POST /api/analysis/cleanroom', () => {
   });
 
   it('answers 400 for a size not in the standard', async () => {
-    const a = await postJson('cleanroom', { floorAreaM2: 5, sizesUm: [0.7], locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1] }] }] });
+    const a = await postJson('cleanroom', {
+      floorAreaM2: 5,
+      sizesUm: [0.7],
+      locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1] }] }],
+    });
     expectError(a, 400, 'invalid_input');
     expect(a.body.error.fields).toBeTruthy();
   });
@@ -188,7 +225,12 @@ describe('POST /api/analysis/magnetic', () => {
   });
 
   it('answers 400 for too few readings', async () => {
-    expectError(await postJson('magnetic', { readings: [{ distanceCm: 2, fieldUT: 10 }] }), 400, 'invalid_input', /at least 3/);
+    expectError(
+      await postJson('magnetic', { readings: [{ distanceCm: 2, fieldUT: 10 }] }),
+      400,
+      'invalid_input',
+      /at least 3/,
+    );
   });
 });
 

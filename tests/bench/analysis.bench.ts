@@ -19,7 +19,9 @@ const noise = () => {
   return seed / 2147483648 - 0.5;
 };
 const timeS = Array.from({ length: N }, (_, i) => i / FS);
-const axes = [7, 13, 29].map((f) => Float64Array.from({ length: N }, (_, i) => 0.3 * Math.sin((2 * Math.PI * f * i) / FS) + 0.1 * noise()));
+const axes = [7, 13, 29].map((f) =>
+  Float64Array.from({ length: N }, (_, i) => 0.3 * Math.sin((2 * Math.PI * f * i) / FS) + 0.1 * noise()),
+);
 const segment = welchDefaultSegmentLength(N)!;
 let peakRss = process.memoryUsage().rss;
 
@@ -34,17 +36,27 @@ function measure(label: string, run: () => void): void {
   }
   times.sort((a, b) => a - b);
   const f = (v: number) => v.toFixed(1);
-  console.log(`${label}: min ${f(times[0]!)} ms, median ${f(times[RUNS >> 1]!)} ms, max ${f(times[RUNS - 1]!)} ms (${RUNS} runs after ${WARMUP} warm-up)`);
+  console.log(
+    `${label}: min ${f(times[0]!)} ms, median ${f(times[RUNS >> 1]!)} ms, max ${f(times[RUNS - 1]!)} ms (${RUNS} runs after ${WARMUP} warm-up)`,
+  );
 }
 
-console.log(`record: ${N.toLocaleString('en-US')} samples per axis × 3 axes at ${FS} Hz, segment ${segment}, 50 % overlap`);
+console.log(
+  `record: ${N.toLocaleString('en-US')} samples per axis × 3 axes at ${FS} Hz, segment ${segment}, 50 % overlap`,
+);
 measure('Welch PSD, 3 axes', () => {
   for (const a of axes) welchPsd(a, FS, segment);
 });
 measure('Welch PSD, 3 axes, segment 256 (many short segments)', () => {
   for (const a of axes) welchPsd(a, FS, 256);
 });
-const input = VibrationInputSchema.parse({ timeS, x: Array.from(axes[0]!), y: Array.from(axes[1]!), z: Array.from(axes[2]!), units: 'g' });
+const input = VibrationInputSchema.parse({
+  timeS,
+  x: Array.from(axes[0]!),
+  y: Array.from(axes[1]!),
+  z: Array.from(axes[2]!),
+  units: 'g',
+});
 measure('vibrationAnalyse (checks, stats, PSD, bands)', () => {
   vibrationAnalyse(input);
 });

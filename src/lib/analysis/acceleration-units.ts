@@ -22,7 +22,11 @@ export function accelerationUnitFromHeader(cell: string): AccelerationUnit | nul
  * length of the (x, y, z) vector is about 1 in g and about 9.8 in m/s². Median |a| in 0.5 … 2 → g,
  * in 4.9 … 19.6 → m/s²; otherwise (gravity removed, or a violent record) null.
  */
-export function accelerationUnitFromGravity(x: ArrayLike<number>, y: ArrayLike<number>, z: ArrayLike<number>): AccelerationUnit | null {
+export function accelerationUnitFromGravity(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  z: ArrayLike<number>,
+): AccelerationUnit | null {
   const n = x.length;
   const step = Math.max(1, Math.floor(n / 20_000));
   const mags: number[] = [];

@@ -24,7 +24,10 @@ export const CLEANROOM_MAX_AREA_M2 = 100_000;
 
 const size = z
   .number()
-  .refine((s) => (ISO_14644_SIZES_UM as readonly number[]).includes(s), `use one of the ISO 14644-1 sizes ${ISO_14644_SIZES_UM.join(', ')} µm`);
+  .refine(
+    (s) => (ISO_14644_SIZES_UM as readonly number[]).includes(s),
+    `use one of the ISO 14644-1 sizes ${ISO_14644_SIZES_UM.join(', ')} µm`,
+  );
 
 export const CleanroomSampleSchema = z
   .object({
@@ -47,7 +50,10 @@ export const CleanroomInputSchema = z
     locations: z
       .array(
         z
-          .object({ label: z.string().trim().min(1).max(60), samples: z.array(CleanroomSampleSchema).min(1).max(CLEANROOM_MAX_SAMPLES_PER_LOCATION) })
+          .object({
+            label: z.string().trim().min(1).max(60),
+            samples: z.array(CleanroomSampleSchema).min(1).max(CLEANROOM_MAX_SAMPLES_PER_LOCATION),
+          })
           .strict(),
       )
       .min(1)
@@ -61,7 +67,11 @@ export const CleanroomInputSchema = z
     v.locations.forEach((loc, i) =>
       loc.samples.forEach((s, j) => {
         if (s.counts.length !== v.sizesUm.length) {
-          ctx.addIssue({ code: 'custom', path: ['locations', i, 'samples', j, 'counts'], message: `give ${v.sizesUm.length} counts, one per size` });
+          ctx.addIssue({
+            code: 'custom',
+            path: ['locations', i, 'samples', j, 'counts'],
+            message: `give ${v.sizesUm.length} counts, one per size`,
+          });
         }
       }),
     );
@@ -102,7 +112,11 @@ export function cleanroomClassify(input: CleanroomInput): CleanroomResult {
       const m3 = s.volumeUnit === 'L' ? s.volume / 1000 : s.volume;
       cumulative(s.counts, countsAre).forEach((c, i) => (sums[i] = sums[i]! + c / m3));
     }
-    return { label: loc.label, sampleCount: loc.samples.length, concentrationPerM3: sums.map((v) => v / loc.samples.length) };
+    return {
+      label: loc.label,
+      sampleCount: loc.samples.length,
+      concentrationPerM3: sums.map((v) => v / loc.samples.length),
+    };
   });
   const maxMean = sizesUm.map((_, i) => Math.max(...locations.map((l) => l.concentrationPerM3[i]!)));
   const meets = (n: number, i: number) => {
@@ -118,7 +132,10 @@ export function cleanroomClassify(input: CleanroomInput): CleanroomResult {
   const isoClass = ISO_14644_CLASSES.find((n) => sizesUm.every((_, i) => meets(n, i))) ?? null;
   if (isoClass !== null && isoClass > 1) {
     const countsAllow = ISO_14644_CLASSES.find(
-      (n) => n < isoClass && sizesUm.some((s) => iso14644Defined(n, s)) && sizesUm.every((s, i) => !iso14644Defined(n, s) || meets(n, i)),
+      (n) =>
+        n < isoClass &&
+        sizesUm.some((s) => iso14644Defined(n, s)) &&
+        sizesUm.every((s, i) => !iso14644Defined(n, s) || meets(n, i)),
     );
     const blank = countsAllow === undefined ? [] : sizesUm.filter((s) => !iso14644Defined(countsAllow, s));
     if (countsAllow !== undefined && blank.length > 0) {
@@ -135,9 +152,13 @@ export function cleanroomClassify(input: CleanroomInput): CleanroomResult {
   }
   if (isoClass !== null) {
     const minL = iso14644MinSampleVolumeL(isoClass, sizesUm[sizesUm.length - 1]!);
-    const smallest = Math.min(...input.locations.flatMap((l) => l.samples.map((s) => (s.volumeUnit === 'L' ? s.volume : s.volume * 1000))));
+    const smallest = Math.min(
+      ...input.locations.flatMap((l) => l.samples.map((s) => (s.volumeUnit === 'L' ? s.volume : s.volume * 1000))),
+    );
     if (minL !== null && smallest < minL) {
-      warnings.push(`Samples of ${+smallest.toPrecision(3)} L are below the ${+minL.toPrecision(3)} L that Class ${isoClass} needs at ${sizesUm[sizesUm.length - 1]} µm; sample longer.`);
+      warnings.push(
+        `Samples of ${+smallest.toPrecision(3)} L are below the ${+minL.toPrecision(3)} L that Class ${isoClass} needs at ${sizesUm[sizesUm.length - 1]} µm; sample longer.`,
+      );
     }
   }
   return {

@@ -106,7 +106,9 @@ export function csvTableParse(text: string, options: CsvTableOptions): CsvTable 
   if (failure) throw failure;
   const rowCount = columns[0]?.length ?? 0;
   if (rowCount === 0) {
-    throw new InputError(`The ${what} has no data rows; expected columns ${expectedColumns.join(', ')} with one reading a row.`);
+    throw new InputError(
+      `The ${what} has no data rows; expected columns ${expectedColumns.join(', ')} with one reading a row.`,
+    );
   }
   return { header, columns, rowCount };
 }

@@ -39,7 +39,8 @@ export interface EquilibriumTemperatureResult {
 /** Equilibrium temperature (K and °C) of a body in sunlight, no internal heat and no planet nearby. */
 export function equilibriumTemperature(input: EquilibriumTemperatureInput): EquilibriumTemperatureResult {
   const irradianceWPerM2 = SOLAR_CONSTANT_W_PER_M2 / (input.distanceAu * input.distanceAu);
-  const t4 = (input.absorptivity * irradianceWPerM2 * input.areaRatio) / (input.emissivity * STEFAN_BOLTZMANN_W_PER_M2_K4);
+  const t4 =
+    (input.absorptivity * irradianceWPerM2 * input.areaRatio) / (input.emissivity * STEFAN_BOLTZMANN_W_PER_M2_K4);
   const temperatureK = Math.sqrt(Math.sqrt(t4));
   return { irradianceWPerM2, temperatureK, temperatureC: temperatureK - 273.15 };
 }

@@ -66,7 +66,9 @@ export function magneticFieldFit(input: MagneticInput): MagneticResult {
   const net = input.readings.map((r) => r.fieldUT - input.backgroundUT);
   const used = input.readings.filter((_, i) => net[i]! > 0);
   if (used.length < input.readings.length) {
-    warnings.push(`${input.readings.length - used.length} reading(s) at or below the background were left out: a log needs a field above it.`);
+    warnings.push(
+      `${input.readings.length - used.length} reading(s) at or below the background were left out: a log needs a field above it.`,
+    );
   }
   if (used.length < MAGNETIC_MIN_READINGS) {
     throw new InputError(
@@ -78,7 +80,9 @@ export function magneticFieldFit(input: MagneticInput): MagneticResult {
   const y = used.map((r) => Math.log(r.fieldUT - input.backgroundUT));
   const fit = linearFit(x, y);
   if (!fit) {
-    throw new InputError('All readings are at the same distance; read the field at several distances.', { readings: ['needs different distances'] });
+    throw new InputError('All readings are at the same distance; read the field at several distances.', {
+      readings: ['needs different distances'],
+    });
   }
   const n = fit.slope;
   const lnK = fit.intercept;
@@ -88,14 +92,18 @@ export function magneticFieldFit(input: MagneticInput): MagneticResult {
     const lnR = (Math.log(input.thresholdUT) - lnK) / n;
     thresholdDistanceCm = Math.exp(lnR);
     // First-order propagation of the slope/intercept covariance into ln r* = (ln B* − ln k)/n.
-    const varLnR = (fit.interceptStdError ** 2 + lnR ** 2 * fit.slopeStdError ** 2 + 2 * lnR * fit.slopeInterceptCovariance) / (n * n);
+    const varLnR =
+      (fit.interceptStdError ** 2 + lnR ** 2 * fit.slopeStdError ** 2 + 2 * lnR * fit.slopeInterceptCovariance) /
+      (n * n);
     if (Number.isFinite(varLnR)) {
       const s = Math.sqrt(Math.max(0, varLnR));
       thresholdDistanceRangeCm = [Math.exp(lnR - s), Math.exp(lnR + s)];
     }
     const farthest = Math.max(...used.map((r) => r.distanceCm));
     if (thresholdDistanceCm > 2 * farthest) {
-      warnings.push(`The threshold distance lies beyond twice the farthest reading (${farthest} cm); it extrapolates the fit.`);
+      warnings.push(
+        `The threshold distance lies beyond twice the farthest reading (${farthest} cm); it extrapolates the fit.`,
+      );
     }
   } else {
     warnings.push('The field does not fall with distance in these readings; check the distances and the background.');

@@ -58,7 +58,11 @@ function linearPart(t: ArrayLike<number>, temp: ArrayLike<number>, tau: number) 
 export function newtonCoolingFit(timeS: ArrayLike<number>, temperature: ArrayLike<number>): NewtonCoolingOutcome {
   const n = Math.min(timeS.length, temperature.length);
   if (n < NEWTON_FIT_MIN_POINTS) {
-    return { ok: false, reason: 'too-few-points', message: `The fit needs at least ${NEWTON_FIT_MIN_POINTS} readings; this run has ${n}.` };
+    return {
+      ok: false,
+      reason: 'too-few-points',
+      message: `The fit needs at least ${NEWTON_FIT_MIN_POINTS} readings; this run has ${n}.`,
+    };
   }
   const t0 = timeS[0]!;
   const t = Float64Array.from({ length: n }, (_, i) => timeS[i]! - t0);
@@ -76,16 +80,26 @@ export function newtonCoolingFit(timeS: ArrayLike<number>, temperature: ArrayLik
   }
   const mean = y.reduce((s, v) => s + v, 0) / n;
   const sst = y.reduce((s, v) => s + (v - mean) ** 2, 0);
-  if (!(sst > 0)) return { ok: false, reason: 'flat', message: 'The temperature does not change in this run; there is nothing to fit.' };
+  if (!(sst > 0))
+    return {
+      ok: false,
+      reason: 'flat',
+      message: 'The temperature does not change in this run; there is nothing to fit.',
+    };
   if (best === steps) {
     return {
       ok: false,
       reason: 'no-levelling-off',
-      message: 'The temperature is still changing steadily at the end of the run, so the final temperature cannot be told yet; record until it levels off.',
+      message:
+        'The temperature is still changing steadily at the end of the run, so the final temperature cannot be told yet; record until it levels off.',
     };
   }
   if (best === 0) {
-    return { ok: false, reason: 'too-fast', message: 'The temperature settles faster than the readings are spaced; take readings more often.' };
+    return {
+      ok: false,
+      reason: 'too-fast',
+      message: 'The temperature settles faster than the readings are spaced; take readings more often.',
+    };
   }
   // Golden-section search on ln τ between the scan neighbours of the best point (Press et al., Numerical Recipes §10.2).
   let a = lo + ((hi - lo) * (best - 1)) / steps;

@@ -33,12 +33,14 @@ export const PsdProfilePointSchema = z
   .strict();
 
 /** A PSD profile: breakpoints in increasing frequency; the first must give a level. */
-export const PsdProfileInputSchema = z.object({
-  points: z
-    .array(PsdProfilePointSchema)
-    .min(2, 'A profile needs at least two breakpoints.')
-    .max(PSD_PROFILE_MAX_BREAKPOINTS, `A profile may have at most ${PSD_PROFILE_MAX_BREAKPOINTS} breakpoints.`),
-}).strict();
+export const PsdProfileInputSchema = z
+  .object({
+    points: z
+      .array(PsdProfilePointSchema)
+      .min(2, 'A profile needs at least two breakpoints.')
+      .max(PSD_PROFILE_MAX_BREAKPOINTS, `A profile may have at most ${PSD_PROFILE_MAX_BREAKPOINTS} breakpoints.`),
+  })
+  .strict();
 export type PsdProfileInput = z.infer<typeof PsdProfileInputSchema>;
 
 export interface PsdProfileSegment {
@@ -82,7 +84,7 @@ export function psdSlopeExponent(slopeDbPerOctave: number): number {
 
 function resolveLevels(points: PsdProfileInput['points']): number[] {
   const levels = points.map((p) => p.psdG2PerHz ?? NaN);
-  for (let changed = true; changed; ) {
+  for (let changed = true; changed;) {
     changed = false;
     for (let i = 1; i < points.length; i++) {
       const slope = points[i]!.slopeDbPerOctave;
@@ -121,9 +123,12 @@ export function psdProfileGrms(input: PsdProfileInput): PsdProfileResult {
     }
   });
   if (points[0]?.slopeDbPerOctave !== undefined) {
-    throw new InputError('The first breakpoint has no previous point for its slope to start from; give it a level, or nothing.', {
-      'points.0.slopeDbPerOctave': ['not allowed on the first point'],
-    });
+    throw new InputError(
+      'The first breakpoint has no previous point for its slope to start from; give it a level, or nothing.',
+      {
+        'points.0.slopeDbPerOctave': ['not allowed on the first point'],
+      },
+    );
   }
   const levels = resolveLevels(points);
   const breakpoints = points.map((p, i) => ({ frequencyHz: p.frequencyHz, psdG2PerHz: levels[i]! }));

@@ -19,7 +19,15 @@ export const SAVED_RESULT_MAX_BYTES = 400_000;
 /** Version of the computations in src/lib/analysis; bump when a result would change. */
 export const ANALYSIS_TOOL_VERSION = '1.0.0';
 
-export const SAVED_RESULT_TOOLS = ['vibration', 'psd-profile', 'thermal', 'cleanroom', 'magnetic', 'orbit-eclipse', 'equilibrium-temperature'] as const;
+export const SAVED_RESULT_TOOLS = [
+  'vibration',
+  'psd-profile',
+  'thermal',
+  'cleanroom',
+  'magnetic',
+  'orbit-eclipse',
+  'equilibrium-temperature',
+] as const;
 
 const text = (max: number) => z.string().trim().max(max);
 const point = z.tuple([z.number().finite(), z.number().finite()]);
@@ -47,7 +55,10 @@ export const SavedResultSchema = z
     plot: SavedPlotSchema,
   })
   .strict()
-  .refine((v) => JSON.stringify(v).length <= SAVED_RESULT_MAX_BYTES, `a saved result may be at most ${SAVED_RESULT_MAX_BYTES} bytes`);
+  .refine(
+    (v) => JSON.stringify(v).length <= SAVED_RESULT_MAX_BYTES,
+    `a saved result may be at most ${SAVED_RESULT_MAX_BYTES} bytes`,
+  );
 export type SavedResult = z.infer<typeof SavedResultSchema>;
 export type SavedPlot = z.infer<typeof SavedPlotSchema>;
 
@@ -75,7 +86,8 @@ export function seriesDownsample(points: [number, number][], maxPoints = SAVED_R
   return out;
 }
 
-const zip = (x: ArrayLike<number>, y: ArrayLike<number>): [number, number][] => Array.from({ length: Math.min(x.length, y.length) }, (_, i) => [x[i]!, y[i]!]);
+const zip = (x: ArrayLike<number>, y: ArrayLike<number>): [number, number][] =>
+  Array.from({ length: Math.min(x.length, y.length) }, (_, i) => [x[i]!, y[i]!]);
 const series = (label: string, pts: [number, number][]) => ({ label, points: seriesDownsample(pts) });
 const positive = (pts: [number, number][]) => pts.filter(([x, y]) => x > 0 && y > 0);
 
@@ -87,24 +99,43 @@ function saved(tool: SavedResult['tool'], inputsSummary: string, result: object,
 export function vibrationSavedResult(r: VibrationResult): SavedResult {
   const { psd, ...rest } = r;
   const { frequencyHz, x, y, z: zz, sum: _sum, ...psdInfo } = psd;
-  return saved('vibration', `3 axes, ${+r.sampleRateHz.toPrecision(4)} Hz, ${+r.durationS.toPrecision(4)} s, input in ${r.units.input}`, { ...rest, psd: psdInfo }, {
-    kind: 'loglog',
-    title: 'Acceleration PSD (Welch, Hann)',
-    xLabel: 'Frequency (Hz)',
-    yLabel: 'PSD (g²/Hz)',
-    series: [series('x', positive(zip(frequencyHz, x))), series('y', positive(zip(frequencyHz, y))), series('z', positive(zip(frequencyHz, zz)))],
-  });
+  return saved(
+    'vibration',
+    `3 axes, ${+r.sampleRateHz.toPrecision(4)} Hz, ${+r.durationS.toPrecision(4)} s, input in ${r.units.input}`,
+    { ...rest, psd: psdInfo },
+    {
+      kind: 'loglog',
+      title: 'Acceleration PSD (Welch, Hann)',
+      xLabel: 'Frequency (Hz)',
+      yLabel: 'PSD (g²/Hz)',
+      series: [
+        series('x', positive(zip(frequencyHz, x))),
+        series('y', positive(zip(frequencyHz, y))),
+        series('z', positive(zip(frequencyHz, zz))),
+      ],
+    },
+  );
 }
 
 /** Saved form of a PSD profile: breakpoints and Grms, plotted on log-log axes. */
 export function psdProfileSavedResult(r: PsdProfileResult): SavedResult {
-  return saved('psd-profile', `${r.breakpoints.length} breakpoints, ${r.breakpoints[0]?.frequencyHz}–${r.breakpoints.at(-1)?.frequencyHz} Hz`, r, {
-    kind: 'loglog',
-    title: `PSD profile, ${r.grms.toFixed(2)} Grms`,
-    xLabel: 'Frequency (Hz)',
-    yLabel: 'PSD (g²/Hz)',
-    series: [series('profile', r.breakpoints.map((b) => [b.frequencyHz, b.psdG2PerHz]))],
-  });
+  return saved(
+    'psd-profile',
+    `${r.breakpoints.length} breakpoints, ${r.breakpoints[0]?.frequencyHz}–${r.breakpoints.at(-1)?.frequencyHz} Hz`,
+    r,
+    {
+      kind: 'loglog',
+      title: `PSD profile, ${r.grms.toFixed(2)} Grms`,
+      xLabel: 'Frequency (Hz)',
+      yLabel: 'PSD (g²/Hz)',
+      series: [
+        series(
+          'profile',
+          r.breakpoints.map((b) => [b.frequencyHz, b.psdG2PerHz]),
+        ),
+      ],
+    },
+  );
 }
 
 /** Saved form of thermal runs: each run's readings and, where it was fitted, its Newton's-law curve. */
@@ -112,7 +143,13 @@ export function thermalSavedResult(input: ThermalInput, r: ThermalResult): Saved
   const plotted = input.runs.slice(0, SAVED_RESULT_MAX_SERIES / 2).flatMap((run, i) => {
     const fit = r.runs[i]?.fit;
     const t0 = run.timeS[0] ?? 0;
-    const readings = series(run.label, zip(run.timeS.map((t) => t / 60), run.temperatureC));
+    const readings = series(
+      run.label,
+      zip(
+        run.timeS.map((t) => t / 60),
+        run.temperatureC,
+      ),
+    );
     if (!fit) return [readings];
     const curve = run.timeS.map((t): [number, number] => [
       t / 60,
@@ -120,20 +157,35 @@ export function thermalSavedResult(input: ThermalInput, r: ThermalResult): Saved
     ]);
     return [readings, series(`${run.label} (fit)`, curve)];
   });
-  return saved('thermal', `${input.runs.length} run(s): ${input.runs.map((x) => x.label).join(', ')}`.slice(0, 300), r, {
-    kind: 'line',
-    title: 'Temperature against time',
-    xLabel: 'Time (min)',
-    yLabel: 'Temperature (°C)',
-    series: plotted,
-  });
+  return saved(
+    'thermal',
+    `${input.runs.length} run(s): ${input.runs.map((x) => x.label).join(', ')}`.slice(0, 300),
+    r,
+    {
+      kind: 'line',
+      title: 'Temperature against time',
+      xLabel: 'Time (min)',
+      yLabel: 'Temperature (°C)',
+      series: plotted,
+    },
+  );
 }
 
 /** Saved form of a clean-room result: the worst location's concentration per size against the class limits. */
 export function cleanroomSavedResult(r: CleanroomResult): SavedResult {
-  const measured = series('worst location', r.perSize.map((s) => [s.sizeUm, s.maxLocationMeanPerM3]));
+  const measured = series(
+    'worst location',
+    r.perSize.map((s) => [s.sizeUm, s.maxLocationMeanPerM3]),
+  );
   const limits = r.classLimitsPerM3
-    ? [series(`ISO Class ${r.isoClass} limit`, r.sizesUm.flatMap((s, i) => (r.classLimitsPerM3![i] == null ? [] : [[s, r.classLimitsPerM3![i]!] as [number, number]])))]
+    ? [
+        series(
+          `ISO Class ${r.isoClass} limit`,
+          r.sizesUm.flatMap((s, i) =>
+            r.classLimitsPerM3![i] == null ? [] : [[s, r.classLimitsPerM3![i]!] as [number, number]],
+          ),
+        ),
+      ]
     : [];
   return saved('cleanroom', `${r.locationsSampled} location(s), sizes ${r.sizesUm.join(', ')} µm`, r, {
     kind: 'bar',
@@ -145,7 +197,10 @@ export function cleanroomSavedResult(r: CleanroomResult): SavedResult {
 }
 
 /** Saved form of a magnetic result: readings and the fitted power law on log-log axes (cm, µT). */
-export function magneticSavedResult(readings: { distanceCm: number; fieldUT: number }[], r: MagneticResult): SavedResult {
+export function magneticSavedResult(
+  readings: { distanceCm: number; fieldUT: number }[],
+  r: MagneticResult,
+): SavedResult {
   const pts = positive(readings.map((x, i) => [x.distanceCm, r.netFieldUT[i] ?? NaN] as [number, number]));
   const xs = pts.map((p) => p[0]);
   const lo = Math.min(...xs);
@@ -175,11 +230,20 @@ export function orbitEclipseSavedResult(input: OrbitEclipseInput, r: OrbitEclips
 }
 
 /** Saved form of an equilibrium-temperature calculation: the temperature in °C as one bar. */
-export function equilibriumTemperatureSavedResult(input: EquilibriumTemperatureInput, r: EquilibriumTemperatureResult): SavedResult {
+export function equilibriumTemperatureSavedResult(
+  input: EquilibriumTemperatureInput,
+  r: EquilibriumTemperatureResult,
+): SavedResult {
   return saved(
     'equilibrium-temperature',
     `α ${input.absorptivity}, ε ${input.emissivity}, area ratio ${input.areaRatio}, ${input.distanceAu} AU`,
     { ...r },
-    { kind: 'bar', title: `Equilibrium ${r.temperatureC.toFixed(1)} °C`, xLabel: 'Distance from the Sun (AU)', yLabel: 'Temperature (°C)', series: [series('equilibrium', [[input.distanceAu, r.temperatureC]])] },
+    {
+      kind: 'bar',
+      title: `Equilibrium ${r.temperatureC.toFixed(1)} °C`,
+      xLabel: 'Distance from the Sun (AU)',
+      yLabel: 'Temperature (°C)',
+      series: [series('equilibrium', [[input.distanceAu, r.temperatureC]])],
+    },
   );
 }

@@ -37,7 +37,12 @@ export const ThermalRunSchema = z
   });
 
 export const ThermalInputSchema = z
-  .object({ runs: z.array(ThermalRunSchema).min(1, 'send at least one run').max(THERMAL_MAX_RUNS, `at most ${THERMAL_MAX_RUNS} runs`) })
+  .object({
+    runs: z
+      .array(ThermalRunSchema)
+      .min(1, 'send at least one run')
+      .max(THERMAL_MAX_RUNS, `at most ${THERMAL_MAX_RUNS} runs`),
+  })
   .strict();
 export type ThermalInput = z.infer<typeof ThermalInputSchema>;
 export type ThermalRun = z.infer<typeof ThermalRunSchema>;
@@ -71,9 +76,12 @@ export function thermalRunAnalyse(run: ThermalRun, index = 0): ThermalRunResult 
   const { timeS, temperatureC: temp, label } = run;
   const n = timeS.length;
   if (n < 2) {
-    throw new InputError(`Run "${label}" has ${n} reading(s); a rate needs at least 2, and the time-constant fit at least 5.`, {
-      [`runs.${index}.timeS`]: ['at least 2 readings'],
-    });
+    throw new InputError(
+      `Run "${label}" has ${n} reading(s); a rate needs at least 2, and the time-constant fit at least 5.`,
+      {
+        [`runs.${index}.timeS`]: ['at least 2 readings'],
+      },
+    );
   }
   timeSeriesAssertIncreasing(timeS, `run "${label}"`);
   const durationS = timeS[n - 1]! - timeS[0]!;

@@ -35,7 +35,10 @@ export function vibrationInputFromCsv(
   let units = options.units ?? 'auto';
   let unitSource: AccelerationUnitSource = 'stated';
   if (units === 'auto' && table.header) {
-    const found = table.header.slice(1, 4).map(accelerationUnitFromHeader).find((u) => u !== null);
+    const found = table.header
+      .slice(1, 4)
+      .map(accelerationUnitFromHeader)
+      .find((u) => u !== null);
     if (found) {
       units = found;
       unitSource = 'header';

@@ -146,7 +146,10 @@ function dominantPeaks(freq: Float64Array, psd: Float64Array): VibrationResult['
  * InputError for a record too short for the PSD, time that does not increase, uneven sampling, or a
  * segment length longer than the record allows.
  */
-export function vibrationAnalyse(input: VibrationInput, unitSource: AccelerationUnitSource = 'stated'): VibrationResult {
+export function vibrationAnalyse(
+  input: VibrationInput,
+  unitSource: AccelerationUnitSource = 'stated',
+): VibrationResult {
   const n = input.timeS.length;
   const warnings: string[] = [];
   if (n < VIBRATION_MIN_SAMPLES) {
@@ -164,7 +167,10 @@ export function vibrationAnalyse(input: VibrationInput, unitSource: Acceleration
     const guess = accelerationUnitFromGravity(input.x, input.y, input.z);
     source = guess ? 'gravity' : 'assumed';
     unit = guess ?? 'm/s2';
-    if (!guess) warnings.push('Could not tell g from m/s² (the readings do not include gravity); assumed m/s². Choose the unit if that is wrong.');
+    if (!guess)
+      warnings.push(
+        'Could not tell g from m/s² (the readings do not include gravity); assumed m/s². Choose the unit if that is wrong.',
+      );
   }
   const toG = unit === 'g' ? 1 : 1 / STANDARD_GRAVITY_M_PER_S2;
   const ax = Float64Array.from(input.x, (v) => v * toG);
@@ -187,7 +193,9 @@ export function vibrationAnalyse(input: VibrationInput, unitSource: Acceleration
   const pz = welchPsd(az, sampleRateHz, segmentLength);
   const sum = px.psd.map((v, k) => v + py.psd[k]! + pz.psd[k]!);
   if (px.segmentCount < WELCH_MIN_SEGMENTS) {
-    warnings.push(`Only ${px.segmentCount} segment(s) averaged: the PSD is noisy. A shorter segment length or a longer record smooths it.`);
+    warnings.push(
+      `Only ${px.segmentCount} segment(s) averaged: the PSD is noisy. A shorter segment length or a longer record smooths it.`,
+    );
   }
   const nyquistHz = sampleRateHz / 2;
   const bands = (input.bands ?? defaultBands(nyquistHz)).map(({ lowHz, highHz }) => {

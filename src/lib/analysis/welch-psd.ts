@@ -58,7 +58,12 @@ function fftFor(length: number) {
   let entry = fftCache.get(length);
   if (!entry) {
     const fft = new FFT(length);
-    entry = { fft, out: fft.createComplexArray() as number[], window: hannPeriodic(length), frame: new Float64Array(length) };
+    entry = {
+      fft,
+      out: fft.createComplexArray() as number[],
+      window: hannPeriodic(length),
+      frame: new Float64Array(length),
+    };
     fftCache.set(length, entry);
   }
   return entry;
@@ -73,7 +78,9 @@ function fftFor(length: number) {
 export function welchPsd(signal: ArrayLike<number>, sampleRateHz: number, segmentLength: number): WelchPsd {
   const n = segmentLength;
   if (!Number.isInteger(Math.log2(n)) || n < WELCH_MIN_SEGMENT_LENGTH || n > WELCH_MAX_SEGMENT_LENGTH) {
-    throw new RangeError(`welchPsd: segment length ${n} is not a power of two in ${WELCH_MIN_SEGMENT_LENGTH}…${WELCH_MAX_SEGMENT_LENGTH}`);
+    throw new RangeError(
+      `welchPsd: segment length ${n} is not a power of two in ${WELCH_MIN_SEGMENT_LENGTH}…${WELCH_MAX_SEGMENT_LENGTH}`,
+    );
   }
   const segments = welchSegmentCount(signal.length, n);
   if (segments < 1) throw new RangeError(`welchPsd: ${signal.length} samples are fewer than one segment of ${n}`);

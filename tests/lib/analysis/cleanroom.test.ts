@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { CleanroomInputSchema, cleanroomClassify } from '../../../src/lib/analysis/cleanroom';
 
-function room(locations: number[][], sizesUm = [0.5, 1, 5], floorAreaM2 = 1, volume = 28.3, volumeUnit: 'L' | 'm3' = 'L') {
+function room(
+  locations: number[][],
+  sizesUm = [0.5, 1, 5],
+  floorAreaM2 = 1,
+  volume = 28.3,
+  volumeUnit: 'L' | 'm3' = 'L',
+) {
   return CleanroomInputSchema.parse({
     floorAreaM2,
     sizesUm,
@@ -18,7 +24,18 @@ describe('cleanroomClassify', () => {
 
   it('gives Class 7 when the worst location is just under the Class 7 limit at 0.5 µm', () => {
     // ISO 14644-1:2015 Table 1: Class 7 allows 352 000 /m³ at 0.5 µm, 83 200 at 1 µm, 2 930 at 5 µm.
-    const r = cleanroomClassify(room([[351_000, 80_000, 2_000], [10_000, 2_000, 100]], [0.5, 1, 5], 1, 1, 'm3'));
+    const r = cleanroomClassify(
+      room(
+        [
+          [351_000, 80_000, 2_000],
+          [10_000, 2_000, 100],
+        ],
+        [0.5, 1, 5],
+        1,
+        1,
+        'm3',
+      ),
+    );
     expect(r.isoClass).toBe(7);
     expect(r.classLimitsPerM3).toEqual([352_000, 83_200, 2_930]);
   });
@@ -43,7 +60,15 @@ describe('cleanroomClassify', () => {
       CleanroomInputSchema.parse({
         floorAreaM2: 1,
         sizesUm: [0.5],
-        locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'm3', counts: [3_000] }, { volume: 1, volumeUnit: 'm3', counts: [4_000] }] }],
+        locations: [
+          {
+            label: 'A',
+            samples: [
+              { volume: 1, volumeUnit: 'm3', counts: [3_000] },
+              { volume: 1, volumeUnit: 'm3', counts: [4_000] },
+            ],
+          },
+        ],
       }),
     );
     expect(r.locations[0]!.concentrationPerM3[0]).toBe(3_500);
@@ -73,11 +98,30 @@ describe('cleanroomClassify', () => {
 
 describe('CleanroomInputSchema', () => {
   it('refuses sizes outside the ISO list, negative or fractional counts, and count lists of the wrong length', () => {
-    const base = { floorAreaM2: 1, sizesUm: [0.5], locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1] }] }] };
+    const base = {
+      floorAreaM2: 1,
+      sizesUm: [0.5],
+      locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1] }] }],
+    };
     expect(CleanroomInputSchema.safeParse(base).success).toBe(true);
     expect(CleanroomInputSchema.safeParse({ ...base, sizesUm: [0.7] }).success).toBe(false);
-    expect(CleanroomInputSchema.safeParse({ ...base, locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [-1] }] }] }).success).toBe(false);
-    expect(CleanroomInputSchema.safeParse({ ...base, locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1.5] }] }] }).success).toBe(false);
-    expect(CleanroomInputSchema.safeParse({ ...base, locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1, 2] }] }] }).success).toBe(false);
+    expect(
+      CleanroomInputSchema.safeParse({
+        ...base,
+        locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [-1] }] }],
+      }).success,
+    ).toBe(false);
+    expect(
+      CleanroomInputSchema.safeParse({
+        ...base,
+        locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1.5] }] }],
+      }).success,
+    ).toBe(false);
+    expect(
+      CleanroomInputSchema.safeParse({
+        ...base,
+        locations: [{ label: 'A', samples: [{ volume: 1, volumeUnit: 'L', counts: [1, 2] }] }],
+      }).success,
+    ).toBe(false);
   });
 });

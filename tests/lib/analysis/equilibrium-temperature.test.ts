@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { EquilibriumTemperatureInputSchema, equilibriumTemperature } from '../../../src/lib/analysis/equilibrium-temperature';
+import {
+  EquilibriumTemperatureInputSchema,
+  equilibriumTemperature,
+} from '../../../src/lib/analysis/equilibrium-temperature';
 
 describe('equilibriumTemperature', () => {
   it('gives 278.3 K for a black sphere at 1 AU', () => {

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { iso14644Limit, iso14644MinSampleVolumeL, iso14644SamplingLocations } from '../../../src/lib/analysis/iso-14644';
+import {
+  iso14644Limit,
+  iso14644MinSampleVolumeL,
+  iso14644SamplingLocations,
+} from '../../../src/lib/analysis/iso-14644';
 
 describe('iso14644Limit', () => {
   // ISO 14644-1:2015, Table 1 (maximum concentration limits, particles/m³ of size ≥ D), cell by cell.

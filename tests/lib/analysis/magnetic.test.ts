@@ -16,14 +16,18 @@ const dipoleUT = (cm: number) => dipoleFieldAxialT(MOMENT, cm / 100) * 1e6;
 
 describe('magneticFieldFit', () => {
   it('gives an exponent of −3 for synthetic dipole readings', () => {
-    const r = magneticFieldFit(MagneticInputSchema.parse({ readings: distancesCm.map((d) => ({ distanceCm: d, fieldUT: dipoleUT(d) })) }));
+    const r = magneticFieldFit(
+      MagneticInputSchema.parse({ readings: distancesCm.map((d) => ({ distanceCm: d, fieldUT: dipoleUT(d) })) }),
+    );
     expect(r.exponent).toBeCloseTo(-3, 10);
     expect(r.rSquared).toBeCloseTo(1, 12);
   });
 
   it('puts the threshold where the dipole formula reaches it', () => {
     // Solving (μ0/4π)·2m/r³ = 0.5 µT for r gives the reference distance.
-    const r = magneticFieldFit(MagneticInputSchema.parse({ readings: distancesCm.map((d) => ({ distanceCm: d, fieldUT: dipoleUT(d) })) }));
+    const r = magneticFieldFit(
+      MagneticInputSchema.parse({ readings: distancesCm.map((d) => ({ distanceCm: d, fieldUT: dipoleUT(d) })) }),
+    );
     const expected = Math.cbrt((1e-7 * 2 * MOMENT) / 0.5e-6) * 100;
     expect(r.thresholdDistanceCm!).toBeCloseTo(expected, 6);
     expect(r.warnings.join(' ')).toMatch(/extrapolates/);
@@ -36,7 +40,10 @@ describe('magneticFieldFit', () => {
     let within1 = 0;
     for (let seed = 1; seed <= trials; seed++) {
       const rnd = seededRandom(seed);
-      const readings = distancesCm.map((d) => ({ distanceCm: d, fieldUT: 48 + dipoleUT(d) * (1 + 0.03 * rnd.normal()) }));
+      const readings = distancesCm.map((d) => ({
+        distanceCm: d,
+        fieldUT: 48 + dipoleUT(d) * (1 + 0.03 * rnd.normal()),
+      }));
       const r = magneticFieldFit(MagneticInputSchema.parse({ readings, backgroundUT: 48 }));
       const z = Math.abs(r.exponent + 3) / r.exponentStdError!;
       expect(z).toBeLessThan(5.41);
@@ -50,7 +57,16 @@ describe('magneticFieldFit', () => {
   });
 
   it('refuses fewer than 3 readings above the background and a single distance', () => {
-    expect(() => magneticFieldFit(MagneticInputSchema.parse({ readings: [{ distanceCm: 2, fieldUT: 100 }, { distanceCm: 4, fieldUT: 60 }] }))).toThrow(InputError);
+    expect(() =>
+      magneticFieldFit(
+        MagneticInputSchema.parse({
+          readings: [
+            { distanceCm: 2, fieldUT: 100 },
+            { distanceCm: 4, fieldUT: 60 },
+          ],
+        }),
+      ),
+    ).toThrow(InputError);
     const same = [1, 2, 3].map((f) => ({ distanceCm: 5, fieldUT: 100 * f }));
     expect(() => magneticFieldFit(MagneticInputSchema.parse({ readings: same }))).toThrow(/same distance/);
   });

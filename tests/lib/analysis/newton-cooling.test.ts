@@ -44,7 +44,10 @@ describe('newtonCoolingFit', () => {
 
   it('says the run has not levelled off when it is still a straight line', () => {
     const timeS = Array.from({ length: 30 }, (_, i) => i * 10);
-    const r = newtonCoolingFit(timeS, timeS.map((t) => 20 + 0.05 * t));
+    const r = newtonCoolingFit(
+      timeS,
+      timeS.map((t) => 20 + 0.05 * t),
+    );
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.reason).toBe('no-levelling-off');
   });

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../src/lib/errors';
-import { PsdProfileInputSchema, psdProfileGrms, psdSegmentArea, psdSlopeExponent } from '../../../src/lib/analysis/psd-profile';
+import {
+  PsdProfileInputSchema,
+  psdProfileGrms,
+  psdSegmentArea,
+  psdSlopeExponent,
+} from '../../../src/lib/analysis/psd-profile';
 
 // GSFC-STD-7000A (GEVS), Table 2.4-3, generalized random vibration test levels, components 22.7 kg or less.
 const GEVS_QUAL = [
@@ -45,13 +50,22 @@ describe('psdProfileGrms', () => {
   });
 
   it('derives a level forward from a slope', () => {
-    const r = psdProfileGrms(PsdProfileInputSchema.parse({ points: [{ frequencyHz: 20, psdG2PerHz: 0.026 }, { frequencyHz: 40, slopeDbPerOctave: 6 }] }));
+    const r = psdProfileGrms(
+      PsdProfileInputSchema.parse({
+        points: [
+          { frequencyHz: 20, psdG2PerHz: 0.026 },
+          { frequencyHz: 40, slopeDbPerOctave: 6 },
+        ],
+      }),
+    );
     expect(r.breakpoints[1]!.psdG2PerHz).toBeCloseTo(0.026 * 2 ** psdSlopeExponent(6), 12);
     expect(r.segments[0]!.slopeDbPerOctave).toBeCloseTo(6, 9);
   });
 
   it('refuses a point whose level cannot be derived', () => {
-    expect(() => psdProfileGrms({ points: [{ frequencyHz: 20 }, { frequencyHz: 50, psdG2PerHz: 0.1 }] })).toThrow(InputError);
+    expect(() => psdProfileGrms({ points: [{ frequencyHz: 20 }, { frequencyHz: 50, psdG2PerHz: 0.1 }] })).toThrow(
+      InputError,
+    );
   });
 
   it('refuses frequencies that do not increase', () => {
@@ -59,14 +73,21 @@ describe('psdProfileGrms', () => {
   });
 
   it('refuses a first point given only as a slope', () => {
-    expect(() => psdProfileGrms({ points: [{ frequencyHz: 20, slopeDbPerOctave: 3, psdG2PerHz: 0.1 }, GEVS_QUAL[1]!] })).toThrow(InputError);
+    expect(() =>
+      psdProfileGrms({ points: [{ frequencyHz: 20, slopeDbPerOctave: 3, psdG2PerHz: 0.1 }, GEVS_QUAL[1]!] }),
+    ).toThrow(InputError);
   });
 });
 
 describe('psdSegmentArea', () => {
   it('matches the trapezoid rule on a fine log grid for rising, flat and falling segments', () => {
     // Reference: numerical quadrature of P1·(f/f1)ⁿ on 200 000 log-spaced steps, independent of the closed form.
-    for (const [f1, p1, f2, p2] of [[20, 0.026, 50, 0.16], [50, 0.16, 800, 0.16], [800, 0.16, 2000, 0.026], [10, 1, 100, 0.1]] as const) {
+    for (const [f1, p1, f2, p2] of [
+      [20, 0.026, 50, 0.16],
+      [50, 0.16, 800, 0.16],
+      [800, 0.16, 2000, 0.026],
+      [10, 1, 100, 0.1],
+    ] as const) {
       const n = Math.log(p2 / p1) / Math.log(f2 / f1);
       let area = 0;
       const steps = 200_000;

@@ -19,7 +19,10 @@ import { VibrationInputSchema, vibrationAnalyse } from '../../../src/lib/analysi
 
 describe('seriesDownsample', () => {
   it('keeps at most the limit and keeps the highest peak', () => {
-    const pts = Array.from({ length: 50_000 }, (_, i): [number, number] => [i, Math.sin(i / 100) + (i === 31_337 ? 10 : 0)]);
+    const pts = Array.from({ length: 50_000 }, (_, i): [number, number] => [
+      i,
+      Math.sin(i / 100) + (i === 31_337 ? 10 : 0),
+    ]);
     const out = seriesDownsample(pts);
     expect(out.length).toBeLessThanOrEqual(SAVED_RESULT_MAX_POINTS);
     expect(out).toContainEqual([31_337, pts[31_337]![1]]);
@@ -27,7 +30,10 @@ describe('seriesDownsample', () => {
   });
 
   it('returns short series unchanged', () => {
-    const pts: [number, number][] = [[1, 2], [3, 4]];
+    const pts: [number, number][] = [
+      [1, 2],
+      [3, 4],
+    ];
     expect(seriesDownsample(pts)).toBe(pts);
   });
 });
@@ -47,20 +53,35 @@ describe('vibrationSavedResult', () => {
 
 describe('SavedResultSchema', () => {
   it('refuses an unknown tool and a series over the point limit', () => {
-    const good = psdProfileSavedResult(psdProfileGrms({ points: [{ frequencyHz: 20, psdG2PerHz: 0.01 }, { frequencyHz: 2000, psdG2PerHz: 0.01 }] }));
+    const good = psdProfileSavedResult(
+      psdProfileGrms({
+        points: [
+          { frequencyHz: 20, psdG2PerHz: 0.01 },
+          { frequencyHz: 2000, psdG2PerHz: 0.01 },
+        ],
+      }),
+    );
     expect(SavedResultSchema.safeParse(good).success).toBe(true);
     expect(SavedResultSchema.safeParse({ ...good, tool: 'other' }).success).toBe(false);
     const long = Array.from({ length: SAVED_RESULT_MAX_POINTS + 1 }, (_, i) => [i, i]);
-    expect(SavedResultSchema.safeParse({ ...good, plot: { ...good.plot, series: [{ label: 'a', points: long }] } }).success).toBe(false);
+    expect(
+      SavedResultSchema.safeParse({ ...good, plot: { ...good.plot, series: [{ label: 'a', points: long }] } }).success,
+    ).toBe(false);
   });
 });
 
 describe('tool saved results', () => {
   it('builds a valid saved result for every other tool', () => {
     const timeS = Array.from({ length: 30 }, (_, i) => i * 60);
-    const thermalIn = ThermalInputSchema.parse({ runs: [{ label: 'lamp', timeS, temperatureC: timeS.map((t) => 40 - 20 * Math.exp(-t / 500)) }] });
+    const thermalIn = ThermalInputSchema.parse({
+      runs: [{ label: 'lamp', timeS, temperatureC: timeS.map((t) => 40 - 20 * Math.exp(-t / 500)) }],
+    });
     const readings = [2, 3, 4, 6, 8].map((d) => ({ distanceCm: d, fieldUT: dipoleFieldAxialT(0.5, d / 100) * 1e6 }));
-    const room = CleanroomInputSchema.parse({ floorAreaM2: 2, sizesUm: [0.5, 5], locations: [{ label: 'A', samples: [{ volume: 2.83, volumeUnit: 'L', counts: [100, 2] }] }] });
+    const room = CleanroomInputSchema.parse({
+      floorAreaM2: 2,
+      sizesUm: [0.5, 5],
+      locations: [{ label: 'A', samples: [{ volume: 2.83, volumeUnit: 'L', counts: [100, 2] }] }],
+    });
     const all = [
       thermalSavedResult(thermalIn, thermalAnalyse(thermalIn)),
       magneticSavedResult(readings, magneticFieldFit(MagneticInputSchema.parse({ readings }))),

@@ -11,7 +11,12 @@ const cooler = timeS.map((t) => 5 + 15 * Math.exp(-t / 400));
 describe('thermalAnalyse', () => {
   it('tells heating from cooling and fits each run', () => {
     const r = thermalAnalyse(
-      ThermalInputSchema.parse({ runs: [{ label: 'lamp', timeS, temperatureC: lamp }, { label: 'cooler', timeS, temperatureC: cooler }] }),
+      ThermalInputSchema.parse({
+        runs: [
+          { label: 'lamp', timeS, temperatureC: lamp },
+          { label: 'cooler', timeS, temperatureC: cooler },
+        ],
+      }),
     );
     expect(r.runs.map((x) => x.direction)).toEqual(['heating', 'cooling']);
     expect(r.runs[0]!.fit!.timeConstantS).toBeCloseTo(600, 3);
@@ -30,15 +35,23 @@ describe('thermalAnalyse', () => {
 
   it('refuses a single reading and time going backwards', () => {
     expect(() => thermalAnalyse({ runs: [{ label: 'a', timeS: [0], temperatureC: [20] }] })).toThrow(InputError);
-    expect(() => thermalAnalyse({ runs: [{ label: 'a', timeS: [0, 60, 30], temperatureC: [20, 21, 22] }] })).toThrow(/backwards/);
+    expect(() => thermalAnalyse({ runs: [{ label: 'a', timeS: [0, 60, 30], temperatureC: [20, 21, 22] }] })).toThrow(
+      /backwards/,
+    );
   });
 });
 
 describe('ThermalInputSchema', () => {
   it('refuses NaN, text and mismatched lengths', () => {
-    expect(ThermalInputSchema.safeParse({ runs: [{ label: 'a', timeS: [0, 1], temperatureC: [1, NaN] }] }).success).toBe(false);
-    expect(ThermalInputSchema.safeParse({ runs: [{ label: 'a', timeS: [0, 1], temperatureC: [1, 'x'] }] }).success).toBe(false);
-    expect(ThermalInputSchema.safeParse({ runs: [{ label: 'a', timeS: [0, 1], temperatureC: [1] }] }).success).toBe(false);
+    expect(
+      ThermalInputSchema.safeParse({ runs: [{ label: 'a', timeS: [0, 1], temperatureC: [1, NaN] }] }).success,
+    ).toBe(false);
+    expect(
+      ThermalInputSchema.safeParse({ runs: [{ label: 'a', timeS: [0, 1], temperatureC: [1, 'x'] }] }).success,
+    ).toBe(false);
+    expect(ThermalInputSchema.safeParse({ runs: [{ label: 'a', timeS: [0, 1], temperatureC: [1] }] }).success).toBe(
+      false,
+    );
   });
 });
 

@@ -41,7 +41,9 @@ describe('vibrationAnalyse', () => {
 
   it('puts the whole mean square of a sine into the band holding it (Parseval)', () => {
     // Welch 1967: the PSD integrates to the variance; 2 % for window and edge losses.
-    const r = vibrationAnalyse(VibrationInputSchema.parse({ ...record(8000, 12.5), units: 'g', bands: [{ lowHz: 10, highHz: 15 }] }));
+    const r = vibrationAnalyse(
+      VibrationInputSchema.parse({ ...record(8000, 12.5), units: 'g', bands: [{ lowHz: 10, highHz: 15 }] }),
+    );
     expect(r.bands[0]!.grmsX / r.axes.x.rmsG).toBeGreaterThan(0.98);
     expect(r.bands[0]!.grmsX / r.axes.x.rmsG).toBeLessThan(1.02);
   });
@@ -59,13 +61,17 @@ describe('vibrationAnalyse', () => {
   it('assumes m/s² with a warning when the readings carry no gravity', () => {
     const rnd = seededRandom(1);
     const base = record(2000);
-    const r = vibrationAnalyse(VibrationInputSchema.parse({ ...base, x: base.x.map(() => 3 * rnd.normal()), z: base.z.map(() => 0) }));
+    const r = vibrationAnalyse(
+      VibrationInputSchema.parse({ ...base, x: base.x.map(() => 3 * rnd.normal()), z: base.z.map(() => 0) }),
+    );
     expect(r.units.source).toBe('assumed');
     expect(r.warnings.length).toBeGreaterThan(0);
   });
 
   it('refuses a record too short for the PSD, saying how long would work', () => {
-    expect(() => vibrationAnalyse(VibrationInputSchema.parse(record(VIBRATION_MIN_SAMPLES - 1)))).toThrow(/at least 256/);
+    expect(() => vibrationAnalyse(VibrationInputSchema.parse(record(VIBRATION_MIN_SAMPLES - 1)))).toThrow(
+      /at least 256/,
+    );
   });
 
   it('refuses uneven sampling beyond the tolerance', () => {
@@ -87,7 +93,9 @@ describe('vibrationAnalyse', () => {
   });
 
   it('refuses a segment length longer than the record', () => {
-    expect(() => vibrationAnalyse(VibrationInputSchema.parse({ ...record(1000), segmentLength: 2048 }))).toThrow(InputError);
+    expect(() => vibrationAnalyse(VibrationInputSchema.parse({ ...record(1000), segmentLength: 2048 }))).toThrow(
+      InputError,
+    );
   });
 });
 

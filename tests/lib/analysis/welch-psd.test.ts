@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { hannPeriodic, psdBandPower, welchDefaultSegmentLength, welchPsd, welchSegmentCount } from '../../../src/lib/analysis/welch-psd';
+import {
+  hannPeriodic,
+  psdBandPower,
+  welchDefaultSegmentLength,
+  welchPsd,
+  welchSegmentCount,
+} from '../../../src/lib/analysis/welch-psd';
 import { seededRandom } from './seeded-random';
 
 function variance(x: ArrayLike<number>): number {
@@ -36,7 +42,10 @@ describe('welchPsd', () => {
 
   it('integrates to the variance of a multi-tone signal within 2 % (Parseval)', () => {
     const fs = 200;
-    const x = Float64Array.from({ length: 40_000 }, (_, i) => Math.sin(2 * Math.PI * 12.3 * i / fs) + 0.5 * Math.sin(2 * Math.PI * 47.1 * i / fs + 1));
+    const x = Float64Array.from(
+      { length: 40_000 },
+      (_, i) => Math.sin((2 * Math.PI * 12.3 * i) / fs) + 0.5 * Math.sin((2 * Math.PI * 47.1 * i) / fs + 1),
+    );
     const p = welchPsd(x, fs, 512);
     const area = psdBandPower(p, 0, fs);
     expect(Math.abs(area / variance(x) - 1)).toBeLessThan(0.02);

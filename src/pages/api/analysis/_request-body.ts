@@ -8,7 +8,10 @@ import { readJson, readTextCapped } from '../../../lib/http/respond';
 export type AnalysisBody = { kind: 'json'; body: unknown } | { kind: 'csv'; text: string };
 
 /** Reads JSON (application/json) or CSV (text/csv) from the request within the given caps, bytes. */
-export async function analysisBodyRead(request: Request, limits: { jsonBytes: number; csvBytes: number }): Promise<AnalysisBody> {
+export async function analysisBodyRead(
+  request: Request,
+  limits: { jsonBytes: number; csvBytes: number },
+): Promise<AnalysisBody> {
   const type = (request.headers.get('content-type') ?? '').toLowerCase();
   if (type.includes('application/json')) return { kind: 'json', body: await readJson(request, limits.jsonBytes) };
   if (type.includes('text/csv')) {

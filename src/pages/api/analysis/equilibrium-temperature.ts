@@ -4,7 +4,11 @@
  */
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
-import { EQUILIBRIUM_JSON_MAX_BYTES, EquilibriumTemperatureInputSchema, equilibriumTemperature } from '../../../lib/analysis/equilibrium-temperature';
+import {
+  EQUILIBRIUM_JSON_MAX_BYTES,
+  EquilibriumTemperatureInputSchema,
+  equilibriumTemperature,
+} from '../../../lib/analysis/equilibrium-temperature';
 import { equilibriumTemperatureSavedResult } from '../../../lib/analysis/saved-result';
 import { parseInput } from '../../../lib/validation';
 

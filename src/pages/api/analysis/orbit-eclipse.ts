@@ -4,7 +4,11 @@
  */
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
-import { ORBIT_ECLIPSE_JSON_MAX_BYTES, OrbitEclipseInputSchema, orbitEclipse } from '../../../lib/analysis/orbit-eclipse';
+import {
+  ORBIT_ECLIPSE_JSON_MAX_BYTES,
+  OrbitEclipseInputSchema,
+  orbitEclipse,
+} from '../../../lib/analysis/orbit-eclipse';
 import { orbitEclipseSavedResult } from '../../../lib/analysis/saved-result';
 import { parseInput } from '../../../lib/validation';
 

@@ -6,13 +6,21 @@
  */
 import { endpoint } from '../../../lib/http/endpoint';
 import { vibrationSavedResult } from '../../../lib/analysis/saved-result';
-import { VIBRATION_JSON_MAX_BYTES, VibrationInputSchema, VibrationOptionsSchema, vibrationAnalyse } from '../../../lib/analysis/vibration';
+import {
+  VIBRATION_JSON_MAX_BYTES,
+  VibrationInputSchema,
+  VibrationOptionsSchema,
+  vibrationAnalyse,
+} from '../../../lib/analysis/vibration';
 import { VIBRATION_CSV_MAX_BYTES, vibrationInputFromCsv } from '../../../lib/analysis/vibration-csv';
 import { parseInput } from '../../../lib/validation';
 import { analysisBodyRead } from './_request-body';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request, url }) => {
-  const body = await analysisBodyRead(request, { jsonBytes: VIBRATION_JSON_MAX_BYTES, csvBytes: VIBRATION_CSV_MAX_BYTES });
+  const body = await analysisBodyRead(request, {
+    jsonBytes: VIBRATION_JSON_MAX_BYTES,
+    csvBytes: VIBRATION_CSV_MAX_BYTES,
+  });
   if (body.kind === 'json') {
     const result = vibrationAnalyse(parseInput(VibrationInputSchema, body.body));
     return { result, savedResult: vibrationSavedResult(result) };
@@ -20,7 +28,10 @@ export const POST = endpoint({ access: ['anyone'] }, async ({ request, url }) =>
   const segment = url.searchParams.get('segmentLength');
   const options = parseInput(
     VibrationOptionsSchema,
-    { units: url.searchParams.get('units') ?? undefined, segmentLength: segment === null ? undefined : Number(segment) },
+    {
+      units: url.searchParams.get('units') ?? undefined,
+      segmentLength: segment === null ? undefined : Number(segment),
+    },
     'query',
   );
   const { input, unitSource } = vibrationInputFromCsv(body.text, options);
