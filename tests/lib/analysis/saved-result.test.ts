@@ -3,17 +3,15 @@ import { CleanroomInputSchema, cleanroomClassify } from '../../../src/lib/analys
 import { MagneticInputSchema, dipoleFieldAxialT, magneticFieldFit } from '../../../src/lib/analysis/magnetic';
 import { orbitEclipse } from '../../../src/lib/analysis/orbit-eclipse';
 import { psdProfileGrms } from '../../../src/lib/analysis/psd-profile';
+import { SAVED_RESULT_MAX_POINTS, SavedResultSchema, seriesDownsample } from '../../../src/lib/analysis/saved-result';
 import {
-  SAVED_RESULT_MAX_POINTS,
-  SavedResultSchema,
   cleanroomSavedResult,
   magneticSavedResult,
   orbitEclipseSavedResult,
   psdProfileSavedResult,
-  seriesDownsample,
   thermalSavedResult,
   vibrationSavedResult,
-} from '../../../src/lib/analysis/saved-result';
+} from '../../../src/lib/analysis/saved-result-tools';
 import { ThermalInputSchema, thermalAnalyse } from '../../../src/lib/analysis/thermal';
 import { VibrationInputSchema, vibrationAnalyse } from '../../../src/lib/analysis/vibration';
 

@@ -5,7 +5,7 @@
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { CLEANROOM_JSON_MAX_BYTES, CleanroomInputSchema, cleanroomClassify } from '../../../lib/analysis/cleanroom';
-import { cleanroomSavedResult } from '../../../lib/analysis/saved-result';
+import { cleanroomSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {

@@ -9,7 +9,7 @@ import {
   EquilibriumTemperatureInputSchema,
   equilibriumTemperature,
 } from '../../../lib/analysis/equilibrium-temperature';
-import { equilibriumTemperatureSavedResult } from '../../../lib/analysis/saved-result';
+import { equilibriumTemperatureSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {

@@ -5,7 +5,7 @@
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { MAGNETIC_JSON_MAX_BYTES, MagneticInputSchema, magneticFieldFit } from '../../../lib/analysis/magnetic';
-import { magneticSavedResult } from '../../../lib/analysis/saved-result';
+import { magneticSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {

@@ -9,7 +9,7 @@ import {
   OrbitEclipseInputSchema,
   orbitEclipse,
 } from '../../../lib/analysis/orbit-eclipse';
-import { orbitEclipseSavedResult } from '../../../lib/analysis/saved-result';
+import { orbitEclipseSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {

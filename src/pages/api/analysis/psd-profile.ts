@@ -5,7 +5,7 @@
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { PSD_PROFILE_JSON_MAX_BYTES, PsdProfileInputSchema, psdProfileGrms } from '../../../lib/analysis/psd-profile';
-import { psdProfileSavedResult } from '../../../lib/analysis/saved-result';
+import { psdProfileSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {

@@ -4,7 +4,7 @@
  * { result, savedResult }.
  */
 import { endpoint } from '../../../lib/http/endpoint';
-import { thermalSavedResult } from '../../../lib/analysis/saved-result';
+import { thermalSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { THERMAL_JSON_MAX_BYTES, ThermalInputSchema, thermalAnalyse } from '../../../lib/analysis/thermal';
 import { THERMAL_CSV_MAX_BYTES, thermalInputFromCsv } from '../../../lib/analysis/thermal-csv';
 import { parseInput } from '../../../lib/validation';

@@ -5,7 +5,7 @@
  * 413. Answers { result, savedResult }.
  */
 import { endpoint } from '../../../lib/http/endpoint';
-import { vibrationSavedResult } from '../../../lib/analysis/saved-result';
+import { vibrationSavedResult } from '../../../lib/analysis/saved-result-tools';
 import {
   VIBRATION_JSON_MAX_BYTES,
   VibrationInputSchema,

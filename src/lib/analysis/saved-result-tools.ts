@@ -1,0 +1,170 @@
+/**
+ * Per-tool builders of the saved result (saved-result.ts) a class journal entry stores: each picks the
+ * plot that tells the tool's story and downsamples it to the saved bounds.
+ */
+import type { CleanroomResult } from './cleanroom';
+import type { EquilibriumTemperatureInput, EquilibriumTemperatureResult } from './equilibrium-temperature';
+import type { MagneticResult } from './magnetic';
+import type { OrbitEclipseInput, OrbitEclipseResult } from './orbit-eclipse';
+import type { PsdProfileResult } from './psd-profile';
+import { SAVED_RESULT_MAX_SERIES, savedResultBuild, seriesDownsample, type SavedResult } from './saved-result';
+import type { ThermalInput, ThermalResult } from './thermal';
+import type { VibrationResult } from './vibration';
+
+const zip = (x: ArrayLike<number>, y: ArrayLike<number>): [number, number][] =>
+  Array.from({ length: Math.min(x.length, y.length) }, (_, i) => [x[i]!, y[i]!]);
+const series = (label: string, pts: [number, number][]) => ({ label, points: seriesDownsample(pts) });
+const positive = (pts: [number, number][]) => pts.filter(([x, y]) => x > 0 && y > 0);
+
+/** Saved form of a vibration result: the statistics and bands, and the PSD per axis on log-log axes. */
+export function vibrationSavedResult(r: VibrationResult): SavedResult {
+  const { psd, ...rest } = r;
+  const { frequencyHz, x, y, z: zz, sum: _sum, ...psdInfo } = psd;
+  return savedResultBuild(
+    'vibration',
+    `3 axes, ${+r.sampleRateHz.toPrecision(4)} Hz, ${+r.durationS.toPrecision(4)} s, input in ${r.units.input}`,
+    { ...rest, psd: psdInfo },
+    {
+      kind: 'loglog',
+      title: 'Acceleration PSD (Welch, Hann)',
+      xLabel: 'Frequency (Hz)',
+      yLabel: 'PSD (g²/Hz)',
+      series: [
+        series('x', positive(zip(frequencyHz, x))),
+        series('y', positive(zip(frequencyHz, y))),
+        series('z', positive(zip(frequencyHz, zz))),
+      ],
+    },
+  );
+}
+
+/** Saved form of a PSD profile: breakpoints and Grms, plotted on log-log axes. */
+export function psdProfileSavedResult(r: PsdProfileResult): SavedResult {
+  return savedResultBuild(
+    'psd-profile',
+    `${r.breakpoints.length} breakpoints, ${r.breakpoints[0]?.frequencyHz}–${r.breakpoints.at(-1)?.frequencyHz} Hz`,
+    r,
+    {
+      kind: 'loglog',
+      title: `PSD profile, ${r.grms.toFixed(2)} Grms`,
+      xLabel: 'Frequency (Hz)',
+      yLabel: 'PSD (g²/Hz)',
+      series: [
+        series(
+          'profile',
+          r.breakpoints.map((b) => [b.frequencyHz, b.psdG2PerHz]),
+        ),
+      ],
+    },
+  );
+}
+
+/** Saved form of thermal runs: each run's readings and, where it was fitted, its Newton's-law curve. */
+export function thermalSavedResult(input: ThermalInput, r: ThermalResult): SavedResult {
+  const plotted = input.runs.slice(0, SAVED_RESULT_MAX_SERIES / 2).flatMap((run, i) => {
+    const fit = r.runs[i]?.fit;
+    const t0 = run.timeS[0] ?? 0;
+    const readings = series(
+      run.label,
+      zip(
+        run.timeS.map((t) => t / 60),
+        run.temperatureC,
+      ),
+    );
+    if (!fit) return [readings];
+    const curve = run.timeS.map((t): [number, number] => [
+      t / 60,
+      fit.finalTemperature + (fit.initialTemperature - fit.finalTemperature) * Math.exp(-(t - t0) / fit.timeConstantS),
+    ]);
+    return [readings, series(`${run.label} (fit)`, curve)];
+  });
+  return savedResultBuild(
+    'thermal',
+    `${input.runs.length} run(s): ${input.runs.map((x) => x.label).join(', ')}`.slice(0, 300),
+    r,
+    {
+      kind: 'line',
+      title: 'Temperature against time',
+      xLabel: 'Time (min)',
+      yLabel: 'Temperature (°C)',
+      series: plotted,
+    },
+  );
+}
+
+/** Saved form of a clean-room result: the worst location's concentration per size against the class limits. */
+export function cleanroomSavedResult(r: CleanroomResult): SavedResult {
+  const measured = series(
+    'worst location',
+    r.perSize.map((s) => [s.sizeUm, s.maxLocationMeanPerM3]),
+  );
+  const limits = r.classLimitsPerM3
+    ? [
+        series(
+          `ISO Class ${r.isoClass} limit`,
+          r.sizesUm.flatMap((s, i) =>
+            r.classLimitsPerM3![i] == null ? [] : [[s, r.classLimitsPerM3![i]!] as [number, number]],
+          ),
+        ),
+      ]
+    : [];
+  return savedResultBuild('cleanroom', `${r.locationsSampled} location(s), sizes ${r.sizesUm.join(', ')} µm`, r, {
+    kind: 'bar',
+    title: r.isoClass ? `Meets ISO Class ${r.isoClass}` : 'Above ISO Class 9',
+    xLabel: 'Particle size (µm)',
+    yLabel: 'Particles per m³',
+    series: [measured, ...limits],
+  });
+}
+
+/** Saved form of a magnetic result: readings and the fitted power law on log-log axes (cm, µT). */
+export function magneticSavedResult(
+  readings: { distanceCm: number; fieldUT: number }[],
+  r: MagneticResult,
+): SavedResult {
+  const pts = positive(readings.map((x, i) => [x.distanceCm, r.netFieldUT[i] ?? NaN] as [number, number]));
+  const xs = pts.map((p) => p[0]);
+  const lo = Math.min(...xs);
+  const hi = Math.max(...xs, r.thresholdDistanceCm ?? 0);
+  const fit = Array.from({ length: 50 }, (_, i): [number, number] => {
+    const d = lo * (hi / lo) ** (i / 49);
+    return [d, r.fieldAt1CmUT * d ** r.exponent];
+  });
+  return savedResultBuild('magnetic', `${readings.length} readings, ${lo}–${Math.max(...xs)} cm`, r, {
+    kind: 'loglog',
+    title: `Field against distance, exponent ${r.exponent.toFixed(2)}`,
+    xLabel: 'Distance (cm)',
+    yLabel: 'Field (µT)',
+    series: [series('readings', pts), series('fit', fit)],
+  });
+}
+
+/** Saved form of an eclipse calculation: minutes in sunlight and in shadow per orbit, as bars. */
+export function orbitEclipseSavedResult(input: OrbitEclipseInput, r: OrbitEclipseResult): SavedResult {
+  return savedResultBuild('orbit-eclipse', `circular orbit at ${input.altitudeKm} km, beta angle 0`, r, {
+    kind: 'bar',
+    title: `One orbit: ${r.periodMin.toFixed(1)} min`,
+    xLabel: 'Sunlight (1) and eclipse (2)',
+    yLabel: 'Minutes',
+    series: [series('sunlight', [[1, r.sunlitMin]]), series('eclipse', [[2, r.eclipseMin]])],
+  });
+}
+
+/** Saved form of an equilibrium-temperature calculation: the temperature in °C as one bar. */
+export function equilibriumTemperatureSavedResult(
+  input: EquilibriumTemperatureInput,
+  r: EquilibriumTemperatureResult,
+): SavedResult {
+  return savedResultBuild(
+    'equilibrium-temperature',
+    `α ${input.absorptivity}, ε ${input.emissivity}, area ratio ${input.areaRatio}, ${input.distanceAu} AU`,
+    { ...r },
+    {
+      kind: 'bar',
+      title: `Equilibrium ${r.temperatureC.toFixed(1)} °C`,
+      xLabel: 'Distance from the Sun (AU)',
+      yLabel: 'Temperature (°C)',
+      series: [series('equilibrium', [[input.distanceAu, r.temperatureC]])],
+    },
+  );
+}
