@@ -8,8 +8,7 @@ import { hash, verify } from '@node-rs/argon2';
 /** @node-rs/argon2's Algorithm.Argon2id (a const enum, which isolated modules cannot import). */
 const ARGON2ID = 2;
 
-export const PASSWORD_MIN_LENGTH = 15;
-export const PASSWORD_MAX_LENGTH = 128;
+export { PASSWORD_MIN_LENGTH, PASSWORD_MAX_LENGTH } from './password-rules';
 
 const ARGON2_OPTIONS = { algorithm: ARGON2ID, memoryCost: 19_456, timeCost: 2, parallelism: 1 } as const;
 

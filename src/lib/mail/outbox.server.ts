@@ -1,0 +1,27 @@
+/**
+ * Reads the messages captured by the local SMTP fake (development only: MAIL_OUTBOX_URL is set by npm start and
+ * npm test, and empty when a real SMTP_URL is configured).
+ */
+import type { CapturedMail } from '../../../scripts/lib/smtp-fake';
+
+/** A captured message, as the SMTP fake serves it. */
+export type OutboxMessage = CapturedMail;
+
+/** True when an outbox exists to read (development and tests). */
+export function outboxAvailable(): boolean {
+  return Boolean(process.env.MAIL_OUTBOX_URL);
+}
+
+/** The captured messages, newest first; null when there is no outbox or it cannot be reached. */
+export async function outboxMessages(): Promise<OutboxMessage[] | null> {
+  const url = process.env.MAIL_OUTBOX_URL;
+  if (!url) return null;
+  try {
+    const res = await fetch(url, { signal: AbortSignal.timeout(3000) });
+    if (!res.ok) return null;
+    const messages = (await res.json()) as OutboxMessage[];
+    return messages.slice().reverse();
+  } catch {
+    return null;
+  }
+}
