@@ -23,7 +23,15 @@ export function assemblySteps(pieces: readonly Piece[]): AssemblyStep[] {
   return ordered.map((key, i) => {
     const group = byStep.get(key)!;
     const tabNumbers = [...new Set(group.flatMap((p) => p.tabs.map((t) => t.number)))].sort((a, b) => a - b);
-    const action = group.map((p) => assemblyAction(p.partKind, p.label, p.tabs.map((t) => t.number).sort((a, b) => a - b))).join(' ');
+    const action = group
+      .map((p) =>
+        assemblyAction(
+          p.partKind,
+          p.label,
+          p.tabs.map((t) => t.number).sort((a, b) => a - b),
+        ),
+      )
+      .join(' ');
     return {
       number: i + 1,
       pieceIds: group.map((p) => p.id),

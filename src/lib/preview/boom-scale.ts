@@ -30,17 +30,31 @@ export interface BoomScale {
 export function boomScale(model: Model, scaleDenominator: number, units: UnitSystem = 'metric'): BoomScale {
   const [a, b] = modelSpan(model).footprintMm.map((d) => d / scaleDenominator) as [number, number];
   const room = VENUES.classroom;
-  const [L, W] = [Math.max(room.lengthMm, room.widthMm), Math.min(room.lengthMm, room.widthMm)].map((d) => d * (1 - 2 * VENUE_MARGIN_FRACTION)) as [number, number];
+  const [L, W] = [Math.max(room.lengthMm, room.widthMm), Math.min(room.lengthMm, room.widthMm)].map(
+    (d) => d * (1 - 2 * VENUE_MARGIN_FRACTION),
+  ) as [number, number];
   const fitsClassroom = a <= L && b <= W;
   const booms = model.appendages.flatMap((p) =>
-    p.kind === 'wire-boom' ? [{ label: p.label, deployedLengthMm: wireBoomThread(p.id, p.label, p.lengthM, scaleDenominator).deployedLengthMm }] : [],
+    p.kind === 'wire-boom'
+      ? [
+          {
+            label: p.label,
+            deployedLengthMm: wireBoomThread(p.id, p.label, p.lengthM, scaleDenominator).deployedLengthMm,
+          },
+        ]
+      : [],
   );
   const personMultiple = a / PERSON_HEIGHT_MM;
   const what = booms.length > 0 ? 'With its booms out, the model spans' : 'The model spans';
-  const times = personMultiple >= 0.1 ? `about ${personMultiple.toFixed(1)} times the height of a ${lengthLabel(PERSON_HEIGHT_MM, units)} person` : `far shorter than a ${lengthLabel(PERSON_HEIGHT_MM, units)} person`;
+  const times =
+    personMultiple >= 0.1
+      ? `about ${personMultiple.toFixed(1)} times the height of a ${lengthLabel(PERSON_HEIGHT_MM, units)} person`
+      : `far shorter than a ${lengthLabel(PERSON_HEIGHT_MM, units)} person`;
   const description =
     `${what} ${lengthLabel(a, units)} × ${lengthLabel(b, units)} at 1:${scaleDenominator}: ${times}. ` +
-    (fitsClassroom ? `It fits a ${room.label.toLowerCase()} with room to walk around it.` : `It does not fit a ${room.label.toLowerCase()}; lay it out in a gym or outdoors.`);
+    (fitsClassroom
+      ? `It fits a ${room.label.toLowerCase()} with room to walk around it.`
+      : `It does not fit a ${room.label.toLowerCase()}; lay it out in a gym or outdoors.`);
   return {
     scaleDenominator,
     footprintMm: [a, b],

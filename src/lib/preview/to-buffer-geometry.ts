@@ -49,7 +49,8 @@ function faceStripTriangles(polygonMm: readonly Vec2Mm[], curved: CurvedDevelopm
   const isApex = b.length === 1;
   if (!isApex && b.some((v, i) => i > 0 && t[v]! < t[b[i - 1]!]! - 1e-12)) return null;
   const triangles: FaceTriangle[] = [];
-  let i = 0, j = 0;
+  let i = 0,
+    j = 0;
   while (i < a.length - 1 || j < b.length - 1) {
     const advanceA = j === b.length - 1 || (i < a.length - 1 && t[a[i + 1]!]! <= t[b[j + 1]!]!);
     triangles.push(orientCcw(polygonMm, advanceA ? [a[i]!, a[i + 1]!, b[j]!] : [a[i]!, b[j + 1]!, b[j]!]));

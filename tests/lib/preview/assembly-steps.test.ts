@@ -37,7 +37,11 @@ describe('assemblySteps', () => {
   test('orders steps by assemblyStep and renumbers gaps', () => {
     const [body, ...rest] = pieces('wren-3u');
     const shuffled = [{ ...rest[1]!, assemblyStep: 9 }, body!, { ...rest[0]!, assemblyStep: 5 }];
-    expect(assemblySteps(shuffled).map((s) => [s.number, s.pieceIds[0]])).toEqual([[1, 'body'], [2, rest[0]!.id], [3, rest[1]!.id]]);
+    expect(assemblySteps(shuffled).map((s) => [s.number, s.pieceIds[0]])).toEqual([
+      [1, 'body'],
+      [2, rest[0]!.id],
+      [3, rest[1]!.id],
+    ]);
   });
 
   test('returns no steps for no pieces', () => {

@@ -27,11 +27,15 @@ describe('boomScale', () => {
 
   test('says in words how long the span is and how it compares with a person', () => {
     const s = boomScale(demoModel('skein-probe'), 20);
-    expect(s.description).toBe('With its booms out, the model spans 3.63 m × 3.62 m at 1:20: about 2.1 times the height of a 1.7 m person. It fits a classroom (9 × 7 m) with room to walk around it.');
+    expect(s.description).toBe(
+      'With its booms out, the model spans 3.63 m × 3.62 m at 1:20: about 2.1 times the height of a 1.7 m person. It fits a classroom (9 × 7 m) with room to walk around it.',
+    );
   });
 
   test('describes a model without booms without mentioning them', () => {
     // 24 facets with corners on the 0.5 m circle: 0.5·cos(π/24) = 0.4957 m across the flats, 9.9 cm at 1:5.
-    expect(boomScale(demoModel('thermal-puck'), 5).description).toMatch(/^The model spans 9\.9 cm × 9\.9 cm at 1:5: far shorter than/);
+    expect(boomScale(demoModel('thermal-puck'), 5).description).toMatch(
+      /^The model spans 9\.9 cm × 9\.9 cm at 1:5: far shorter than/,
+    );
   });
 });

@@ -16,30 +16,46 @@ function triangleAreaSum(g: BufferGeometry): number {
   const idx = g.getIndex()!;
   let sum = 0;
   for (let i = 0; i < idx.count; i += 3) {
-    const [a, b, c] = [idx.getX(i), idx.getX(i + 1), idx.getX(i + 2)].map((k) => [pos.getX(k), pos.getY(k), pos.getZ(k)]) as number[][];
+    const [a, b, c] = [idx.getX(i), idx.getX(i + 1), idx.getX(i + 2)].map((k) => [
+      pos.getX(k),
+      pos.getY(k),
+      pos.getZ(k),
+    ]) as number[][];
     const u = [b![0]! - a![0]!, b![1]! - a![1]!, b![2]! - a![2]!];
     const v = [c![0]! - a![0]!, c![1]! - a![1]!, c![2]! - a![2]!];
-    sum += 0.5 * Math.hypot(u[1]! * v[2]! - u[2]! * v[1]!, u[2]! * v[0]! - u[0]! * v[2]!, u[0]! * v[1]! - u[1]! * v[0]!);
+    sum +=
+      0.5 * Math.hypot(u[1]! * v[2]! - u[2]! * v[1]!, u[2]! * v[0]! - u[0]! * v[2]!, u[0]! * v[1]! - u[1]! * v[0]!);
   }
   return sum;
 }
 
-const kit = (id: string, scale: number): Piece[] => modelPatterns(demoModel(id), { scaleDenominator: scale, paperGsm: 160 }).pieces;
-const allPieces = DEMO_IDS.flatMap((id) => SCALES.flatMap((s) => kit(id, s).map((p) => ({ name: `${id} 1:${s} ${p.id}`, piece: p }))));
+const kit = (id: string, scale: number): Piece[] =>
+  modelPatterns(demoModel(id), { scaleDenominator: scale, paperGsm: 160 }).pieces;
+const allPieces = DEMO_IDS.flatMap((id) =>
+  SCALES.flatMap((s) => kit(id, s).map((p) => ({ name: `${id} 1:${s} ${p.id}`, piece: p }))),
+);
 const flatPieces = allPieces.filter(({ piece }) => !piece.hinge.curved);
 const curvedPieces = allPieces.filter(({ piece }) => piece.hinge.curved);
 
 describe('faceTriangles', () => {
   test('gives n − 2 counter-clockwise triangles for a convex polygon', () => {
     // A triangulation of a simple n-gon has n − 2 triangles (de Berg et al., Computational Geometry, Thm 3.1).
-    const hexagon = Array.from({ length: 6 }, (_, i) => [Math.cos((i * Math.PI) / 3), Math.sin((i * Math.PI) / 3)] as const);
+    const hexagon = Array.from(
+      { length: 6 },
+      (_, i) => [Math.cos((i * Math.PI) / 3), Math.sin((i * Math.PI) / 3)] as const,
+    );
     const tris = faceTriangles(hexagon);
     expect(tris).toHaveLength(4);
     for (const t of tris) expect(polygonArea(t.map((i) => hexagon[i]!))).toBeGreaterThan(0);
   });
 
   test('returns no triangles for fewer than three points', () => {
-    expect(faceTriangles([[0, 0], [1, 0]])).toEqual([]);
+    expect(
+      faceTriangles([
+        [0, 0],
+        [1, 0],
+      ]),
+    ).toEqual([]);
   });
 
   test('strips a tube between its rulings so no triangle spans more than one step round the tube', () => {
@@ -61,7 +77,8 @@ describe('pieceGeometry', () => {
 
   test.each(flatPieces)('keeps the face area at every fraction, as a rigid motion must: $name', ({ piece }) => {
     // Float32 positions: relative error ~1e-7 per coordinate, so 1e-6 relative on the area.
-    for (const f of FRACTIONS) expect(triangleAreaSum(pieceGeometry(piece, f).surface) / piece.faceAreaMm2).toBeCloseTo(1, 6);
+    for (const f of FRACTIONS)
+      expect(triangleAreaSum(pieceGeometry(piece, f).surface) / piece.faceAreaMm2).toBeCloseTo(1, 6);
   });
 
   test.each(curvedPieces)('keeps the flat polygon area at fraction 0: $name', ({ piece }) => {
@@ -69,28 +86,34 @@ describe('pieceGeometry', () => {
     expect(triangleAreaSum(pieceGeometry(piece, 0).surface) / flatArea).toBeCloseTo(1, 6);
   });
 
-  test.each(curvedPieces.filter(({ piece }) => piece.hinge.curved!.kind === 'tube'))('rolls a tube into the inscribed regular prism: $name', ({ piece }) => {
-    const c = piece.hinge.curved as { kind: 'tube'; radiusMm: number; lengthMm: number };
-    const n = piece.hinge.faces[0]!.polygonMm.length / 2 - 1;
-    // Lateral area of a regular n-gon prism inscribed in radius r: n · 2r·sin(π/n) · L (perimeter × length).
-    const expected = n * 2 * c.radiusMm * Math.sin(Math.PI / n) * c.lengthMm;
-    expect(triangleAreaSum(pieceGeometry(piece, 1).surface) / expected).toBeCloseTo(1, 5);
-  });
+  test.each(curvedPieces.filter(({ piece }) => piece.hinge.curved!.kind === 'tube'))(
+    'rolls a tube into the inscribed regular prism: $name',
+    ({ piece }) => {
+      const c = piece.hinge.curved as { kind: 'tube'; radiusMm: number; lengthMm: number };
+      const n = piece.hinge.faces[0]!.polygonMm.length / 2 - 1;
+      // Lateral area of a regular n-gon prism inscribed in radius r: n · 2r·sin(π/n) · L (perimeter × length).
+      const expected = n * 2 * c.radiusMm * Math.sin(Math.PI / n) * c.lengthMm;
+      expect(triangleAreaSum(pieceGeometry(piece, 1).surface) / expected).toBeCloseTo(1, 5);
+    },
+  );
 
-  test.each(curvedPieces.filter(({ piece }) => piece.hinge.curved!.kind !== 'tube'))('rolls a cone within the chord loss of its exact lateral area: $name', ({ piece }) => {
-    const c = piece.hinge.curved as { baseRadiusMm: number; topRadiusMm: number; heightMm: number };
-    const slant = Math.hypot(c.baseRadiusMm - c.topRadiusMm, c.heightMm);
-    // Frustum lateral area π(R + r)·s (CRC Standard Mathematical Tables, solids); the rim chords cut off
-    // segments of at most 2/3 · chord · sagitta each (Archimedes, Quadrature of the Parabola), and the rolled
-    // sagitta is the flat one (≤ CHORD_TOLERANCE_MM) divided by sin of the cone's half-angle.
-    const exact = Math.PI * (c.baseRadiusMm + c.topRadiusMm) * slant;
-    const sinHalf = (c.baseRadiusMm - c.topRadiusMm) / slant;
-    const loss = (2 / 3) * 2 * Math.PI * (c.baseRadiusMm + c.topRadiusMm) * (CHORD_TOLERANCE_MM / sinHalf);
-    const area = triangleAreaSum(pieceGeometry(piece, 1).surface);
-    expect(exact).toBeCloseTo(piece.faceAreaMm2, 6);
-    expect(area).toBeLessThanOrEqual(exact);
-    expect(area).toBeGreaterThanOrEqual(exact - loss);
-  });
+  test.each(curvedPieces.filter(({ piece }) => piece.hinge.curved!.kind !== 'tube'))(
+    'rolls a cone within the chord loss of its exact lateral area: $name',
+    ({ piece }) => {
+      const c = piece.hinge.curved as { baseRadiusMm: number; topRadiusMm: number; heightMm: number };
+      const slant = Math.hypot(c.baseRadiusMm - c.topRadiusMm, c.heightMm);
+      // Frustum lateral area π(R + r)·s (CRC Standard Mathematical Tables, solids); the rim chords cut off
+      // segments of at most 2/3 · chord · sagitta each (Archimedes, Quadrature of the Parabola), and the rolled
+      // sagitta is the flat one (≤ CHORD_TOLERANCE_MM) divided by sin of the cone's half-angle.
+      const exact = Math.PI * (c.baseRadiusMm + c.topRadiusMm) * slant;
+      const sinHalf = (c.baseRadiusMm - c.topRadiusMm) / slant;
+      const loss = (2 / 3) * 2 * Math.PI * (c.baseRadiusMm + c.topRadiusMm) * (CHORD_TOLERANCE_MM / sinHalf);
+      const area = triangleAreaSum(pieceGeometry(piece, 1).surface);
+      expect(exact).toBeCloseTo(piece.faceAreaMm2, 6);
+      expect(area).toBeLessThanOrEqual(exact);
+      expect(area).toBeGreaterThanOrEqual(exact - loss);
+    },
+  );
 
   test('draws every face boundary as line segments', () => {
     const body = kit('skein-probe', 20)[0]!;

@@ -1,0 +1,86 @@
+import { useCallback, useMemo, useRef, type KeyboardEvent, type RefObject } from 'react';
+import { Canvas } from '@react-three/fiber';
+import type { Piece } from '../../lib/geometry/types';
+import FoldScene from './FoldScene';
+import { viewCommandRun, viewKeyCommand, type ViewActions } from './view-keys';
+import { VIEW_FOV_DEG, viewFrame } from './view-frame';
+
+export interface FoldCanvasProps {
+  pieces: readonly Piece[];
+  foldPercent: number;
+  currentAssemblyStep: number;
+  actionsRef: RefObject<ViewActions | null>;
+  /** Accessible name of the view region. */
+  label: string;
+  /** id of the element listing the view's keys. */
+  hintId: string;
+}
+
+/**
+ * The WebGL view (loaded lazily, with three.js): a focusable region whose keys orbit, zoom and reset; it
+ * sets data-scene-ready and fires the window event 'kitwright:scene-ready' after its first frame.
+ */
+export default function FoldCanvas({
+  pieces,
+  foldPercent,
+  currentAssemblyStep,
+  actionsRef,
+  label,
+  hintId,
+}: FoldCanvasProps) {
+  const wrapper = useRef<HTMLDivElement>(null);
+  const frame = useMemo(() => viewFrame(pieces), [pieces]);
+  const onKeyDown = useCallback(
+    (e: KeyboardEvent<HTMLDivElement>) => {
+      if (e.altKey || e.ctrlKey || e.metaKey) return;
+      const command = viewKeyCommand(e.key);
+      if (!command || !actionsRef.current) return;
+      e.preventDefault();
+      viewCommandRun(actionsRef.current, command);
+    },
+    [actionsRef],
+  );
+  const onRendered = useCallback((percent: number, first: boolean) => {
+    const el = wrapper.current;
+    if (!el) return;
+    el.dataset.renderedFold = String(percent);
+    if (first) {
+      el.dataset.sceneReady = 'true';
+      window.dispatchEvent(new CustomEvent('kitwright:scene-ready', { detail: { foldPercent: percent } }));
+    }
+  }, []);
+  return (
+    <div
+      ref={wrapper}
+      role="region"
+      aria-label={label}
+      aria-describedby={hintId}
+      tabIndex={0}
+      onKeyDown={onKeyDown}
+      data-testid="fold-canvas"
+      className="h-full w-full cursor-grab rounded-lg active:cursor-grabbing"
+    >
+      <Canvas
+        frameloop="demand"
+        dpr={[1, 2]}
+        camera={{
+          fov: VIEW_FOV_DEG,
+          up: [0, 0, 1],
+          position: frame.cameraPosition,
+          near: frame.radiusMm / 100,
+          far: frame.radiusMm * 100,
+        }}
+        aria-hidden="true"
+      >
+        <FoldScene
+          pieces={pieces}
+          foldPercent={foldPercent}
+          currentAssemblyStep={currentAssemblyStep}
+          frame={frame}
+          actionsRef={actionsRef}
+          onRendered={onRendered}
+        />
+      </Canvas>
+    </div>
+  );
+}

@@ -1,0 +1,37 @@
+import type { RefObject } from 'react';
+import type { Piece } from '../../lib/geometry/types';
+import PieceMesh, { type PieceState } from './PieceMesh';
+import ViewRig from './ViewRig';
+import SceneReadySignal from './SceneReadySignal';
+import type { ViewActions } from './view-keys';
+import type { ViewFrame } from './view-frame';
+
+interface Props {
+  pieces: readonly Piece[];
+  foldPercent: number;
+  /** The assemblyStep value of the current step; later steps are ghosted. */
+  currentAssemblyStep: number;
+  frame: ViewFrame;
+  actionsRef: RefObject<ViewActions | null>;
+  onRendered(foldPercent: number, first: boolean): void;
+}
+
+const stateOf = (piece: Piece, current: number): PieceState =>
+  piece.assemblyStep < current ? 'built' : piece.assemblyStep === current ? 'current' : 'later';
+
+/** The lit scene inside the canvas: every piece folded by the slider, the orbit rig and the ready signal. */
+export default function FoldScene({ pieces, foldPercent, currentAssemblyStep, frame, actionsRef, onRendered }: Props) {
+  const fraction = foldPercent / 100;
+  return (
+    <>
+      <color attach="background" args={['#fbf9f4']} />
+      <hemisphereLight position={[0, 0, 1]} args={['#ffffff', '#b9b2a0', 1.6]} />
+      <directionalLight position={[frame.radiusMm * 2, -frame.radiusMm * 3, frame.radiusMm * 4]} intensity={1.8} />
+      {pieces.map((p) => (
+        <PieceMesh key={p.id} piece={p} fraction={fraction} state={stateOf(p, currentAssemblyStep)} />
+      ))}
+      <ViewRig frame={frame} actionsRef={actionsRef} />
+      <SceneReadySignal foldPercent={foldPercent} onRendered={onRendered} />
+    </>
+  );
+}

@@ -1,0 +1,34 @@
+import { DoubleSide, LineBasicMaterial, MeshStandardMaterial } from 'three';
+
+/**
+ * Materials shared by every piece, created once at module load (never per frame or per render): pieces
+ * already built are paper, the current step's pieces teal, later steps a faint ghost.
+ */
+export const PIECE_MATERIALS = {
+  built: new MeshStandardMaterial({
+    color: '#f4efe2',
+    side: DoubleSide,
+    roughness: 0.9,
+    polygonOffset: true,
+    polygonOffsetFactor: 1,
+    polygonOffsetUnits: 1,
+  }),
+  current: new MeshStandardMaterial({
+    color: '#2fa395',
+    side: DoubleSide,
+    roughness: 0.8,
+    polygonOffset: true,
+    polygonOffsetFactor: 1,
+    polygonOffsetUnits: 1,
+  }),
+  later: new MeshStandardMaterial({
+    color: '#c9ced8',
+    side: DoubleSide,
+    roughness: 1,
+    transparent: true,
+    opacity: 0.25,
+    depthWrite: false,
+  }),
+  edge: new LineBasicMaterial({ color: '#1b2330' }),
+  edgeLater: new LineBasicMaterial({ color: '#6b7482', transparent: true, opacity: 0.35 }),
+} as const;
