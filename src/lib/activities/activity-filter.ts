@@ -33,10 +33,11 @@ export function activityFilterFromQuery(params: URLSearchParams): ActivityFilter
   return {
     grade: pick(GRADE_BANDS, params.get('grade')),
     kind: pick(TEST_KINDS, params.get('kind')),
-    time: pick(
-      TIME_BANDS.map((b) => b.id),
-      params.get('time'),
-    ) ?? 'any',
+    time:
+      pick(
+        TIME_BANDS.map((b) => b.id),
+        params.get('time'),
+      ) ?? 'any',
   };
 }
 

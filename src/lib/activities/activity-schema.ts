@@ -26,7 +26,11 @@ export const LibraryEntryBaseSchema = z.object({
   /** Name shown as the page heading and on the PDFs. */
   title: text(80),
   /** One or two sentences for the library card and the page description. */
-  summary: z.string().trim().min(20, 'write at least one full sentence (20 characters)').max(320, 'keep it under 320 characters'),
+  summary: z
+    .string()
+    .trim()
+    .min(20, 'write at least one full sentence (20 characters)')
+    .max(320, 'keep it under 320 characters'),
 });
 
 export const GradeBandSchema = enumOf(GRADE_BANDS, 'grade band');
@@ -54,7 +58,10 @@ export const DataSheetSchema = z.object({
   /** Blank rows printed on the sheet. */
   rows: z.number().int().min(3, 'print at least 3 rows').max(30, 'more than 30 rows do not fit one page'),
   /** Table columns, left to right. */
-  columns: z.array(DataSheetColumnSchema).min(1, 'a data sheet needs at least one column').max(7, 'at most 7 columns fit across a portrait page'),
+  columns: z
+    .array(DataSheetColumnSchema)
+    .min(1, 'a data sheet needs at least one column')
+    .max(7, 'at most 7 columns fit across a portrait page'),
 });
 
 export const StandardAlignmentSchema = z.object({

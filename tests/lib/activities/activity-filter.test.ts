@@ -72,3 +72,16 @@ describe('gradeBandsLabel', () => {
     expect(gradeBandsLabel([])).toBe('—');
   });
 });
+
+describe('activityMaterialLabel', () => {
+  test('prints the amount per team or class, singular for one', async () => {
+    const { activityMaterialLabel } = await import('../../../src/lib/activities/activity-text');
+    expect(activityMaterialLabel({ item: 'Scissors', quantity: 2, per: 'team' })).toBe('Scissors: 2 per team');
+    expect(activityMaterialLabel({ item: 'Kit', quantity: 1, unit: 'sheets', per: 'team' })).toBe(
+      'Kit: 1 sheet per team',
+    );
+    expect(activityMaterialLabel({ item: 'Gloves', quantity: 4, unit: 'pairs', per: 'class' })).toBe(
+      'Gloves: 4 pairs per class',
+    );
+  });
+});

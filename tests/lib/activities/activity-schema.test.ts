@@ -30,7 +30,20 @@ describe('ActivitySchema', () => {
   });
 
   test('accepts every code the brief lists', () => {
-    const codes = ['MS-ETS1-1', 'MS-ETS1-4', 'MS-PS3-3', 'MS-PS2-3', 'MS-PS2-5', '3-PS2-3', 'HS-PS2-5', 'MS-ESS1-3', '3-5-ETS1-1', '3-5-ETS1-3', 'HS-ETS1-4', 'K-2-ETS1-2'];
+    const codes = [
+      'MS-ETS1-1',
+      'MS-ETS1-4',
+      'MS-PS3-3',
+      'MS-PS2-3',
+      'MS-PS2-5',
+      '3-PS2-3',
+      'HS-PS2-5',
+      'MS-ESS1-3',
+      '3-5-ETS1-1',
+      '3-5-ETS1-3',
+      'HS-ETS1-4',
+      'K-2-ETS1-2',
+    ];
     expect(problems(activityFixture({ standards: codes.map((code) => ({ code, note: 'x' })) }))).toEqual([]);
   });
 
@@ -47,14 +60,18 @@ describe('ActivitySchema', () => {
     ['Glue gun and hot glue sticks', 'hot-glue'],
   ])('demands a safety block when materials list "%s"', (item, hazard) => {
     const p = problems(activityFixture({ materials: [{ item, quantity: 1 }] }));
-    expect(p).toEqual([`safety: materials list "${item}" (a ${hazard} hazard), so the activity needs a safety block with hazards: [${hazard}]`]);
+    expect(p).toEqual([
+      `safety: materials list "${item}" (a ${hazard} hazard), so the activity needs a safety block with hazards: [${hazard}]`,
+    ]);
   });
 
   test('demands the missing hazard when a safety block exists but does not cover a material', () => {
     const p = problems(
       activityFixture({ materials: [{ item: 'Neodymium magnets', quantity: 2 }], safety: { hazards: ['scissors'] } }),
     );
-    expect(p).toEqual(['safety.hazards: materials list "Neodymium magnets", so safety.hazards must include "strong-magnet"']);
+    expect(p).toEqual([
+      'safety.hazards: materials list "Neodymium magnets", so safety.hazards must include "strong-magnet"',
+    ]);
   });
 
   test('does not read "magnetic compass" or "dry ice" as hazards they are not', () => {
@@ -71,7 +88,9 @@ describe('ActivitySchema', () => {
   test('rejects an unknown hazard with the list of known ones', () => {
     const p = problems(activityFixture({ safety: { hazards: ['lasers' as never] } }));
     expect(p).toHaveLength(1);
-    expect(p[0]).toMatch(/^safety\.hazards\.0: "lasers" is not a hazard Kitwright knows; use one of craft-knife, .*ladder$/);
+    expect(p[0]).toMatch(
+      /^safety\.hazards\.0: "lasers" is not a hazard Kitwright knows; use one of craft-knife, .*ladder$/,
+    );
   });
 
   test('asks for a trained-staff note when dry ice or a cryogen is a hazard', () => {

@@ -1,0 +1,92 @@
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { PDFDocument } from 'pdf-lib';
+import { describe, expect, test } from 'vitest';
+import { dataSheetPdf } from '../../../src/lib/activities/data-sheet-pdf';
+import { guidePdf } from '../../../src/lib/activities/guide-pdf';
+import { HAZARD_CAUTIONS, SAFETY_GENERAL_NOTE } from '../../../src/lib/activities/safety';
+import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
+import { activitiesParsed, activityFiles } from './activity-files';
+
+const fonts = fixtureFonts();
+const activities = activitiesParsed();
+
+/** Page sizes (pt) and the text of every page, read back by pdf.js (a reader independent of jspdf). */
+async function pdfRead(bytes: Uint8Array) {
+  const doc = await getDocument({ data: bytes.slice(), disableFontFace: true, useSystemFonts: false }).promise;
+  const pages: { widthPt: number; heightPt: number; text: string }[] = [];
+  for (let n = 1; n <= doc.numPages; n++) {
+    const page = await doc.getPage(n);
+    const [x0, y0, x1, y1] = page.view;
+    const content = await page.getTextContent();
+    const text = content.items.map((i) => ('str' in i ? i.str : '')).join(' ');
+    pages.push({ widthPt: x1! - x0!, heightPt: y1! - y0!, text: text.replace(/\s+/g, ' ') });
+  }
+  return pages;
+}
+
+/**
+ * Text with all whitespace removed, so line breaks chosen by the layout do not matter, in Unicode NFKC
+ * because pdf.js normalises what it extracts (the micro sign U+00B5 comes back as Greek mu U+03BC).
+ */
+const squash = (s: string) => s.normalize('NFKC').replace(/\s+/g, '');
+
+// ISO 32000-1:2008 §8.3.2.3: 1 unit = 1/72 in, so Letter (ASME Y14.1, 8.5 × 11 in) is 612 × 792 pt and A4
+// (ISO 216, 210 × 297 mm) is 595.276 × 841.890 pt. jspdf rounds the MediaBox to 0.01 pt: tolerance 0.01 pt.
+const PAPERS = [
+  ['letter', 612, 792],
+  ['a4', 595.276, 841.89],
+] as const;
+
+describe('dataSheetPdf', () => {
+  test.each(PAPERS)('prints one %s page of the standard size for every activity', async (paper, w, h) => {
+    for (const a of activities) {
+      const pages = await pdfRead(dataSheetPdf(a, fonts, paper));
+      expect(pages, a.slug).toHaveLength(1);
+      expect(Math.abs(pages[0]!.widthPt - w)).toBeLessThan(0.01);
+      expect(Math.abs(pages[0]!.heightPt - h)).toBeLessThan(0.01);
+    }
+  });
+
+  test('contains every column name and unit of the data sheet, read back by pdf.js', async () => {
+    for (const a of activities) {
+      const text = squash((await pdfRead(dataSheetPdf(a, fonts)))[0]!.text);
+      for (const c of a.record.columns) {
+        expect(text, `${a.slug}: ${c.name}`).toContain(squash(c.name));
+        if (c.unit) expect(text, `${a.slug}: ${c.unit}`).toContain(squash(`(${c.unit})`));
+      }
+      expect(text).toContain(squash(a.title));
+      expect(text).toContain('Classcode');
+    }
+  });
+
+  test('agrees with pdf-lib on the page count and size', async () => {
+    const lib = await PDFDocument.load(dataSheetPdf(activities[0]!, fonts, 'a4'));
+    expect(lib.getPageCount()).toBe(1);
+    expect(lib.getPage(0).getSize().width).toBeCloseTo(595.276, 2);
+  });
+});
+
+describe('guidePdf', () => {
+  test.each(PAPERS)('prints %s pages of the standard size', async (paper, w, h) => {
+    const pages = await pdfRead(guidePdf(activities[0]!, fonts, { paper }));
+    expect(pages.length).toBeGreaterThanOrEqual(2);
+    for (const p of pages) {
+      expect(Math.abs(p.widthPt - w)).toBeLessThan(0.01);
+      expect(Math.abs(p.heightPt - h)).toBeLessThan(0.01);
+    }
+  });
+
+  test('prints each hazard caution, the school-rules note, every step and the kit builder link', async () => {
+    const files = activityFiles();
+    for (const [i, a] of activities.entries()) {
+      const pages = await pdfRead(guidePdf(a, fonts, { body: files[i]!.body, origin: 'https://kits.example.org' }));
+      const text = squash(pages.map((p) => p.text).join(' '));
+      for (const h of a.safety?.hazards ?? [])
+        expect(text, `${a.slug} ${h}`).toContain(squash(HAZARD_CAUTIONS[h].caution));
+      expect(text).toContain(squash(SAFETY_GENERAL_NOTE));
+      for (const s of a.steps) expect(text, a.slug).toContain(squash(s));
+      expect(text).toContain(squash(`https://kits.example.org/kits/new?model=${a.models[0]}&activity=${a.slug}`));
+      expect(text).toContain('Whyflighthardwaredoesthis');
+    }
+  });
+});
