@@ -1,0 +1,84 @@
+/**
+ * Server adapter: builds one output of a kit (SVG sheets, PDF, STL or JSON) through buildKit, refusing scales
+ * at which a piece or tab is too small to cut (with the solver's message of what would work), timing each
+ * stage, and caching the result by content hash.
+ */
+import { PIECE_SIZE_MIN_MM, TAB_DEPTH_MIN_MM } from '../geometry/paper';
+import { InputError } from '../errors';
+import { pieceAcrossMm, pieceTabDepthMm, solvePaperScale } from '../layout/scale-solver';
+import type { Piece } from '../geometry/types';
+import { buildKit, GEOMETRY_KIT_ENGINE, type KitBuild, type KitEngine, type KitOutput } from './build-kit';
+import { contentHash } from './content-hash';
+import { kitFonts } from './fonts.server';
+import type { KitRequest } from './kit-request';
+import { KitCache } from './kit-cache.server';
+
+/** Milliseconds spent in each stage the build went through, and in total. */
+export type KitTimingsMs = Partial<Record<'patterns' | 'layout' | KitOutput, number>> & { total: number };
+
+export interface KitOutputBuild {
+  build: KitBuild;
+  timingsMs: KitTimingsMs;
+}
+
+/** Throws the solver's InputError when a piece is under PIECE_SIZE_MIN_MM across or a tab under TAB_DEPTH_MIN_MM. */
+export function kitScaleGuard(request: KitRequest, pieces: readonly Piece[]): void {
+  const small = pieces.some(
+    (p) => pieceAcrossMm(p) < PIECE_SIZE_MIN_MM || pieceTabDepthMm(p, request.paperGsm) < TAB_DEPTH_MIN_MM,
+  );
+  if (!small) return;
+  // The slow path (the solver searches for the smallest workable scale) runs only for a refused request.
+  solvePaperScale(request.model, {
+    sheetId: request.sheetSizeId,
+    paperGsm: request.paperGsm,
+    scaleDenominator: request.scaleDenominator,
+  });
+  throw new InputError(
+    `At 1:${request.scaleDenominator} some pieces are under ${PIECE_SIZE_MIN_MM} mm or have tabs under ${TAB_DEPTH_MIN_MM} mm; choose a larger scale (a smaller N).`,
+    { scaleDenominator: ['too small to cut and glue'] },
+  );
+}
+
+function guardedEngine(request: KitRequest): KitEngine {
+  return {
+    patterns: (model, n, gsm) => {
+      const result = GEOMETRY_KIT_ENGINE.patterns(model, n, gsm);
+      kitScaleGuard(request, result.pieces);
+      return result;
+    },
+    mesh: GEOMETRY_KIT_ENGINE.mesh,
+  };
+}
+
+const cache = new KitCache<KitOutputBuild>(({ build }) => {
+  const files = (build.pdf?.byteLength ?? 0) + (build.stl?.byteLength ?? 0) + (build.json?.length ?? 0);
+  return files + (build.svgSheets ?? []).reduce((sum, s) => sum + s.length, 0) + 50_000;
+});
+
+/** One output of a kit, built (or taken from the cache) from a parsed request; InputError when impossible. */
+export async function kitOutputBuild(
+  request: KitRequest,
+  output: KitOutput,
+  signal?: AbortSignal,
+): Promise<KitOutputBuild> {
+  const hash = await contentHash(request);
+  return cache.get(`${hash}:${output}`, async () => {
+    const fonts = await kitFonts();
+    const start = performance.now();
+    let last = start;
+    const timingsMs: KitTimingsMs = { total: 0 };
+    const build = await buildKit(request, fonts, {
+      engine: guardedEngine(request),
+      outputs: [output],
+      signal,
+      onProgress: (stage, fraction) => {
+        if (fraction < 1) return;
+        const now = performance.now();
+        timingsMs[stage] = Math.round((now - last) * 10) / 10;
+        last = now;
+      },
+    });
+    timingsMs.total = Math.round((performance.now() - start) * 10) / 10;
+    return { build, timingsMs };
+  });
+}

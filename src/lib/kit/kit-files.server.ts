@@ -1,0 +1,85 @@
+/**
+ * Server adapter: a built kit file as an HTTP download (PDF, one sheet's SVG, binary or ASCII STL, JSON) with
+ * a file name from the title, scale and sheet, and an ETag from the content hash so a browser revalidates
+ * cheaply instead of downloading again.
+ */
+import { InputError } from '../errors';
+import { stlAscii } from '../render/stl';
+import { GEOMETRY_KIT_ENGINE, type KitBuild, type KitOutput } from './build-kit';
+import type { KitRequest } from './kit-request';
+
+export interface KitFileOptions {
+  /** The raw ?sheet= value for SVG (1-based; the first sheet when null). */
+  sheet?: string | null;
+  /** STL flavour. */
+  stlFormat?: 'binary' | 'ascii';
+  /** inline (shown in the browser, e.g. a thumbnail) or attachment (saved). */
+  disposition?: 'inline' | 'attachment';
+}
+
+const TYPES: Record<KitOutput, string> = {
+  pdf: 'application/pdf',
+  svg: 'image/svg+xml; charset=utf-8',
+  stl: 'model/stl',
+  json: 'application/json; charset=utf-8',
+};
+
+/** A file-name stem like "skein-probe-1-20-letter" (ASCII letters, digits and dashes). */
+export function kitFileStem(title: string, request: KitRequest): string {
+  const words = title
+    .normalize('NFKD')
+    .replace(/[^\w\s-]/g, '')
+    .trim()
+    .toLowerCase()
+    .replace(/[\s_]+/g, '-')
+    .replace(/-+/g, '-')
+    .slice(0, 60);
+  return `${words || 'kit'}-1-${request.scaleDenominator}-${request.sheetSizeId}`;
+}
+
+/** Parses ?sheet=N against the kit's sheet count; 400 naming the valid range otherwise. */
+export function kitSheetParam(value: string | null, sheetCount: number): number {
+  const n = value === null ? 1 : Number(value);
+  if (!Number.isInteger(n) || n < 1 || n > sheetCount) {
+    throw new InputError(`sheet must be a whole number from 1 to ${sheetCount}; received "${value}".`, {
+      sheet: [`1 to ${sheetCount}`],
+    });
+  }
+  return n;
+}
+
+/** The download response for one output of a built kit; 304 when the browser already has this version. */
+export function kitFileResponse(
+  request: Request,
+  kitRequest: KitRequest,
+  build: KitBuild,
+  output: KitOutput,
+  options: KitFileOptions = {},
+): Response {
+  const stem = kitFileStem(build.layout.title, kitRequest);
+  let body: string | Uint8Array;
+  let name = `${stem}.${output}`;
+  let type = TYPES[output];
+  if (output === 'svg') {
+    const sheet = kitSheetParam(options.sheet ?? null, build.layout.sheets.length);
+    body = build.svgSheets![sheet - 1]!;
+    name = `${stem}-sheet-${sheet}-of-${build.layout.sheets.length}.svg`;
+  } else if (output === 'stl' && options.stlFormat === 'ascii') {
+    body = stlAscii(GEOMETRY_KIT_ENGINE.mesh(kitRequest.model, kitRequest.scaleDenominator));
+    name = `${stem}-ascii.stl`;
+    type = 'model/stl; charset=us-ascii';
+  } else {
+    body = output === 'json' ? build.json! : output === 'pdf' ? build.pdf! : build.stl!;
+  }
+  const etag = `"${build.contentHash.slice(0, 32)}-${output}${options.sheet ?? ''}${options.stlFormat ?? ''}"`;
+  const headers: Record<string, string> = {
+    'content-type': type,
+    'content-disposition': `${options.disposition ?? 'attachment'}; filename="${name}"`,
+    'cache-control': 'private, no-cache',
+    etag,
+    'x-content-type-options': 'nosniff',
+  };
+  if (output === 'svg') headers['content-security-policy'] = "default-src 'none'; style-src 'unsafe-inline'";
+  if (request.headers.get('if-none-match') === etag) return new Response(null, { status: 304, headers });
+  return new Response(body as BodyInit, { status: 200, headers });
+}

@@ -1,0 +1,96 @@
+/**
+ * What the kit API accepts: the builder's settings (kit-settings.ts, built from the engine limits here) with
+ * a demo model id or a whole model, and how those inputs become the engine's KitRequest and Venue.
+ */
+import { z } from 'zod';
+import { ModelSchema, type Model } from '../geometry/model-schema';
+import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
+import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
+import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
+import { CustomVenueSchema, VENUES, venueCustom, type Venue, type VenueId } from '../layout/venues';
+import { parseInput } from '../validation';
+import { KIT_COPIES_MAX, KitRequestSchema, type KitRequest } from './kit-request';
+import { kitSettingsSchema, type KitSettingsLimits } from './kit-settings';
+
+const VENUE_IDS = Object.keys(VENUES) as [VenueId, ...VenueId[]];
+
+/** The engine's limits, in the serialisable shape the builder island receives as props. */
+export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[number], VenueId> = {
+  scaleDenominatorMax: SCALE_DENOMINATOR_MAX,
+  paperGsmMin: PAPER_GSM_MIN,
+  paperGsmMax: PAPER_GSM_MAX,
+  copiesMax: KIT_COPIES_MAX,
+  sheetSizeIds: SHEET_SIZE_IDS,
+  venueIds: VENUE_IDS,
+};
+
+export const KitSettingsSchema = kitSettingsSchema(KIT_SETTINGS_LIMITS);
+
+const DemoModelIdSchema = z
+  .string()
+  .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'modelId must be a demo model id like "skein-probe"');
+
+/** A demo model by id, or a whole model in real metres: exactly one of the two. */
+export const ModelSourceSchema = z.object({
+  modelId: DemoModelIdSchema.optional(),
+  model: ModelSchema.optional(),
+});
+
+function oneModel(value: { modelId?: string; model?: unknown }, ctx: z.RefinementCtx): void {
+  if ((value.modelId === undefined) === (value.model === undefined)) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['modelId'],
+      message: 'send either modelId (a demo model) or model, not both or neither',
+    });
+  }
+}
+
+/** Kit inputs: settings plus the model source. */
+export const KitInputsSchema = KitSettingsSchema.merge(ModelSourceSchema).superRefine(oneModel);
+export type KitInputs = z.infer<typeof KitInputsSchema>;
+
+/** Inputs of POST /api/models/patterns: a model, a scale and a paper weight (sheet optional, for messages). */
+export const PatternsRequestSchema = ModelSourceSchema.merge(
+  KitSettingsSchema.pick({ scaleDenominator: true, paperGsm: true }),
+)
+  .extend({ sheetSizeId: KitSettingsSchema.shape.sheetSizeId.default('letter') })
+  .superRefine(oneModel);
+
+/** Inputs of POST /api/scale/solve: a model, sheet, paper, venue and units; a scale to check is optional. */
+export const ScaleSolveRequestSchema = ModelSourceSchema.merge(
+  KitSettingsSchema.pick({ sheetSizeId: true, paperGsm: true, units: true, venue: true }),
+)
+  .extend({
+    scaleDenominator: KitSettingsSchema.shape.scaleDenominator.optional(),
+    ratios: z.enum(['usual', 'any']).default('usual'),
+  })
+  .superRefine(oneModel);
+
+/** The engine's venue for a parsed venue choice (a custom floor is checked against CustomVenueSchema). */
+export function kitVenue(choice: KitInputs['venue']): Venue {
+  if (choice.kind === 'preset') return VENUES[choice.id];
+  return venueCustom(parseInput(CustomVenueSchema, { lengthM: choice.lengthM, widthM: choice.widthM }, 'venue'));
+}
+
+/** The engine request for parsed inputs, the resolved model and the URL the QR code points at. */
+export function kitRequestOf(
+  inputs: Omit<KitInputs, 'modelId' | 'model' | 'venue'>,
+  model: Model,
+  qrUrl: string,
+): KitRequest {
+  return parseInput(
+    KitRequestSchema,
+    {
+      model,
+      ...(inputs.title ? { title: inputs.title } : {}),
+      scaleDenominator: inputs.scaleDenominator,
+      sheetSizeId: inputs.sheetSizeId,
+      paperGsm: inputs.paperGsm,
+      copies: inputs.copies,
+      units: inputs.units,
+      qrUrl,
+    },
+    'kit',
+  );
+}

@@ -1,0 +1,110 @@
+/**
+ * Server adapter behind the builder's calls: sheet previews of unsaved kits, the scale solver with its
+ * explanations, and flat patterns, each from a demo model id or a model sent in the request.
+ */
+import { modelPatterns } from '../geometry/model-patterns';
+import { sheetSize } from '../layout/sheet-sizes';
+import { solveKitScale, solvePaperScale, type KitScale, type PaperScale } from '../layout/scale-solver';
+import type { z } from 'zod';
+import { contentHash } from './content-hash';
+import { demoModelResolve } from './demo-models.server';
+import {
+  kitRequestOf,
+  kitVenue,
+  type KitInputs,
+  type PatternsRequestSchema,
+  type ScaleSolveRequestSchema,
+} from './kit-inputs';
+import { kitOutputBuild, kitScaleGuard, type KitTimingsMs } from './kit-build.server';
+import { KitCache } from './kit-cache.server';
+import { kitSummary, type KitSummary } from './kit-summary';
+import type { KitOutput } from './build-kit';
+
+export interface KitPreview {
+  contentHash: string;
+  title: string;
+  scaleDenominator: number;
+  sheetSizeLabel: string;
+  sheetCount: number;
+  /** One SVG document per sheet, in order. */
+  sheets: string[];
+  summary: KitSummary;
+  timingsMs: KitTimingsMs;
+}
+
+/** Sheets and summary of an unsaved kit; the QR code points at the builder until the kit is saved. */
+export async function kitPreview(inputs: KitInputs, qrUrl: string): Promise<KitPreview> {
+  const { model } = demoModelResolve(inputs);
+  const request = kitRequestOf(inputs, model, qrUrl);
+  const venue = kitVenue(inputs.venue);
+  const { build, timingsMs } = await kitOutputBuild(request, 'svg');
+  const size = sheetSize(request.sheetSizeId);
+  return {
+    contentHash: build.contentHash,
+    title: build.layout.title,
+    scaleDenominator: request.scaleDenominator,
+    sheetSizeLabel: size.label,
+    sheetCount: build.layout.sheets.length,
+    sheets: build.svgSheets ?? [],
+    summary: kitSummary({
+      model,
+      scaleDenominator: request.scaleDenominator,
+      sheetLabel: size.label,
+      venue,
+      units: request.units,
+    }),
+    timingsMs,
+  };
+}
+
+/** One file of an unsaved kit (the builder's downloads before saving). */
+export async function kitPreviewFile(inputs: KitInputs, qrUrl: string, output: KitOutput) {
+  const { model } = demoModelResolve(inputs);
+  return (await kitOutputBuild(kitRequestOf(inputs, model, qrUrl), output)).build;
+}
+
+/** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */
+export function kitPatterns(input: z.infer<typeof PatternsRequestSchema>) {
+  const { model } = demoModelResolve(input);
+  const result = modelPatterns(model, { scaleDenominator: input.scaleDenominator, paperGsm: input.paperGsm });
+  kitScaleGuard(
+    kitRequestOf({ ...input, copies: 1, units: 'metric' }, model, 'https://kitwright.invalid/kits/new'),
+    result.pieces,
+  );
+  return result;
+}
+
+export interface ScaleSolution {
+  /** The scale the builder suggests: one for paper and venue, else the paper model's scale. */
+  suggestedScaleDenominator: number;
+  kit: KitScale;
+  /** The teacher's own scale checked against the sheet, when one was sent. */
+  checked: PaperScale | null;
+  summary: KitSummary;
+}
+
+const solveCache = new KitCache<ScaleSolution>(() => 20_000);
+
+/** The solver's answer with explanations; 400 when a requested scale makes parts too small. */
+export async function kitScaleSolve(input: z.infer<typeof ScaleSolveRequestSchema>): Promise<ScaleSolution> {
+  const { model } = demoModelResolve(input);
+  const venue = kitVenue(input.venue);
+  const key = await contentHash({ ...input, model, solver: 1 });
+  return solveCache.get(key, async () => {
+    const req = { sheetId: input.sheetSizeId, paperGsm: input.paperGsm, ratios: input.ratios };
+    const kit = solveKitScale(model, req, venue, input.units);
+    const checked =
+      input.scaleDenominator === undefined
+        ? null
+        : solvePaperScale(model, { ...req, scaleDenominator: input.scaleDenominator });
+    const suggested = kit.scaleDenominator ?? kit.paper.scaleDenominator;
+    const summary = kitSummary({
+      model,
+      scaleDenominator: input.scaleDenominator ?? suggested,
+      sheetLabel: sheetSize(input.sheetSizeId).label,
+      venue,
+      units: input.units,
+    });
+    return { suggestedScaleDenominator: suggested, kit, checked, summary };
+  });
+}

@@ -1,0 +1,83 @@
+/**
+ * The kit builder's settings as a zod schema built from the engine's limits. Imports zod alone, so the
+ * builder island can validate with the very rules the API applies without shipping the engine: the page
+ * passes KIT_SETTINGS_LIMITS (src/lib/kit/kit-inputs.ts) to the island as plain props.
+ */
+import { z } from 'zod';
+
+/** The engine limits the settings schema is built from (numbers and id lists only, so they serialise). */
+export interface KitSettingsLimits<S extends string = string, V extends string = string> {
+  scaleDenominatorMax: number;
+  paperGsmMin: number;
+  paperGsmMax: number;
+  copiesMax: number;
+  sheetSizeIds: readonly [S, ...S[]];
+  venueIds: readonly [V, ...V[]];
+}
+
+const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
+
+/** Where the booms are laid out: a preset venue by id, or a custom floor in metres. */
+function venueChoiceSchema<V extends string>(venueIds: readonly [V, ...V[]]) {
+  return z.discriminatedUnion('kind', [
+    z.object({ kind: z.literal('preset'), id: z.enum(venueIds as [V, ...V[]]) }),
+    z.object({
+      kind: z.literal('custom'),
+      lengthM: z
+        .number()
+        .finite('the venue length must be a number of metres')
+        .positive('the venue length must be more than 0 m'),
+      widthM: z
+        .number()
+        .finite('the venue width must be a number of metres')
+        .positive('the venue width must be more than 0 m'),
+    }),
+  ]);
+}
+
+/** Scale, sheet, paper, copies, units, venue, title and activity of a kit (no model: callers add it). */
+export function kitSettingsSchema<S extends string, V extends string>(limits: KitSettingsLimits<S, V>) {
+  return z.object({
+    /** Title printed on every sheet; the model's name when left out. */
+    title: z
+      .string()
+      .trim()
+      .min(1, 'the title must not be empty')
+      .max(80, 'keep the title under 80 characters')
+      .optional(),
+    /** The activity the kit is for (its slug), if any. */
+    activitySlug: z.string().regex(SLUG, 'an activity is named by its slug, like "shake-test"').max(80).optional(),
+    /** The kit is 1:N of the real spacecraft. */
+    scaleDenominator: z
+      .number({ invalid_type_error: 'the scale must be a number N of 1:N' })
+      .finite('the scale must be a finite number')
+      .min(1, 'the scale must be 1:1 or smaller, e.g. 20 for 1:20')
+      .max(limits.scaleDenominatorMax, `the scale must be at most 1:${limits.scaleDenominatorMax}`),
+    sheetSizeId: z.enum(limits.sheetSizeIds as [S, ...S[]], {
+      errorMap: () => ({ message: `the sheet must be one of ${limits.sheetSizeIds.join(', ')}` }),
+    }),
+    /** Paper weight, g/m². */
+    paperGsm: z
+      .number({ invalid_type_error: 'the paper weight must be a number of g/m²' })
+      .finite('the paper weight must be a finite number')
+      .min(limits.paperGsmMin, `the paper weight must be at least ${limits.paperGsmMin} g/m²`)
+      .max(limits.paperGsmMax, `the paper weight must be at most ${limits.paperGsmMax} g/m²`),
+    /** Kits for the class: one per team. */
+    copies: z
+      .number({ invalid_type_error: 'copies must be a number' })
+      .int('copies must be a whole number')
+      .min(1, 'copies must be at least 1')
+      .max(limits.copiesMax, `copies must be at most ${limits.copiesMax}`),
+    units: z.enum(['metric', 'us']),
+    venue: venueChoiceSchema(limits.venueIds),
+  });
+}
+
+/** The builder form: the settings plus the demo model's id. */
+export function kitFormSchema<S extends string, V extends string>(limits: KitSettingsLimits<S, V>) {
+  return kitSettingsSchema(limits).extend({
+    modelId: z.string().regex(SLUG, 'choose a model'),
+  });
+}
+export type KitForm = z.infer<ReturnType<typeof kitFormSchema<string, string>>>;
+export type KitVenueChoice = KitForm['venue'];

@@ -1,0 +1,22 @@
+import type { APIContext } from 'astro';
+import type { KitOutput } from '../../../lib/kit/build-kit';
+import { kitFileResponse } from '../../../lib/kit/kit-files.server';
+import { kitOutputBuild } from '../../../lib/kit/kit-build.server';
+import { kitRequestForRow, kitVisible } from '../../../lib/kit/saved-kit.server';
+import { endpoint } from '../../../lib/http/endpoint';
+import { KIT_VIEWERS } from './_access';
+
+/** A GET route serving one file of a saved kit, rebuilt from its inputs (or cached by content hash). */
+export function kitDownloadRoute(output: KitOutput) {
+  return endpoint({ access: KIT_VIEWERS }, async (context: APIContext) => {
+    const row = await kitVisible(context.locals.actor, context.params.id ?? '');
+    const request = kitRequestForRow(row);
+    const { build } = await kitOutputBuild(request, output, context.request.signal);
+    const q = context.url.searchParams;
+    return kitFileResponse(context.request, request, build, output, {
+      ...(output === 'svg' ? { sheet: q.get('sheet') } : {}),
+      ...(output === 'stl' ? { stlFormat: q.get('format') === 'ascii' ? 'ascii' : 'binary' } : {}),
+      disposition: q.get('inline') === '1' ? 'inline' : 'attachment',
+    });
+  });
+}
