@@ -57,6 +57,8 @@ export const DataSheetSchema = z.object({
   instructions: text(400),
   /** Blank rows printed on the sheet. */
   rows: z.number().int().min(3, 'print at least 3 rows').max(30, 'more than 30 rows do not fit one page'),
+  /** Single values written once above the table (a floor area, a background reading); same shape as a column. */
+  fields: z.array(DataSheetColumnSchema).max(4, 'at most 4 single fields fit above the table').default([]),
   /** Table columns, left to right. */
   columns: z
     .array(DataSheetColumnSchema)
@@ -147,7 +149,7 @@ function activityRefine(a: ActivityObject, ctx: z.RefinementCtx): void {
   for (const [path, list] of [
     ['gradeBands', a.gradeBands],
     ['safety.hazards', a.safety?.hazards ?? []],
-    ['record.columns', a.record.columns.map((c) => c.key)],
+    ['record.columns', [...a.record.fields, ...a.record.columns].map((c) => c.key)],
     ['standards', a.standards.map((s) => s.code)],
   ] as const) {
     const d = dupes(list);

@@ -44,6 +44,9 @@ export function dataSheetPdf(
     color: '#46505f',
     afterMm: 4,
   });
+  for (const f of sheet.fields) {
+    pdfFlowText(flow, `${f.name}${f.unit ? ` (${f.unit})` : ''}: ______________`, { bold: true, afterMm: 2.5 });
+  }
   dataSheetTable(flow, sheet.columns, sheet.rows);
   pdfFlowFooters(flow, `Kitwright · ${activity.slug} · student data sheet`);
   return pdfFlowBytes(flow);

@@ -75,7 +75,7 @@ export function guidePdf(activity: Activity, fonts: PdfFonts, options: GuidePdfO
   pdfFlowText(flow, activity.record.instructions);
   pdfFlowList(
     flow,
-    activity.record.columns.map((c) => (c.unit ? `${c.name} (${c.unit})` : c.name)),
+    [...activity.record.fields, ...activity.record.columns].map((c) => (c.unit ? `${c.name} (${c.unit})` : c.name)),
   );
   pdfFlowHeading(flow, 'Discussion');
   pdfFlowList(flow, activity.discussion, true);

@@ -47,10 +47,10 @@ describe('dataSheetPdf', () => {
     }
   });
 
-  test('contains every column name and unit of the data sheet, read back by pdf.js', async () => {
+  test('contains every field and column name and unit of the data sheet, read back by pdf.js', async () => {
     for (const a of activities) {
       const text = squash((await pdfRead(dataSheetPdf(a, fonts)))[0]!.text);
-      for (const c of a.record.columns) {
+      for (const c of [...a.record.fields, ...a.record.columns]) {
         expect(text, `${a.slug}: ${c.name}`).toContain(squash(c.name));
         if (c.unit) expect(text, `${a.slug}: ${c.unit}`).toContain(squash(`(${c.unit})`));
       }
@@ -88,5 +88,28 @@ describe('guidePdf', () => {
       expect(text).toContain(squash(`https://kits.example.org/kits/new?model=${a.models[0]}&activity=${a.slug}`));
       expect(text).toContain('Whyflighthardwaredoesthis');
     }
+  });
+});
+
+describe('activity text and the KitwrightSans subset', () => {
+  // assets/fonts/README.md: the subset keeps Basic Latin, Latin-1, General Punctuation, ← ↑ → ↓, U+2212, ✓ and ✗;
+  // jspdf silently drops glyphs a font lacks, so every printed character must fall in those ranges.
+  const inSubset = (cp: number) =>
+    (cp >= 0x20 && cp <= 0x7e) ||
+    (cp >= 0xa0 && cp <= 0xff) ||
+    (cp >= 0x2000 && cp <= 0x206f) ||
+    (cp >= 0x2190 && cp <= 0x2193) ||
+    [0x0a, 0x2212, 0x2713, 0x2717].includes(cp);
+
+  test('uses only characters the embedded font has', () => {
+    const texts = [
+      ...activitiesParsed().map((a) => JSON.stringify(a)),
+      ...activityFiles().map((f) => f.body),
+      ...Object.values(HAZARD_CAUTIONS).map((c) => c.label + c.caution),
+      SAFETY_GENERAL_NOTE,
+    ];
+    const outside = new Set<string>();
+    for (const t of texts) for (const ch of t) if (!inSubset(ch.codePointAt(0)!)) outside.add(ch);
+    expect([...outside]).toEqual([]);
   });
 });

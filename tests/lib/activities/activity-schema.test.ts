@@ -124,3 +124,12 @@ describe('ActivitySchema', () => {
     ]);
   });
 });
+
+describe('DataSheetSchema fields', () => {
+  test('rejects a single field whose key repeats a column key', () => {
+    const base = activityFixture();
+    const field = { key: 'distance_cm', name: 'Background', unit: 'cm' };
+    const result = ActivitySchema.safeParse({ ...base, record: { ...base.record, fields: [field] } });
+    expect(result.success ? [] : result.error.issues.map((i) => i.message)).toEqual(['"distance_cm" is listed twice']);
+  });
+});
