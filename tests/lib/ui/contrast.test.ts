@@ -1,8 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import theme from '../../../tailwind.config.mjs';
+import { themeColors as c } from '../../../src/styles/theme-colors.mjs';
 import { contrastRatio } from '../../../src/lib/ui/contrast';
-
-const c = theme.theme.extend.colors;
 
 describe('contrastRatio', () => {
   it('gives 21:1 for black on white and 1:1 for equal colours', () => {
