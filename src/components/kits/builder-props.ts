@@ -1,0 +1,19 @@
+import type { KitSettingsLimits, KitForm } from '../../lib/kit/kit-settings';
+import type { KitPreview, ScaleSolution } from '../../lib/kit/kit-queries';
+
+/** Plain data the /kits/new page reads on the server and hands to the KitBuilder island. */
+export interface KitBuilderProps {
+  models: { id: string; title: string; summary: string }[];
+  activities: { slug: string; title: string; models: string[] }[];
+  /** The teacher's own classes (empty for staff, who cannot save). */
+  classes: { id: string; name: string }[];
+  sheetSizes: { id: string; label: string }[];
+  venues: { id: string; label: string }[];
+  usualScales: number[];
+  limits: KitSettingsLimits;
+  initial: KitForm;
+  initialPreview: KitPreview | null;
+  initialSolve: ScaleSolution | null;
+  /** Message when the first preview could not be built on the server. */
+  initialError: string | null;
+}

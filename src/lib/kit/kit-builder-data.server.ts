@@ -1,0 +1,73 @@
+/**
+ * Server adapter: the first data of the kit builder page (models, classes, limits, the solver's suggestion
+ * and the first sheets), read straight from src/lib so the island draws its first frame without a request.
+ */
+import type { Actor } from '../auth/actor';
+import { classListForTeacher } from '../db/classes';
+import { USUAL_SCALE_DENOMINATORS } from '../layout/scale-ratios';
+import { SHEET_SIZES } from '../layout/sheet-sizes';
+import { VENUES } from '../layout/venues';
+import { AppError } from '../errors';
+import { demoModelById, demoModels } from './demo-models.server';
+import { KIT_SETTINGS_LIMITS } from './kit-inputs';
+import { kitPreview, kitScaleSolve } from './kit-preview.server';
+import type { KitForm } from './kit-settings';
+import type { KitBuilderProps } from '../../components/kits/builder-props';
+
+/** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
+export const KIT_DEFAULT_PAPER_GSM = 160;
+
+/** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
+export async function kitBuilderProps(
+  actor: Actor,
+  query: URLSearchParams,
+  activities: KitBuilderProps['activities'],
+  siteUrl: string,
+): Promise<KitBuilderProps> {
+  const models = demoModels();
+  const model = demoModelById(query.get('model') ?? '') ?? demoModelById('skein-probe') ?? models[0]!;
+  const activity = activities.find((a) => a.slug === query.get('activity'));
+  const sheetSizeId = query.get('sheet') === 'a4' ? 'a4' : 'letter';
+  const base = {
+    modelId: model.id,
+    sheetSizeId,
+    paperGsm: KIT_DEFAULT_PAPER_GSM,
+    units: 'metric',
+    venue: { kind: 'preset', id: 'classroom' },
+  } as const;
+  let initialError: string | null = null;
+  const solve = await kitScaleSolve({ ...base, ratios: 'usual' }).catch((err: unknown) => {
+    if (!(err instanceof AppError)) throw err;
+    initialError = err.message;
+    return null;
+  });
+  const initial: KitForm = {
+    ...base,
+    venue: { ...base.venue },
+    scaleDenominator: solve?.suggestedScaleDenominator ?? 20,
+    copies: 1,
+    ...(activity ? { activitySlug: activity.slug } : {}),
+  };
+  const preview = await kitPreview(initial, `${siteUrl.replace(/\/+$/, '')}/kits/new`).catch((err: unknown) => {
+    if (!(err instanceof AppError)) throw err;
+    initialError = err.message;
+    return null;
+  });
+  const classes =
+    actor.kind === 'user' && actor.role === 'teacher'
+      ? (await classListForTeacher(actor.userId)).map((c) => ({ id: c.id, name: c.name }))
+      : [];
+  return {
+    models: models.map(({ id, title, summary }) => ({ id, title, summary })),
+    activities,
+    classes,
+    sheetSizes: Object.values(SHEET_SIZES).map(({ id, label }) => ({ id, label })),
+    venues: Object.values(VENUES).map(({ id, label }) => ({ id, label })),
+    usualScales: [...USUAL_SCALE_DENOMINATORS],
+    limits: KIT_SETTINGS_LIMITS,
+    initial,
+    initialPreview: preview,
+    initialSolve: solve,
+    initialError,
+  };
+}
