@@ -69,8 +69,7 @@ function KitBuilderForm(props: KitBuilderProps) {
     immediate.current = false;
     const timer = setTimeout(() => setSettled(valid), delay);
     return () => clearTimeout(timer);
-    // validKey stands for valid's content.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // validKey stands for valid's content, so an equal form does not restart the timer.
   }, [validKey]);
 
   const preview = useQuery({ ...kitPreviewQueryOptions(settled), placeholderData: keepPreviousData });
