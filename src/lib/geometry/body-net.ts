@@ -1,42 +1,82 @@
 /**
- * The one-piece net of a body: the side walls as a strip (wall i left to right, printed side out), the top
- * and bottom caps hinged to the wall nearest the strip's middle, a tab on one edge of every glued pair.
- * Flat mm, y up; model mm at kit scale.
+ * The flat pattern of a body. Bodies of up to BODY_HINGED_CAP_SIDES_MAX sides are one piece: the side walls
+ * as a strip (wall i left to right, printed side out), the top and bottom caps hinged to the wall nearest
+ * the strip's middle, a tab on one edge of every glued pair. Many-sided bodies (and any body whose hinged
+ * caps would crowd a tab under TAB_DEPTH_MIN_MM) are three pieces: the wall strip with a toothed glue ring
+ * along its top and bottom edges, and two separate caps glued onto the rings. Flat mm, y up; model mm at
+ * kit scale.
  */
 import type { Body } from './model-schema';
 import { bodyFaces, type BodyFace } from './body-shape';
 import { faceFrame, pieceFromNet, type NetFace, type NetTab } from './piece-builder';
-import { netGluePair, type NetEdge } from './net-glue';
-import { paperTabDepthMm } from './paper';
+import { netGluePair, tabFoldAngle, type NetEdge } from './net-glue';
+import { paperTabDepthMm, TAB_DEPTH_MIN_MM } from './paper';
+import { bodyRingTeeth } from './body-ring';
 import type { EdgeLabel, Piece, PlaneFrame, Vec2Mm } from './types';
 import { vec2Length, vec2Sub, vec3Dot, vec3Sub } from './vec';
 
+/** Most sides for which the caps hinge to the wall strip (one-piece net); above it caps are separate pieces. */
+export const BODY_HINGED_CAP_SIDES_MAX = 8;
+
 export interface BodyNet {
-  piece: Piece;
-  /** Each body face's flat placement in the net (flat ↦ model), by face ref ("side:0", "top", …). */
-  frames: Map<string, PlaneFrame>;
+  /** The wall strip (the whole net when the caps hinge to it) first, then the separate caps if any. */
+  pieces: Piece[];
+  /** Where each body face lies ("side:0", "top", …): its piece and the flat ↦ model frame of that face. */
+  faceSpots: Map<string, { piece: Piece; frame: PlaneFrame }>;
   faces: BodyFace[];
 }
 
-/** The body net at 1:scaleDenominator on paper of `gsm`; tab numbers come from `nextNumber`. */
+/** The body pattern at 1:scaleDenominator on paper of `gsm`; tab numbers come from `nextNumber`, in order. */
 export function bodyNet(body: Body, scaleDenominator: number, gsm: number, nextNumber: () => number, assemblyStep: number): BodyNet {
   const faces = bodyFaces(body, scaleDenominator);
   const n = faces.length - 2;
-  const sides = faces.slice(0, n);
+  const hinged = n <= BODY_HINGED_CAP_SIDES_MAX ? bodyNetHinged(faces, gsm, assemblyStep) : null;
+  const built = hinged && !hinged.crowded ? hinged : bodyNetRinged(faces, gsm, assemblyStep);
+  // Tabs were numbered 1, 2, … locally; take kit-wide numbers in the same order.
+  const global = new Map<number, number>();
+  for (const p of built.pieces) for (const t of p.tabs) global.set(t.number, nextNumber());
+  const renumber = (p: Piece): Piece => ({
+    ...p,
+    tabs: p.tabs.map((t) => ({ ...t, number: global.get(t.number)! })),
+    folds: p.folds.map((f) => (f.tabNumber === undefined ? f : { ...f, tabNumber: global.get(f.tabNumber)! })),
+    edgeLabels: p.edgeLabels.map((l) => ({ ...l, number: global.get(l.number)! })),
+  });
+  const pieces = built.pieces.map(renumber);
+  const faceSpots = new Map<string, { piece: Piece; frame: PlaneFrame }>();
+  built.spots.forEach((s, i) => faceSpots.set(faces[i]!.ref, { piece: pieces[s.piece]!, frame: s.frame }));
+  return { pieces, faceSpots, faces };
+}
+
+interface BuiltNet {
+  pieces: Piece[];
+  /** Per body face (sides, top, bottom): index into pieces and the face's frame. */
+  spots: { piece: number; frame: PlaneFrame }[];
+  /** Whether a neighbour trimmed some tab below both TAB_DEPTH_MIN_MM and the depth its edge allows. */
+  crowded: boolean;
+}
+
+/** The wall strip's faces: wall i as a rectangle from x = starts[i], printed side out. */
+function wallStrip(sides: BodyFace[]): { net: NetFace[]; starts: number[]; widths: number[]; heightMm: number } {
   const heightMm = sides[0]!.polygonMm[2]![2];
   const widths = sides.map((f) => vec2Length(vec2Sub(xy(f.polygonMm[1]!), xy(f.polygonMm[0]!))));
   const starts: number[] = [];
   widths.reduce((x, w) => (starts.push(x), x + w), 0);
+  const net: NetFace[] = sides.map((f, i) => ({
+    flatMm: [[starts[i]!, 0], [starts[i]! + widths[i]!, 0], [starts[i]! + widths[i]!, heightMm], [starts[i]!, heightMm]],
+    modelMm: f.polygonMm,
+  }));
+  return { net, starts, widths, heightMm };
+}
+
+function bodyNetHinged(faces: BodyFace[], gsm: number, assemblyStep: number): BuiltNet {
+  const n = faces.length - 2;
+  const sides = faces.slice(0, n);
+  const { net, starts, widths, heightMm } = wallStrip(sides);
   const total = widths.reduce((s, w) => s + w, 0);
   let c = 0;
   sides.forEach((_, i) => {
     if (Math.abs(starts[i]! + widths[i]! / 2 - total / 2) < Math.abs(starts[c]! + widths[c]! / 2 - total / 2)) c = i;
   });
-
-  const net: NetFace[] = sides.map((f, i) => ({
-    flatMm: [[starts[i]!, 0], [starts[i]! + widths[i]!, 0], [starts[i]! + widths[i]!, heightMm], [starts[i]!, heightMm]],
-    modelMm: f.polygonMm,
-  }));
   const hinge = sides[c]!;
   const cap = (face: BodyFace, top: boolean): NetFace => ({
     modelMm: face.polygonMm,
@@ -64,16 +104,81 @@ export function bodyNet(body: Body, scaleDenominator: number, gsm: number, nextN
   const obstacles: Vec2Mm[][] = net.map((f) => f.flatMm);
   const tabs: NetTab[] = [];
   const edgeLabels: EdgeLabel[] = [];
-  for (const [first, second] of pairs) {
+  let crowded = false;
+  pairs.forEach(([first, second], k) => {
     const edgeMm = vec2Length(vec2Sub(net[first.face]!.flatMm[(first.edge + 1) % 4]!, net[first.face]!.flatMm[first.edge]!));
-    const { tab, label } = netGluePair(net, first, second, nextNumber(), paperTabDepthMm(gsm, edgeMm), obstacles);
+    const want = paperTabDepthMm(gsm, edgeMm);
+    const { tab, label } = netGluePair(net, first, second, k + 1, want, obstacles);
+    if ((tab.depthMm ?? 0) < 0.999 * Math.min(want, TAB_DEPTH_MIN_MM)) crowded = true;
     tabs.push(tab);
     edgeLabels.push(label);
     obstacles.push(tab.polygonMm);
-  }
+  });
   const piece = pieceFromNet({ id: 'body', partId: 'body', partKind: 'body', label: 'Body', assemblyStep, faces: net, joints, tabs, edgeLabels });
-  const frames = new Map<string, PlaneFrame>(faces.map((f, i) => [f.ref, faceFrame(net[i]!)]));
-  return { piece, frames, faces };
+  return { pieces: [piece], spots: net.map((f) => ({ piece: 0, frame: faceFrame(f) })), crowded };
+}
+
+/** Wall strip with a toothed glue ring on its top and bottom edges, and the two caps as their own pieces. */
+function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): BuiltNet {
+  const n = faces.length - 2;
+  const sides = faces.slice(0, n);
+  const { net, heightMm } = wallStrip(sides);
+  const capNets = [faces[n]!, faces[n + 1]!].map((f): NetFace => ({
+    modelMm: f.polygonMm,
+    flatMm: f.polygonMm.map((p) => {
+      const d = vec3Sub(p, f.centreMm);
+      return [vec3Dot(d, f.uAxis), vec3Dot(d, f.vAxis)] as Vec2Mm;
+    }),
+  }));
+  const all = [...net, ...capNets];
+  const apothemMm = Math.min(...capNets[0]!.flatMm.map((p, i, poly) => lineDistance([0, 0], p, poly[(i + 1) % poly.length]!)));
+  const rings = (['top', 'bottom'] as const).map((side, k) =>
+    bodyRingTeeth(net, side, paperTabDepthMm(gsm), apothemMm, k + 2, tabFoldAngle(all, { face: 0, edge: side === 'top' ? 2 : 0 }, { face: n + k, edge: 0 })),
+  );
+  const obstacles: Vec2Mm[][] = [...net.map((f) => f.flatMm), ...rings.flatMap((r) => r.teethMm)];
+  const seamWant = paperTabDepthMm(gsm, heightMm);
+  const seam = netGluePair(net, { face: n - 1, edge: 1 }, { face: 0, edge: 3 }, 1, seamWant, obstacles);
+  const wall = pieceFromNet({
+    id: 'body',
+    partId: 'body',
+    partKind: 'body',
+    label: 'Body wall',
+    assemblyStep,
+    faces: net,
+    joints: sides.slice(1).map((_, i) => ({ parent: i, child: i + 1 })),
+    tabs: [seam.tab, ...rings.map((r) => r.tab)],
+    edgeLabels: [seam.label],
+  });
+  const caps = capNets.map((cap, k) =>
+    pieceFromNet({
+      id: k === 0 ? 'body-top' : 'body-bottom',
+      partId: 'body',
+      partKind: 'body',
+      label: k === 0 ? 'Top cap' : 'Bottom cap',
+      assemblyStep,
+      faces: [cap],
+      joints: [],
+      tabs: [],
+      edgeLabels: [capRingLabel(cap.flatMm, k + 2, apothemMm)],
+    }),
+  );
+  const spots = [...net.map((f) => ({ piece: 0, frame: faceFrame(f) })), ...capNets.map((f, k) => ({ piece: 1 + k, frame: faceFrame(f) }))];
+  return { pieces: [wall, ...caps], spots, crowded: false };
+}
+
+/** The ring's number, printed inside the middle of the cap's edge 0, reading along it. */
+function capRingLabel(poly: readonly Vec2Mm[], number: number, apothemMm: number): EdgeLabel {
+  const [a, b] = [poly[0]!, poly[1]!];
+  const mid: Vec2Mm = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
+  // The cap is centred on its flat origin, so "inward" is toward (0, 0).
+  const inset = Math.min(2 * 2.5, apothemMm / 3);
+  const len = Math.hypot(mid[0], mid[1]) || 1;
+  return { number, atMm: [mid[0] - (mid[0] / len) * inset, mid[1] - (mid[1] / len) * inset], angleRad: Math.atan2(b[1] - a[1], b[0] - a[0]) };
+}
+
+function lineDistance(p: Vec2Mm, a: Vec2Mm, b: Vec2Mm): number {
+  const d = vec2Sub(b, a);
+  return Math.abs(d[0] * (p[1] - a[1]) - d[1] * (p[0] - a[0])) / (vec2Length(d) || 1);
 }
 
 const xy = (p: readonly number[]): Vec2Mm => [p[0]!, p[1]!];

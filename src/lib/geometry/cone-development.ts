@@ -66,7 +66,9 @@ export function conePiece(spec: ConePieceSpec): Piece {
     assemblyStep: spec.assemblyStep,
     faces: [{ flatMm: face, modelMm: face3 }],
     joints: [],
-    tabs: [{ number: spec.tabNumber, polygonMm: tab, labelAtMm: polar(mid, half + tabRad / 2) }],
+    // Depth as cut: across the seam at the narrow end of a frustum; a pointed cone's tab is a wedge that
+    // vanishes at the apex, so its depth is taken at the rim, where the seam is pressed.
+    tabs: [{ number: spec.tabNumber, polygonMm: tab, labelAtMm: polar(mid, half + tabRad / 2), depthMm: (rIn > 0 ? rIn : rOut) * Math.sin(Math.min(tabRad, Math.PI / 2)) }],
     // The opposite straight edge (at −half) receives the tab; its label sits just inside it.
     edgeLabels: [{ number: spec.tabNumber, atMm: polar(mid, -half + Math.min(EDGE_LABEL_INSET_MM / mid, half / 4)), angleRad: -half }],
     curved: d,

@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import type { Model } from './model-schema';
-import type { Piece, WireBoomThread } from './types';
+import type { Piece, Vec3Mm, WireBoomThread } from './types';
 import { bodyNet } from './body-net';
 import { appendageDirection, appendageFootMm, frameAlongAxis, frameAroundAxis } from './appendage-frame';
 import { coneDevelopment, conePiece } from './cone-development';
@@ -38,8 +38,12 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
   let number = 0;
   const next = () => ++number;
   const body = bodyNet(model.body, N, gsm, next, 1);
-  const bodyPiece = body.piece;
-  const pieces: Piece[] = [bodyPiece];
+  const pieces: Piece[] = [...body.pieces];
+  // Marks for parts glued onto a body face go on whichever body piece holds that face.
+  const markFace = (ref: string, pointMm: Vec3Mm, num: number) => {
+    const spot = body.faceSpots.get(ref)!;
+    spot.piece.edgeLabels.push(panelBodyLabel(spot.frame, pointMm, num));
+  };
   const threads: WireBoomThread[] = [];
   model.appendages.forEach((a, i) => {
     const step = i + 2;
@@ -76,14 +80,14 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
         const placed = deployablePanelFrame(face, a.hingeEdge, along, w, faceW, faceH, (a.deployAngleDeg * Math.PI) / 180);
         const num = next();
         pieces.push(panelPiece({ ...base, widthMm: w, heightMm: h, frame: placed.frame, hingeStrip: { number: num, depthMm: paperTabDepthMm(gsm, w), angleRad: placed.stripAngleRad } }));
-        bodyPiece.edgeLabels.push(panelBodyLabel(body.frames.get(a.face)!, placed.hingeMidMm, num));
+        markFace(a.face, placed.hingeMidMm, num);
         break;
       }
       case 'wire-boom': {
         const num = next();
         const spot = wireAnchorPlacement(face, foot);
         pieces.push(wireAnchorPiece({ ...base, id: `${a.id}-anchor`, label: `${a.label} anchor`, face, footMm: spot.centreMm, sideMm: spot.sideMm, tabNumber: num }));
-        bodyPiece.edgeLabels.push(panelBodyLabel(body.frames.get(a.face)!, spot.centreMm, num));
+        markFace(a.face, spot.centreMm, num);
         threads.push(wireBoomThread(a.id, a.label, a.lengthM, N));
         break;
       }

@@ -30,6 +30,7 @@ export function netGluePair(faces: NetFace[], first: NetEdge, second: NetEdge, n
     const tab: NetTab = {
       number,
       polygonMm: fit.polygonMm,
+      depthMm: fit.depthMm,
       labelAtMm: vec2Add(midpoint(a, b), vec2Scale(outward(a, b), fit.depthMm / 2)),
       fold: { fromMm: a, toMm: b, angleRad: tabFoldAngle(faces, on, partner) },
     };
@@ -58,8 +59,8 @@ function edgeLabel(faces: NetFace[], e: NetEdge, number: number): EdgeLabel {
   return { number, atMm, angleRad: Math.atan2(b[1] - a[1], b[0] - a[0]) };
 }
 
-/** The tab (right of a→b) folds about a→b by the dihedral that brings it onto the partner face. */
-function tabFoldAngle(faces: NetFace[], on: NetEdge, partner: NetEdge): number {
+/** The tab (right of a→b) folds about a→b by the dihedral that brings it onto the partner face, radians. */
+export function tabFoldAngle(faces: NetFace[], on: NetEdge, partner: NetEdge): number {
   const f = faces[on.face]!, g = faces[partner.face]!;
   const axis = vec3Unit(vec3Sub(f.modelMm[(on.edge + 1) % f.modelMm.length]!, f.modelMm[on.edge]!));
   const nf = polygonNormal3(f.modelMm), ng = polygonNormal3(g.modelMm);

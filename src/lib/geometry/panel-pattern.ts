@@ -39,6 +39,7 @@ export function panelPiece(spec: PanelPieceSpec): Piece {
       number: strip.number,
       polygonMm: [[w, 0], [0, 0], [inset, -strip.depthMm], [w - inset, -strip.depthMm]],
       labelAtMm: [w / 2, -strip.depthMm / 2],
+      depthMm: strip.depthMm,
       fold: { fromMm: [0, 0], toMm: [w, 0], angleRad: strip.angleRad },
     }] : [],
     edgeLabels: [],

@@ -51,7 +51,7 @@ export function pieceFromNet(spec: NetPieceSpec): Piece {
     label: spec.label,
     outlineMm: outlineOf([...faces.map((f) => f.polygonMm), ...spec.tabs.map((t) => t.polygonMm)]),
     folds,
-    tabs: spec.tabs.map(({ number, polygonMm, labelAtMm }) => ({ number, polygonMm, labelAtMm })),
+    tabs: spec.tabs.map(({ number, polygonMm, labelAtMm, depthMm }) => ({ number, polygonMm, labelAtMm, ...(depthMm === undefined ? {} : { depthMm }) })),
     edgeLabels: spec.edgeLabels,
     hinge: {
       root: 0,

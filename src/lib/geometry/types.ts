@@ -42,6 +42,11 @@ export interface GlueTab {
   polygonMm: Vec2Mm[];
   /** Where the tab's number is printed. */
   labelAtMm: Vec2Mm;
+  /**
+   * Depth as cut, mm: the shallowest reach of the tab from the edge it folds on, after neighbours trimmed
+   * it (a frustum's seam tab: across the seam at the narrow end; a pointed cone's wedge: at the rim).
+   */
+  depthMm?: number;
 }
 
 /** The number printed just inside a cut edge that a tab (on this or another piece) glues onto. */

@@ -36,7 +36,7 @@ export function wireAnchorPiece(spec: { id: string; partId: string; label: strin
     assemblyStep: spec.assemblyStep,
     faces: [{ flatMm: face, modelMm: face.map(([x, y]) => frameApply(frame, [x, y, 0])) }],
     joints: [],
-    tabs: [{ number: spec.tabNumber, polygonMm: [[s, 0], [0, 0], [0, -s], [s, -s]], labelAtMm: [s / 2, -s / 2], fold: { fromMm: [0, 0], toMm: [s, 0], angleRad: Math.PI } }],
+    tabs: [{ number: spec.tabNumber, polygonMm: [[s, 0], [0, 0], [0, -s], [s, -s]], labelAtMm: [s / 2, -s / 2], depthMm: s, fold: { fromMm: [0, 0], toMm: [s, 0], angleRad: Math.PI } }],
     edgeLabels: [],
     rootFrame: frame,
   });

@@ -7,7 +7,7 @@ import { InputError } from '../errors';
 import type { Model } from '../geometry/model-schema';
 import type { Piece } from '../geometry/types';
 import { modelPatterns, SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
-import { PIECE_SIZE_MIN_MM, TAB_DEPTH_MIN_MM, paperTabDepthMm } from '../geometry/paper';
+import { PIECE_SIZE_MIN_MM, TAB_DEPTH_MIN_MM } from '../geometry/paper';
 import { pointsBounds } from '../geometry/vec';
 import { SHEET_MARGIN_MM, sheetSize, type SheetSizeId } from './sheet-sizes';
 import { USUAL_SCALE_DENOMINATORS } from './scale-ratios';
@@ -48,7 +48,7 @@ function scaleCheck(model: Model, n: number, gsm: number, sheetId: SheetSizeId):
     const across = pieceAcrossMm(p);
     if (across < PIECE_SIZE_MIN_MM && (!tooSmall || across < tooSmall.acrossMm))
       tooSmall = { label: p.label, acrossMm: across, what: 'piece' };
-    const tab = pieceTabDepthMm(p, gsm);
+    const tab = pieceTabDepthMm(p);
     if (tab < TAB_DEPTH_MIN_MM && !tooSmall) tooSmall = { label: p.label, acrossMm: tab, what: 'tab' };
     const b = pointsBounds(p.outlineMm);
     const [w, h] = [b.maxX - b.minX, b.maxY - b.minY];
@@ -64,17 +64,21 @@ export function pieceAcrossMm(piece: Piece): number {
 }
 
 /**
- * The shallowest tab the paper wants on a flat piece, mm: the depth its edge allows before neighbours trim
- * it. Rolled pieces' seam strips have a fixed depth and are left out. Infinity when there are none.
+ * The shallowest tab of a piece as cut, mm: each tab's own depth after neighbours trimmed it (GlueTab.depthMm),
+ * or, for a tab that does not state it, the farthest reach of its polygon from the edge it starts on.
+ * Infinity when the piece has no tabs. The paper weight is already in the tabs; older callers may still pass it.
  */
-export function pieceTabDepthMm(piece: Piece, gsm: number): number {
-  if (piece.hinge.curved) return Infinity;
+export function pieceTabDepthMm(piece: Piece, _paperGsm?: number): number {
   let min = Infinity;
-  for (const t of piece.tabs) {
-    const [b, a] = [t.polygonMm[0]!, t.polygonMm[1]!];
-    min = Math.min(min, paperTabDepthMm(gsm, Math.hypot(b[0] - a[0], b[1] - a[1])));
-  }
+  for (const t of piece.tabs) min = Math.min(min, t.depthMm ?? tabReachMm(t.polygonMm));
   return min;
+}
+
+function tabReachMm(polygonMm: readonly (readonly [number, number])[]): number {
+  const [b, a] = [polygonMm[0], polygonMm[1]];
+  if (!a || !b) return 0;
+  const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
+  return Math.max(...polygonMm.map((p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len));
 }
 
 /** The paper scale for a parsed model; throws InputError for a requested scale that makes parts too small. */

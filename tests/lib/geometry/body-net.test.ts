@@ -7,6 +7,7 @@ import { DEMO_IDS, demoModel, model, sub, dot, cross } from './fixtures';
 
 const prism = (sides: number, sizeM: number, heightM: number) => model({ body: { kind: 'prism', sides, across: 'corners', sizeM, heightM } });
 const bodyOf = (m: ReturnType<typeof model>, n = 10, gsm = 160) => modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.find((p) => p.partKind === 'body')!;
+const bodyPieces = (m: ReturnType<typeof model>, n = 10, gsm = 160) => modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.filter((p) => p.partKind === 'body');
 const clip = (poly: readonly (readonly [number, number])[]) => [[...poly.map((p) => [p[0], p[1]] as [number, number])]];
 const areaOf = (mp: ReturnType<typeof polygonClipping.union>) => mp.reduce((s, poly) => s + poly.reduce((t, ring, i) => t + (i === 0 ? 1 : -1) * Math.abs(ringArea(ring)), 0), 0);
 const ringArea = (r: [number, number][]) => r.reduce((s, p, i) => s + p[0] * r[(i + 1) % r.length]![1] - r[(i + 1) % r.length]![0] * p[1], 0) / 2;
@@ -14,20 +15,61 @@ const ringArea = (r: [number, number][]) => r.reduce((s, p, i) => s + p[0] * r[(
 describe('bodyNet (through modelPatterns)', () => {
   test.each([3, 4, 6, 7, 12, 24])('keeps the surface area of a %i-sided prism', (n) => {
     const R = 1; // across corners 2 m → circumradius 1 m → 100 mm at 1:10
-    const piece = bodyOf(prism(n, 2 * R, 0.5));
+    const pieces = bodyPieces(prism(n, 2 * R, 0.5));
     // CRC Standard Mathematical Tables: regular n-gon area (n/2)·R²·sin(2π/n), side 2R·sin(π/n).
     const Rmm = 100, H = 50;
     const expected = 2 * (n / 2) * Rmm ** 2 * Math.sin((2 * Math.PI) / n) + n * 2 * Rmm * Math.sin(Math.PI / n) * H;
-    expect(piece.faceAreaMm2).toBeCloseTo(expected, 6);
+    expect(pieces.reduce((s, p) => s + p.faceAreaMm2, 0)).toBeCloseTo(expected, 6);
   });
 
   test('gives a one-piece net of F faces exactly F − 1 folds between faces', () => {
-    for (const n of [3, 6, 24]) {
+    for (const n of [3, 6, 8]) {
       const piece = bodyOf(prism(n, 2, 0.5));
       // Euler / net theory (checks.md): a one-piece net of F faces has F − 1 folds.
       expect(piece.hinge.faces.length).toBe(n + 2);
       expect(piece.hinge.joints.length).toBe(n + 1);
       expect(piece.folds.filter((f) => f.tabNumber === undefined).length).toBe(n + 1);
+    }
+  });
+
+  test('splits a many-sided body into P pieces whose F faces have F − P folds', () => {
+    for (const n of [9, 24]) {
+      const pieces = bodyPieces(prism(n, 2, 0.5));
+      // A forest of P trees on F nodes has F − P edges (any graph theory text, e.g. Harary, Graph Theory, thm 4.1).
+      const faces = pieces.reduce((s, p) => s + p.hinge.faces.length, 0);
+      const folds = pieces.reduce((s, p) => s + p.folds.filter((f) => f.tabNumber === undefined).length, 0);
+      expect(pieces.map((p) => p.id)).toEqual(['body', 'body-top', 'body-bottom']);
+      expect(faces).toBe(n + 2);
+      expect(folds).toBe(n + 2 - pieces.length);
+    }
+  });
+
+  test('folds the teeth of a cap ring into the cap without overlapping one another (polygon-clipping)', () => {
+    for (const facets of [9, 24, 64, 256]) {
+      const m = model({ body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.15, facets } });
+      const [wall, top] = bodyPieces(m, 5);
+      const ring = wall!.tabs.find((t) => t.labelAtMm[1] > 0 && t.polygonMm.length > 4)!;
+      const H = wall!.hinge.faces[0]!.polygonMm[2]![1];
+      const cap = top!.hinge.faces[0]!.polygonMm.map((p) => [Math.round(p[0] * 1e6) / 1e6, Math.round(p[1] * 1e6) / 1e6] as [number, number]);
+      // Each tooth folds about its own wall's top edge onto the cap plane: along the edge it keeps x − x_j,
+      // away from it it goes toward the cap centre (cap flat = model x, y about the axis).
+      const teeth = wall!.hinge.faces.map((f, j) => {
+        const [x0, x1] = [f.polygonMm[0]![0], f.polygonMm[1]![0]];
+        const [a, b] = [cap[j]!, cap[(j + 1) % facets]!];
+        const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
+        const u = [(b[0] - a[0]) / len, (b[1] - a[1]) / len];
+        const inward = [-u[1]!, u[0]!];
+        const pts = ring.polygonMm.filter((p) => p[0] >= x0 - 1e-9 && p[0] <= x1 + 1e-9 && p[1] > H + 1e-9);
+        const base = [[x0, H], [x1, H], ...pts.sort((p, q) => q[0] - p[0])] as [number, number][];
+        // Snapped to 1 nm: polygon-clipping fails on corners shared to within rounding (about 1e-13 mm apart).
+        const snap = (v: number) => Math.round(v * 1e6) / 1e6;
+        return base.map(([x, y]) => [snap(a[0] + (x - x0) * u[0]! + (y - H) * inward[0]!), snap(a[1] + (x - x0) * u[1]! + (y - H) * inward[1]!)] as [number, number]);
+      });
+      for (let j = 0; j < facets; j++) {
+        const tooth = teeth[j]!, next = teeth[(j + 1) % facets]!;
+        expect(areaOf(polygonClipping.intersection(clip(tooth), clip(next))), `${facets}: teeth ${j}, ${j + 1}`).toBeLessThan(1e-9 * Math.abs(ringArea(tooth)) + 1e-9);
+        expect(areaOf(polygonClipping.intersection(clip(tooth), clip(cap))), `${facets}: tooth ${j} inside the cap`).toBeCloseTo(Math.abs(ringArea(tooth)), 6);
+      }
     }
   });
 

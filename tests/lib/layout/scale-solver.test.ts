@@ -1,11 +1,13 @@
 import { describe, expect, test } from 'vitest';
-import { solveKitScale, solvePaperScale, pieceAcrossMm } from '../../../src/lib/layout/scale-solver';
+import { solveKitScale, solvePaperScale, pieceAcrossMm, pieceTabDepthMm } from '../../../src/lib/layout/scale-solver';
 import { VENUES, venueCustom } from '../../../src/lib/layout/venues';
 import { SHEET_MARGIN_MM, SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
 import { InputError } from '../../../src/lib/errors';
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
 import { pointsBounds } from '../../../src/lib/geometry/vec';
 import { demoModel } from '../geometry/fixtures';
+import { ModelSchema } from '../../../src/lib/geometry/model-schema';
+import type { Piece } from '../../../src/lib/geometry/types';
 
 // ASME Y14.1: Letter 8.5 × 11 in; printable area inside the 10 mm margin.
 const letter = [8.5 * 25.4 - 2 * SHEET_MARGIN_MM, 11 * 25.4 - 2 * SHEET_MARGIN_MM] as const;
@@ -68,8 +70,51 @@ describe('solvePaperScale', () => {
 
   test('lists the pieces to tile at a requested large scale', () => {
     const r = solvePaperScale(demoModel('thermal-puck'), { sheetId: 'a4', paperGsm: 160, scaleDenominator: 1 });
-    expect(r.tiledPieceIds).toEqual(['body']);
+    // At 1:1 the wall strip is π·500 mm long and each cap 500 mm across, all over A4's 190 × 277 mm printable area.
+    expect(r.tiledPieceIds).toEqual(['body', 'body-top', 'body-bottom']);
     expect(r.explanation).toMatch(/split across sheets/);
+  });
+});
+
+describe('pieceTabDepthMm', () => {
+  /** The shallowest reach of a folded tab's free corners from its fold line, mm (measured, not the stated depth). */
+  const foldedTabReachMm = (piece: Piece, number: number): number | null => {
+    const fold = piece.folds.find((f) => f.tabNumber === number);
+    const tab = piece.tabs.find((t) => t.number === number)!;
+    if (!fold) return null;
+    const [a, b] = [fold.fromMm, fold.toMm];
+    const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
+    const reach = tab.polygonMm.map((p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len);
+    return Math.min(...reach.filter((r) => r > 1e-6));
+  };
+  const cylinder = (facets: number) =>
+    ModelSchema.parse({ schemaVersion: 1, name: `Cylinder ${facets}`, body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.3, facets }, appendages: [] });
+  const cases = [
+    ...['skein-probe', 'wren-3u', 'thermal-puck'].map((id) => [id, demoModel(id)] as const),
+    ...[16, 64, 256].map((f) => [`cylinder ${f}`, cylinder(f)] as const),
+  ];
+
+  test.each(cases)('keeps every tab of the %s at least 3 mm deep as cut at the chosen scale', (name, m) => {
+    for (const sheetId of ['letter', 'a4'] as const) {
+      const { scaleDenominator } = solvePaperScale(m, { sheetId, paperGsm: 160 });
+      for (const piece of modelPatterns(m, { scaleDenominator, paperGsm: 160 }).pieces) {
+        // TAB_DEPTH_MIN_MM, common practice (paper.ts): a fingertip can press a 3 mm flap.
+        expect(pieceTabDepthMm(piece), `${name} 1:${scaleDenominator} ${piece.id}`).toBeGreaterThanOrEqual(3);
+        for (const t of piece.tabs) {
+          const reach = foldedTabReachMm(piece, t.number);
+          // Measured from the drawn polygon, so a stated depth cannot hide a trimmed tab (1 µm rounding).
+          if (reach !== null) expect(reach, `${name} ${piece.id} tab ${t.number}`).toBeGreaterThanOrEqual(3 - 1e-3);
+          if (reach !== null && t.depthMm !== undefined) expect(reach).toBeCloseTo(t.depthMm, 6);
+        }
+      }
+    }
+  });
+
+  test('measures the trimmed depth, so a crowded tab is refused at a scale where the untrimmed one passes', () => {
+    // A 12-gon's hinged cap used to crowd the tabs beside its hinge wall to a wedge of 30°.
+    const fake = { ...modelPatterns(cylinder(16), { scaleDenominator: 5, paperGsm: 160 }).pieces[0]! };
+    fake.tabs = fake.tabs.map((t, i) => (i === 1 ? { ...t, depthMm: 1.7 } : t));
+    expect(pieceTabDepthMm(fake)).toBe(1.7);
   });
 });
 
