@@ -2,7 +2,7 @@ import { useCallback, useMemo, useRef, type KeyboardEvent, type RefObject } from
 import { Canvas } from '@react-three/fiber';
 import type { Piece } from '../../lib/geometry/types';
 import FoldScene from './FoldScene';
-import { viewCommandRun, viewKeyCommand, type ViewActions } from './view-keys';
+import { viewCommandRun, viewKeyCommand, type ViewActions } from '../../lib/preview/view-keys';
 import { VIEW_FOV_DEG, viewFrame } from './view-frame';
 
 export interface FoldCanvasProps {

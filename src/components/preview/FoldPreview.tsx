@@ -1,7 +1,7 @@
 import { lazy, Suspense, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { assemblySteps } from '../../lib/preview/assembly-steps';
 import type { FoldPreviewProps } from './fold-preview-props';
-import type { ViewActions } from './view-keys';
+import type { ViewActions } from '../../lib/preview/view-keys';
 import useFoldProgress from './useFoldProgress';
 import webglAvailable from './webgl-available';
 import FoldSlider from './FoldSlider';

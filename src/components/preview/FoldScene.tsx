@@ -3,7 +3,7 @@ import type { Piece } from '../../lib/geometry/types';
 import PieceMesh, { type PieceState } from './PieceMesh';
 import ViewRig from './ViewRig';
 import SceneReadySignal from './SceneReadySignal';
-import type { ViewActions } from './view-keys';
+import type { ViewActions } from '../../lib/preview/view-keys';
 import type { ViewFrame } from './view-frame';
 
 interface Props {

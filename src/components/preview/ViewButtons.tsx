@@ -1,5 +1,5 @@
 import type { RefObject } from 'react';
-import { VIEW_ROTATE_STEP_RAD, VIEW_ZOOM_STEP, type ViewActions } from './view-keys';
+import { VIEW_ROTATE_STEP_RAD, VIEW_ZOOM_STEP, type ViewActions } from '../../lib/preview/view-keys';
 
 interface Props {
   actionsRef: RefObject<ViewActions | null>;

@@ -1,9 +1,10 @@
 import { useEffect, useRef, type RefObject } from 'react';
 import { useThree } from '@react-three/fiber';
-import { OrbitControls } from '@react-three/drei';
+// The file itself, not drei's barrel: the barrel drags in dynamic-import chunks (video, face tracking) we never load.
+import { OrbitControls } from '@react-three/drei/core/OrbitControls';
 import type { OrbitControls as OrbitControlsImpl } from 'three-stdlib';
 import { Vector3 } from 'three';
-import type { ViewActions } from './view-keys';
+import type { ViewActions } from '../../lib/preview/view-keys';
 import type { ViewFrame } from './view-frame';
 
 // Scratch vectors reused by every action: nothing is allocated per keystroke or per frame.

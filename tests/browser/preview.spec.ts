@@ -1,0 +1,134 @@
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import sharp from 'sharp';
+import type { Browser, Page } from 'playwright-core';
+import { browserLaunch, pageNew } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await browserLaunch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Opens the demo preview and waits for the island's 'kitwright:scene-ready' window event. */
+async function previewOpen(page: Page, path = '/preview/skein-probe') {
+  await page.addInitScript(() => {
+    window.addEventListener(
+      'kitwright:scene-ready',
+      () => ((window as unknown as { kwReady: boolean }).kwReady = true),
+    );
+  });
+  await page.goto(path);
+  await page.waitForFunction(() => (window as unknown as { kwReady?: boolean }).kwReady === true, null, {
+    timeout: 30_000,
+  });
+}
+
+/** Share of pixels whose RGB differs between two same-sized PNG screenshots. */
+async function pixelDifference(a: Buffer, b: Buffer): Promise<number> {
+  const [ra, rb] = await Promise.all(
+    [a, b].map((buf) => sharp(buf).removeAlpha().raw().toBuffer({ resolveWithObject: true })),
+  );
+  expect([ra!.info.width, ra!.info.height]).toEqual([rb!.info.width, rb!.info.height]);
+  let changed = 0;
+  for (let i = 0; i < ra!.data.length; i += 3) {
+    if (ra!.data[i] !== rb!.data[i] || ra!.data[i + 1] !== rb!.data[i + 1] || ra!.data[i + 2] !== rb!.data[i + 2])
+      changed++;
+  }
+  return changed / (ra!.info.width * ra!.info.height);
+}
+
+describe('fold preview', () => {
+  it('redraws the model when the fold slider moves by keyboard', async () => {
+    const { page, errors } = await pageNew(browser);
+    await previewOpen(page);
+    const canvas = page.getByTestId('fold-canvas');
+    expect(await canvas.getAttribute('data-scene-ready')).toBe('true');
+    const folded = await canvas.screenshot();
+    const slider = page.getByRole('slider', { name: 'Fold' });
+    await slider.focus();
+    await page.keyboard.press('Home');
+    expect(await slider.inputValue()).toBe('0');
+    await page.waitForSelector('[data-testid="fold-canvas"][data-rendered-fold="0"]');
+    const flat = await canvas.screenshot();
+    // The body net lies open instead of closed: well over 1 % of the canvas changes.
+    expect(await pixelDifference(folded, flat)).toBeGreaterThan(0.01);
+    expect(errors).toEqual([]);
+  });
+
+  it('turns the view with the arrow keys and resets it with R while the view has focus', async () => {
+    const { page } = await pageNew(browser);
+    await previewOpen(page);
+    const canvas = page.getByTestId('fold-canvas');
+    const before = await canvas.screenshot();
+    await canvas.focus();
+    await page.keyboard.press('ArrowRight');
+    await page.waitForTimeout(200);
+    const turned = await canvas.screenshot();
+    expect(await pixelDifference(before, turned)).toBeGreaterThan(0.001);
+    await page.keyboard.press('r');
+    await page.waitForTimeout(200);
+    // Same camera, same scene: the reset frame matches the first one (SwiftShader renders deterministically).
+    expect(await pixelDifference(before, await canvas.screenshot())).toBeLessThan(0.001);
+    expect(await page.getByText('R resets the view').isVisible()).toBe(true);
+  });
+
+  it('steps through the assembly with the buttons and announces each step', async () => {
+    const { page } = await pageNew(browser);
+    await previewOpen(page);
+    const live = page.getByTestId('step-description');
+    expect(await live.getAttribute('aria-live')).toBe('polite');
+    expect(await live.textContent()).toMatch(/^Step 1 of 8: Body\./);
+    expect(await page.getByRole('button', { name: 'Previous step' }).isDisabled()).toBe(true);
+    await page.getByRole('button', { name: 'Next step' }).click();
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="step-description"]')?.textContent?.startsWith('Step 2 of 8'),
+    );
+    expect(await live.textContent()).toMatch(/tab 12\b/);
+    expect(await page.locator('[aria-current="step"]').textContent()).toMatch(/^2\. Wire boom \+X anchor/);
+  });
+
+  it('shows the flat pieces and the steps when WebGL is unavailable', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.addInitScript(() => {
+      const original = HTMLCanvasElement.prototype.getContext;
+      HTMLCanvasElement.prototype.getContext = function (this: HTMLCanvasElement, id: string, ...rest: unknown[]) {
+        return id.startsWith('webgl') ? null : (original as (...a: unknown[]) => unknown).call(this, id, ...rest);
+      } as typeof original;
+    });
+    await page.goto('/preview/skein-probe');
+    await page.getByTestId('still-fallback').waitFor();
+    expect(await page.getByTestId('still-fallback').textContent()).toMatch(/cannot show the 3D view/);
+    expect(await page.locator('canvas').count()).toBe(0);
+    await page.getByRole('button', { name: 'Next step' }).click();
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="step-description"]')?.textContent?.startsWith('Step 2 of 8'),
+    );
+    expect(errors).toEqual([]);
+  });
+
+  it('has no serious or critical axe-core violations', async () => {
+    const { page } = await pageNew(browser);
+    await previewOpen(page);
+    const require = createRequire(import.meta.url);
+    await page.addScriptTag({ content: readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8') });
+    const violations = await page.evaluate(async () => {
+      const axe = (window as unknown as { axe: { run(): Promise<{ violations: { id: string; impact: string }[] }> } })
+        .axe;
+      return (await axe.run()).violations
+        .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+        .map((v) => v.id);
+    });
+    expect(violations).toEqual([]);
+  });
+
+  it('answers 404 with a readable message for an unknown model', async () => {
+    const { page } = await pageNew(browser);
+    const response = await page.goto('/preview/no-such-model');
+    expect(response?.status()).toBe(404);
+    expect(await page.getByRole('alert').textContent()).toMatch(/skein-probe/);
+  });
+});
