@@ -1,0 +1,44 @@
+/**
+ * Server adapter: what the kit page and its handout show for a saved kit, computed from its saved inputs:
+ * the summary, the assembly steps, and the pieces and boom scale the 3D preview island folds.
+ */
+import { modelPatterns } from '../geometry/model-patterns';
+import { sheetSize } from '../layout/sheet-sizes';
+import { boomScale } from '../preview/boom-scale';
+import { assemblySteps } from '../preview/assembly-steps';
+import type { KitRow } from '../db/kits';
+import { kitVenue } from './kit-inputs';
+import { kitSummary } from './kit-summary';
+import { kitRequestForRow, kitView } from './saved-kit.server';
+
+/** The kit page's data for a kit row the actor may see. */
+export function kitPageData(row: KitRow) {
+  const view = kitView(row);
+  const request = kitRequestForRow(row);
+  const venue = kitVenue(row.inputs.venue);
+  const { pieces, threads } = modelPatterns(request.model, {
+    scaleDenominator: request.scaleDenominator,
+    paperGsm: request.paperGsm,
+  });
+  const sheetLabel = sheetSize(request.sheetSizeId).label;
+  return {
+    view,
+    sheetLabel,
+    paperGsm: request.paperGsm,
+    summary: kitSummary({
+      model: request.model,
+      scaleDenominator: request.scaleDenominator,
+      sheetLabel,
+      venue,
+      units: request.units,
+    }),
+    steps: assemblySteps(pieces),
+    threads,
+    preview: {
+      title: view.title,
+      scaleDenominator: request.scaleDenominator,
+      pieces,
+      boomScale: boomScale(request.model, request.scaleDenominator, request.units),
+    },
+  };
+}
