@@ -15,11 +15,12 @@ export default function BoomScaleView({ boomScale: b }: Props) {
   const room = Math.max(b.classroom.lengthMm, b.classroom.widthMm);
   const person = b.personHeightMm;
   const width = cm(Math.max(room, span + person * 0.6)) + 60;
-  const height = cm(person) + 90;
-  const floor = cm(person) + 40;
   const x0 = 30;
   const spanX = x0 + cm(person * 0.5);
   const text = Math.max(12, width / 45);
+  // Room above the person for its label, below the floor for the bracket and the classroom label.
+  const floor = cm(person) + 1.5 * text;
+  const height = floor + 20 + 1.8 * text;
   return (
     <figure className="card">
       <svg
