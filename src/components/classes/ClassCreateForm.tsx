@@ -6,13 +6,13 @@ import { useApiForm } from '../auth/useApiForm';
 /** A new class: a name, a grade band and how many students (a number only, never names). */
 export default function ClassCreateForm() {
   const { form, onSubmit, formError } = useApiForm<
-    { name: string; gradeBand: (typeof GRADE_BANDS)[number]; studentCount: string | number },
+    { name: string; gradeBand: (typeof GRADE_BANDS)[number]; studentCount: number },
     { name: string; gradeBand: (typeof GRADE_BANDS)[number]; studentCount: number },
     { class: { id: string } }
   >({
     schema: ClassCreateSchema,
     path: '/api/classes',
-    defaultValues: { name: '', gradeBand: '6-8', studentCount: '' },
+    defaultValues: { name: '', gradeBand: '6-8' },
     onSuccess: (data) => window.location.assign(`/classes/${data.class.id}`),
   });
   const { errors, isSubmitting } = form.formState;
@@ -40,7 +40,7 @@ export default function ClassCreateForm() {
         min={0}
         max={STUDENT_COUNT_MAX}
         hint="A count only: Kitwright never keeps students' names."
-        registration={form.register('studentCount')}
+        registration={form.register('studentCount', { valueAsNumber: true })}
         error={errors.studentCount}
       />
       <button type="submit" className="btn-primary" disabled={isSubmitting}>

@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { CLASS_CODE_LENGTH, classCodeNormalize } from './class-code';
+import { NAME_PATTERN, NAME_PATTERN_MESSAGE } from './schemas';
 
 export const GRADE_BANDS = ['K-2', '3-5', '6-8', '9-12'] as const;
 export type GradeBand = (typeof GRADE_BANDS)[number];
@@ -16,14 +17,17 @@ export const ClassNameSchema = z
   .trim()
   .min(1, 'Name the class, e.g. "Period 3 Science".')
   .max(CLASS_NAME_MAX_LENGTH, `A class name has at most ${CLASS_NAME_MAX_LENGTH} characters.`)
-  .refine((value) => !/[<>\p{Cc}]/u.test(value), 'A class name cannot contain < or > or control characters.');
+  .regex(NAME_PATTERN, NAME_PATTERN_MESSAGE);
 
 export const GradeBandSchema = z.enum(GRADE_BANDS, {
   errorMap: () => ({ message: `Choose a grade band: ${GRADE_BANDS.join(', ')}.` }),
 });
 
-export const StudentCountSchema = z.coerce
-  .number({ invalid_type_error: 'The number of students must be a whole number.' })
+export const StudentCountSchema = z
+  .number({
+    required_error: 'Enter the number of students.',
+    invalid_type_error: 'The number of students must be a whole number.',
+  })
   .int('The number of students must be a whole number.')
   .min(0, 'The number of students cannot be negative.')
   .max(STUDENT_COUNT_MAX, `A class has at most ${STUDENT_COUNT_MAX} students here.`);

@@ -12,8 +12,13 @@ export const EMAIL_MAX_LENGTH = 254;
 export const DISPLAY_NAME_MAX_LENGTH = 80;
 export const SCHOOL_NAME_MAX_LENGTH = 120;
 
-/** Characters that have no place in a name and would only be there to inject markup or control codes. */
-const NAME_FORBIDDEN = /[<>\p{Cc}]/u;
+/**
+ * What a person's, school's or class's name may hold: letters and marks of any script, digits, spaces and the
+ * punctuation names use (. , ' ’ & ( ) / # : + - ! ?). Markup (< > " =), statement separators (;) and control
+ * characters have no place in a name, so text built to inject HTML or SQL is refused at the door.
+ */
+export const NAME_PATTERN = /^[\p{L}\p{M}\p{N} .,'’&()/#:+\-!?]*$/u;
+export const NAME_PATTERN_MESSAGE = "Use letters, digits, spaces and . , ' & ( ) / # : + - ! ? only.";
 
 /** Counts Unicode code points, as NIST SP 800-63B-4 asks, rather than UTF-16 units. */
 function codePointLength(value: string): number {
@@ -51,7 +56,7 @@ export const DisplayNameSchema = z
   .trim()
   .min(1, 'Enter your name as colleagues know it.')
   .max(DISPLAY_NAME_MAX_LENGTH, `A name has at most ${DISPLAY_NAME_MAX_LENGTH} characters.`)
-  .refine((value) => !NAME_FORBIDDEN.test(value), 'A name cannot contain < or > or control characters.');
+  .regex(NAME_PATTERN, NAME_PATTERN_MESSAGE);
 
 /** A school name or city proposed at sign-up. */
 const SchoolTextSchema = (what: string) =>
@@ -59,7 +64,7 @@ const SchoolTextSchema = (what: string) =>
     .string({ invalid_type_error: `The school's ${what} must be text.` })
     .trim()
     .max(SCHOOL_NAME_MAX_LENGTH, `A school's ${what} has at most ${SCHOOL_NAME_MAX_LENGTH} characters.`)
-    .refine((value) => !NAME_FORBIDDEN.test(value), `A school's ${what} cannot contain < or >.`);
+    .regex(NAME_PATTERN, NAME_PATTERN_MESSAGE);
 
 /** The one-time token of a mailed link: 32 random bytes in base64url (43 characters). */
 export const TokenSchema = z

@@ -1,0 +1,211 @@
+/**
+ * The authorization matrix: every API route under src/pages/api, found on the file system, with every HTTP
+ * method its file exports, called by six kinds of visitor; each answer's status must match its row.
+ *
+ * A route or method without a row FAILS this test, and so does a row whose route is gone. To add a route:
+ *   1. add a row to ROWS: `route` is the file path under src/pages as Astro names it ('/api/classes/[id]'),
+ *      `method` an exported method (ALL for a catch-all), `path` the URL to call (a function of the fixtures
+ *      when it needs an id), `body` a JSON body if the route reads one;
+ *   2. give the expected status for each visitor in `expect` (use `who(...)` for the common shapes).
+ * Rows send bodies that fail validation where they can (`{}`), so an admitted visitor gets 400 and nothing
+ * changes, while a visitor the route does not admit gets 401 (anonymous), 403 (wrong role or a class
+ * session) or 404 (someone else's class). Every request gets fresh sessions, so sign-out rows do no harm.
+ */
+import { readdirSync, readFileSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import type { Knex } from 'knex';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { testKnex } from '../db/database';
+import { api, BASE_URL } from './harness';
+import {
+  accountCreate,
+  classCreateDirect,
+  classSessionCookie,
+  schoolIdByName,
+  userSessionCookie,
+  type TestAccount,
+} from './auth-helpers';
+
+const VISITORS = ['anonymous', 'classSession', 'teacher', 'otherTeacher', 'coordinator', 'admin'] as const;
+type Visitor = (typeof VISITORS)[number];
+type Expect = Record<Visitor, number>;
+
+interface Fixtures {
+  /** A class of `teacher`; the class session belongs to it. */
+  classId: string;
+  /** An account an admin could change (the other school's teacher). */
+  accountId: string;
+}
+
+interface Row {
+  route: string;
+  method: string;
+  path?: string | ((f: Fixtures) => string);
+  body?: unknown;
+  expect: Expect;
+}
+
+/** Same status for everyone. */
+const all = (status: number): Expect => Object.fromEntries(VISITORS.map((v) => [v, status])) as Expect;
+/** 401 anonymous, 403 class session, then the given statuses for the account kinds. */
+const accounts = (teacher: number, otherTeacher: number, coordinator: number, admin: number): Expect => ({
+  anonymous: 401,
+  classSession: 403,
+  teacher,
+  otherTeacher,
+  coordinator,
+  admin,
+});
+const adminOnly = (status: number) => accounts(403, 403, 403, status);
+
+const ROWS: Row[] = [
+  // Shell
+  { route: '/api/health', method: 'GET', expect: all(200) },
+  { route: '/api/test/fail', method: 'GET', expect: all(500) },
+  { route: '/api/[...path]', method: 'ALL', path: '/api/no-such-route', expect: all(404) },
+  // Accounts: open to anyone; an empty body is invalid input
+  { route: '/api/auth/sign-up', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/auth/sign-in', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/auth/sign-out', method: 'POST', expect: all(200) },
+  { route: '/api/auth/session', method: 'GET', expect: all(200) },
+  { route: '/api/auth/verify-email', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/auth/forgot-password', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/auth/reset-password', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/auth/invitation', method: 'POST', body: {}, expect: all(400) },
+  // Accounts: the signed-in account's own
+  { route: '/api/auth/password', method: 'POST', body: {}, expect: accounts(400, 400, 400, 400) },
+  { route: '/api/auth/sign-out-everywhere', method: 'POST', expect: accounts(200, 200, 200, 200) },
+  // Admin
+  { route: '/api/admin/accounts', method: 'GET', expect: adminOnly(200) },
+  {
+    route: '/api/admin/accounts/[id]',
+    method: 'PATCH',
+    path: (f) => `/api/admin/accounts/${f.accountId}`,
+    body: {},
+    expect: adminOnly(400),
+  },
+  { route: '/api/admin/invitations', method: 'GET', expect: adminOnly(200) },
+  { route: '/api/admin/invitations', method: 'POST', body: {}, expect: adminOnly(400) },
+  { route: '/api/admin/audit', method: 'GET', expect: adminOnly(200) },
+  // Schools
+  { route: '/api/schools', method: 'GET', expect: all(200) },
+  // Classes
+  { route: '/api/classes', method: 'GET', expect: accounts(200, 200, 200, 200) },
+  { route: '/api/classes', method: 'POST', body: {}, expect: accounts(400, 400, 403, 403) },
+  {
+    route: '/api/classes/[id]',
+    method: 'GET',
+    path: (f) => `/api/classes/${f.classId}`,
+    expect: { anonymous: 401, classSession: 200, teacher: 200, otherTeacher: 404, coordinator: 200, admin: 200 },
+  },
+  {
+    route: '/api/classes/[id]',
+    method: 'PATCH',
+    path: (f) => `/api/classes/${f.classId}`,
+    body: {},
+    expect: accounts(400, 404, 403, 403),
+  },
+  {
+    route: '/api/classes/[id]/rotate-code',
+    method: 'POST',
+    path: (f) => `/api/classes/${f.classId}/rotate-code`,
+    expect: accounts(200, 404, 403, 403),
+  },
+  { route: '/api/classes/join', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/classes/leave', method: 'POST', expect: all(200) },
+  {
+    route: '/api/classes/current',
+    method: 'GET',
+    expect: { anonymous: 401, classSession: 200, teacher: 403, otherTeacher: 403, coordinator: 403, admin: 403 },
+  },
+];
+
+const API_DIR = join(process.cwd(), 'src', 'pages', 'api');
+const METHOD_EXPORT = /export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE|ALL)\b/g;
+
+/** Every route file under src/pages/api as Astro names it, with the methods it exports. */
+function routesOnDisk(): { route: string; method: string }[] {
+  const found: { route: string; method: string }[] = [];
+  const walk = (dir: string) => {
+    for (const entry of readdirSync(dir, { withFileTypes: true })) {
+      // Astro leaves files and folders whose name starts with "_" out of routing.
+      if (entry.name.startsWith('_')) continue;
+      const full = join(dir, entry.name);
+      if (entry.isDirectory()) walk(full);
+      else if (/\.(ts|js|mjs)$/.test(entry.name) && !entry.name.endsWith('.d.ts')) {
+        const route = ('/api/' + relative(API_DIR, full).replace(/\\/g, '/'))
+          .replace(/\.(ts|js|mjs)$/, '')
+          .replace(/\/index$/, '');
+        for (const m of readFileSync(full, 'utf8').matchAll(METHOD_EXPORT)) found.push({ route, method: m[1]! });
+      }
+    }
+  };
+  walk(API_DIR);
+  return found;
+}
+
+let knex: Knex;
+let fixtures: Fixtures;
+const people = {} as Record<Exclude<Visitor, 'anonymous' | 'classSession'>, TestAccount>;
+
+beforeAll(async () => {
+  knex = testKnex();
+  const juniper = await schoolIdByName(knex, 'Juniper Flats Middle School');
+  const larkspur = await schoolIdByName(knex, 'Larkspur Elementary');
+  people.teacher = await accountCreate(knex, { role: 'teacher', label: 'matrix-teacher', schoolId: juniper });
+  people.otherTeacher = await accountCreate(knex, { role: 'teacher', label: 'matrix-other', schoolId: larkspur });
+  people.coordinator = await accountCreate(knex, { role: 'coordinator', label: 'matrix-coordinator' });
+  people.admin = await accountCreate(knex, { role: 'admin', label: 'matrix-admin' });
+  const klass = await classCreateDirect(knex, people.teacher, 'Matrix class');
+  fixtures = { classId: klass.id, accountId: people.otherTeacher.id };
+});
+
+afterAll(async () => {
+  await knex?.destroy();
+});
+
+async function cookieFor(visitor: Visitor): Promise<string | null> {
+  if (visitor === 'anonymous') return null;
+  if (visitor === 'classSession') return classSessionCookie(knex, fixtures.classId);
+  return userSessionCookie(knex, people[visitor].id);
+}
+
+describe('authorization matrix', () => {
+  it('has a row for every route and method on disk, and no row for a route that is gone', () => {
+    const onDisk = routesOnDisk().map((r) => `${r.method} ${r.route}`);
+    const inMatrix = ROWS.map((r) => `${r.method} ${r.route}`);
+    expect(onDisk.length).toBeGreaterThan(10);
+    expect(
+      onDisk.filter((k) => !inMatrix.includes(k)),
+      'routes without a matrix row',
+    ).toEqual([]);
+    expect(
+      inMatrix.filter((k) => !onDisk.includes(k)),
+      'matrix rows without a route',
+    ).toEqual([]);
+  });
+
+  it('answers every visitor with the status its row expects', async () => {
+    const mismatches: string[] = [];
+    for (const row of ROWS) {
+      const path = typeof row.path === 'function' ? row.path(fixtures) : (row.path ?? row.route);
+      const method = row.method === 'ALL' ? 'GET' : row.method;
+      for (const visitor of VISITORS) {
+        const cookie = await cookieFor(visitor);
+        const headers: Record<string, string> = { origin: BASE_URL };
+        if (cookie) headers.cookie = cookie;
+        if (row.body !== undefined) headers['content-type'] = 'application/json';
+        const res = await api(path, {
+          method,
+          headers,
+          body: row.body === undefined ? undefined : JSON.stringify(row.body),
+        });
+        await res.arrayBuffer();
+        if (res.status !== row.expect[visitor]) {
+          mismatches.push(`${row.method} ${path} as ${visitor}: ${res.status}, expected ${row.expect[visitor]}`);
+        }
+      }
+    }
+    expect(mismatches).toEqual([]);
+  });
+});
