@@ -1,0 +1,271 @@
+/**
+ * The kit API against the running test server and the test database: previews and solver answers, 400s that
+ * say what would work, saving only to one's own classes (404 otherwise), who sees which kit (a class session
+ * only its class's kits), and downloads read back with reference libraries (pdf-lib for the PDF).
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { PDFDocument } from 'pdf-lib';
+import type { Knex } from 'knex';
+import { testKnex } from '../db/database';
+import { api, postJson } from './harness';
+import {
+  accountCreate,
+  classCreateDirect,
+  classSessionCookie,
+  userSessionCookie,
+  type TestAccount,
+} from './auth-helpers';
+
+let knex: Knex;
+let teacher: TestAccount;
+let other: TestAccount;
+let teacherCookie: string;
+let otherCookie: string;
+let coordinatorCookie: string;
+let classA: string;
+let classB: string;
+let otherClass: string;
+
+const INPUTS = {
+  modelId: 'skein-probe',
+  scaleDenominator: 20,
+  sheetSizeId: 'letter',
+  paperGsm: 160,
+  copies: 1,
+  units: 'metric',
+  venue: { kind: 'preset', id: 'classroom' },
+} as const;
+
+// Response bodies are read loosely; each test checks the fields it needs.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+async function body(res: Response): Promise<any> {
+  return res.json();
+}
+
+const as = (cookie: string) => ({ cookie });
+const send = (path: string, method: string, cookie: string, data?: unknown) =>
+  api(path, {
+    method,
+    headers: { cookie, origin: process.env.KW_TEST_BASE_URL!, ...(data ? { 'content-type': 'application/json' } : {}) },
+    ...(data ? { body: JSON.stringify(data) } : {}),
+  });
+
+async function kitSaved(cookie: string, classId: string, inputs: object = INPUTS) {
+  const res = await postJson('/api/kits', { classId, inputs }, as(cookie));
+  expect(res.status).toBe(201);
+  return (await body(res)).kit;
+}
+
+beforeAll(async () => {
+  knex = testKnex();
+  teacher = await accountCreate(knex, { role: 'teacher', label: 'kits-teacher' });
+  other = await accountCreate(knex, { role: 'teacher', label: 'kits-other' });
+  const coordinator = await accountCreate(knex, { role: 'coordinator', label: 'kits-coord' });
+  teacherCookie = await userSessionCookie(knex, teacher.id);
+  otherCookie = await userSessionCookie(knex, other.id);
+  coordinatorCookie = await userSessionCookie(knex, coordinator.id);
+  classA = (await classCreateDirect(knex, teacher, 'Kits A')).id;
+  classB = (await classCreateDirect(knex, teacher, 'Kits B')).id;
+  otherClass = (await classCreateDirect(knex, other, 'Other kits')).id;
+});
+
+afterAll(async () => {
+  await knex?.destroy();
+});
+
+describe('POST /api/kits/preview', () => {
+  it('answers every sheet as SVG with a plain-words summary of the Skein at 1:20', async () => {
+    const res = await postJson('/api/kits/preview', INPUTS, as(teacherCookie));
+    expect(res.status).toBe(200);
+    const data = await body(res);
+    expect(data.sheetCount).toBe(data.sheets.length);
+    expect(data.sheets[0]).toContain('<svg');
+    // product.md's worked example: 2.4 m / 20 = 12 cm across; 35 m / 20 = 1.75 m per wire boom.
+    expect(data.summary.text).toContain('body 12 cm across the flats');
+    expect(data.summary.text).toContain('each wire boom 1.75 m long');
+    expect(data.summary.spanFitsVenue).toBe(true);
+  });
+
+  it('refuses a scale at which a piece is under 5 mm, naming the ratio that works', async () => {
+    const res = await postJson('/api/kits/preview', { ...INPUTS, scaleDenominator: 500 }, as(teacherCookie));
+    expect(res.status).toBe(400);
+    const data = await body(res);
+    expect(data.error.code).toBe('invalid_input');
+    expect(data.error.message).toMatch(/At 1:500 .* is \d+(\.\d)? mm across; 1:\d+ is the smallest ratio/);
+    expect(data.error.fields.scaleDenominator).toBeDefined();
+  });
+
+  it('refuses more than 200 sheets with the packer message', async () => {
+    const res = await postJson('/api/kits/preview', { ...INPUTS, scaleDenominator: 2 }, as(teacherCookie));
+    expect(res.status).toBe(400);
+    expect((await body(res)).error.message).toMatch(/200 is the most a kit may have/);
+  });
+
+  it.each([
+    ['zero scale', { scaleDenominator: 0 }, /scale must be 1:1 or smaller/],
+    ['negative copies', { copies: -2 }, /copies must be at least 1/],
+    ['non-finite paper weight', { paperGsm: '1e999' }, /paper weight/],
+    ['unknown sheet', { sheetSizeId: 'b5' }, /sheet must be one of/],
+    ['unknown demo model', { modelId: 'no-such-probe' }, /no demo model "no-such-probe"/],
+  ])('answers 400 for %s with a message', async (_name, change, message) => {
+    const res = await postJson('/api/kits/preview', { ...INPUTS, ...change }, as(teacherCookie));
+    expect(res.status).toBe(400);
+    expect((await body(res)).error.message).toMatch(message);
+  });
+
+  it('asks anonymous callers to sign in', async () => {
+    const res = await postJson('/api/kits/preview', INPUTS);
+    expect(res.status).toBe(401);
+  });
+});
+
+describe('POST /api/models/patterns', () => {
+  it('answers 400 for a prism with too many sides and a zero size, listing both fields', async () => {
+    const model = {
+      schemaVersion: 1,
+      name: 'Bad',
+      body: { kind: 'prism', sides: 30, across: 'flats', sizeM: 0, heightM: 1 },
+    };
+    const res = await postJson(
+      '/api/models/patterns',
+      { model, scaleDenominator: 10, paperGsm: 160 },
+      as(teacherCookie),
+    );
+    expect(res.status).toBe(400);
+    const data = await body(res);
+    expect(Object.keys(data.error.fields)).toEqual(expect.arrayContaining(['model.body.sides', 'model.body.sizeM']));
+  });
+
+  it('answers the pieces of a model sent in the request', async () => {
+    const model = { schemaVersion: 1, name: 'Cube', body: { kind: 'box', widthM: 0.1, depthM: 0.1, heightM: 0.1 } };
+    const res = await postJson(
+      '/api/models/patterns',
+      { model, scaleDenominator: 1, paperGsm: 160 },
+      as(teacherCookie),
+    );
+    expect(res.status).toBe(200);
+    const data = await body(res);
+    // A cube's six 100 mm faces: 6 × 10 000 mm² (tabs counted apart).
+    const area = data.pieces.reduce((s: number, p: { faceAreaMm2: number }) => s + p.faceAreaMm2, 0);
+    expect(area).toBeCloseTo(60_000, 3);
+  });
+});
+
+describe('POST /api/scale/solve', () => {
+  it('suggests a scale with explanations for the Skein on Letter and a classroom', async () => {
+    const res = await postJson(
+      '/api/scale/solve',
+      {
+        modelId: 'skein-probe',
+        sheetSizeId: 'letter',
+        paperGsm: 160,
+        units: 'metric',
+        venue: { kind: 'preset', id: 'classroom' },
+      },
+      as(teacherCookie),
+    );
+    expect(res.status).toBe(200);
+    const data = await body(res);
+    expect(data.suggestedScaleDenominator).toBeGreaterThanOrEqual(1);
+    expect(data.kit.explanation).toMatch(/1:\d+/);
+    expect(data.kit.venue.explanation).toMatch(/classroom/);
+  });
+
+  it('answers 400 for a custom venue of zero length', async () => {
+    const res = await postJson(
+      '/api/scale/solve',
+      {
+        modelId: 'skein-probe',
+        sheetSizeId: 'letter',
+        paperGsm: 160,
+        units: 'metric',
+        venue: { kind: 'custom', lengthM: 0, widthM: 5 },
+      },
+      as(teacherCookie),
+    );
+    expect(res.status).toBe(400);
+    expect((await body(res)).error.message).toMatch(/venue length must be more than 0 m/);
+  });
+});
+
+describe('saved kits', () => {
+  it('saves to the teacher’s own class and answers 404 for another teacher’s class', async () => {
+    const kit = await kitSaved(teacherCookie, classA);
+    expect(kit.classId).toBe(classA);
+    expect(kit.links.svgSheets).toHaveLength(kit.sheetCount);
+    const res = await postJson('/api/kits', { classId: otherClass, inputs: INPUTS }, as(teacherCookie));
+    expect(res.status).toBe(404);
+    expect((await body(res)).error.code).toBe('not_found');
+  });
+
+  it('hides a kit from another teacher (404) and shows it to a coordinator', async () => {
+    const kit = await kitSaved(teacherCookie, classA);
+    expect((await api(`/api/kits/${kit.id}`, { headers: as(otherCookie) })).status).toBe(404);
+    expect((await api(`/api/kits/${kit.id}.pdf`, { headers: as(otherCookie) })).status).toBe(404);
+    expect((await api(`/api/kits/${kit.id}`, { headers: as(coordinatorCookie) })).status).toBe(200);
+    expect((await send(`/api/kits/${kit.id}`, 'PATCH', otherCookie, { title: 'Mine now' })).status).toBe(404);
+    expect((await send(`/api/kits/${kit.id}`, 'DELETE', otherCookie)).status).toBe(404);
+  });
+
+  it('lets a class session open only its own class’s kits', async () => {
+    const inA = await kitSaved(teacherCookie, classA);
+    const inB = await kitSaved(teacherCookie, classB);
+    const student = await classSessionCookie(knex, classA);
+    expect((await api(`/api/kits/${inA.id}`, { headers: as(student) })).status).toBe(200);
+    expect((await api(`/api/kits/${inB.id}`, { headers: as(student) })).status).toBe(404);
+    const list = await body(await api('/api/kits', { headers: as(student) }));
+    expect(list.kits.length).toBeGreaterThan(0);
+    expect(list.kits.every((k: { classId: string }) => k.classId === classA)).toBe(true);
+    expect((await send(`/api/kits/${inA.id}`, 'DELETE', student)).status).toBe(403);
+  });
+
+  it('serves a PDF whose page count is the layout’s sheet count, read back with pdf-lib', async () => {
+    const kit = await kitSaved(teacherCookie, classA, { ...INPUTS, copies: 2 });
+    const res = await api(`/api/kits/${kit.id}.pdf`, { headers: as(teacherCookie) });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    expect(res.headers.get('content-disposition')).toMatch(/attachment; filename=".+-1-20-letter\.pdf"/);
+    const pdf = await PDFDocument.load(new Uint8Array(await res.arrayBuffer()));
+    expect(pdf.getPageCount()).toBe(kit.sheetCount);
+    // US Letter is 8.5 × 11 in = 612 × 792 pt (ASME Y14.1; 1 pt = 1/72 in, ISO 32000-1 §8.3.2.3).
+    const { width, height } = pdf.getPage(0).getSize();
+    expect([width, height].map((v) => Math.round(v))).toEqual([612, 792]);
+  });
+
+  it('serves one SVG per sheet, binary and ASCII STL and JSON, and 400 for a sheet out of range', async () => {
+    const kit = await kitSaved(teacherCookie, classA);
+    const svg = await api(`${kit.links.svgSheets[0]}`, { headers: as(teacherCookie) });
+    expect(svg.status).toBe(200);
+    expect(await svg.text()).toMatch(/<g id="cut"/);
+    const bad = await api(`/api/kits/${kit.id}.svg?sheet=${kit.sheetCount + 1}`, { headers: as(teacherCookie) });
+    expect(bad.status).toBe(400);
+    expect((await body(bad)).error.message).toContain(`1 to ${kit.sheetCount}`);
+    const stl = new Uint8Array(await (await api(kit.links.stl, { headers: as(teacherCookie) })).arrayBuffer());
+    // Binary STL: 80-byte header, uint32 triangle count, 50 bytes per triangle.
+    const triangles = new DataView(stl.buffer).getUint32(80, true);
+    expect(stl.byteLength).toBe(84 + 50 * triangles);
+    const ascii = await (await api(kit.links.stlAscii, { headers: as(teacherCookie) })).text();
+    expect(ascii.match(/facet normal/g)?.length).toBe(triangles);
+    const json = await body(await api(kit.links.json, { headers: as(teacherCookie) }));
+    expect(json).toBeTypeOf('object');
+  });
+
+  it('renames, duplicates and deletes a kit for its teacher', async () => {
+    const kit = await kitSaved(teacherCookie, classA);
+    const renamed = await body(await send(`/api/kits/${kit.id}`, 'PATCH', teacherCookie, { title: 'Comet team kit' }));
+    expect(renamed.kit.title).toBe('Comet team kit');
+    expect(renamed.kit.contentHash).not.toBe(kit.contentHash);
+    const empty = await send(`/api/kits/${kit.id}`, 'PATCH', teacherCookie, { title: '  ' });
+    expect(empty.status).toBe(400);
+    const copy = await send(`/api/kits/${kit.id}/duplicate`, 'POST', teacherCookie);
+    expect(copy.status).toBe(201);
+    const copied = (await body(copy)).kit;
+    expect(copied.id).not.toBe(kit.id);
+    expect(copied.title).toBe('Comet team kit (copy)');
+    expect((await send(`/api/kits/${kit.id}/duplicate`, 'POST', teacherCookie, { classId: otherClass })).status).toBe(
+      404,
+    );
+    expect((await send(`/api/kits/${kit.id}`, 'DELETE', teacherCookie)).status).toBe(200);
+    expect((await api(`/api/kits/${kit.id}`, { headers: as(teacherCookie) })).status).toBe(404);
+  });
+});
