@@ -3,7 +3,8 @@
  * inputs they belong to: through a map from request path to table cell or form field, falling back to the
  * nearest mapped parent path, and listing what cannot be placed.
  */
-import type { ApiFieldErrors } from '../http/client';
+/** Field name (dotted path) → messages, as the API sends them. */
+type ApiFieldErrors = Record<string, string[]>;
 
 export interface PlacedFieldErrors {
   /** Input key (a table cell key or a form field name) → first message. */

@@ -26,6 +26,9 @@ export function tableCellNumber(text: string): { value: number | null; problem: 
   return { value, problem: null };
 }
 
+/** The problem of a table with no rows typed, under the key "table". */
+export const TABLE_EMPTY_MESSAGE = 'The table is empty: type or paste readings, or load the sample data.';
+
 export interface TableNumbers {
   /** Row indexes of the rows read (blank rows left out). */
   rowIndexes: number[];
@@ -36,7 +39,7 @@ export interface TableNumbers {
 
 /**
  * Reads the number columns `keys` of every non-blank row; a blank cell in a required column and a cell that
- * is not a number are errors. `optional` columns may be blank.
+ * is not a number are errors, and so is a table with no rows (under "table"). `optional` columns may be blank.
  */
 export function tableNumbers(
   rows: readonly TableRow[],
@@ -55,6 +58,7 @@ export function tableNumbers(
     out.rowIndexes.push(r);
     out.values.push(values);
   });
+  if (out.rowIndexes.length === 0) out.errors.table = TABLE_EMPTY_MESSAGE;
   return out;
 }
 
