@@ -2,7 +2,8 @@
  * The flat pattern of a body. Bodies of up to BODY_HINGED_CAP_SIDES_MAX sides are one piece: the side walls
  * as a strip (wall i left to right, printed side out), the top and bottom caps hinged to the wall nearest
  * the strip's middle, a tab on one edge of every glued pair. Many-sided bodies (and any body whose hinged
- * caps would crowd a tab under TAB_DEPTH_MIN_MM) are three pieces: the wall strip with a toothed glue ring
+ * caps would crowd a tab under TAB_DEPTH_MIN_MM, or whose one-piece net exceeds BODY_ONE_PIECE_MAX_MM) are
+ * three pieces: the wall strip with a toothed glue ring
  * along its top and bottom edges, and two separate caps glued onto the rings. Flat mm, y up; model mm at
  * kit scale.
  */
@@ -13,10 +14,17 @@ import { netGluePair, tabFoldAngle, type NetEdge } from './net-glue';
 import { paperTabDepthMm, TAB_DEPTH_MIN_MM } from './paper';
 import { bodyRingTeeth } from './body-ring';
 import type { EdgeLabel, Piece, PlaneFrame, Vec2Mm } from './types';
-import { vec2Length, vec2Sub, vec3Dot, vec3Sub } from './vec';
+import { pointsBounds, vec2Length, vec2Sub, vec3Dot, vec3Sub } from './vec';
 
 /** Most sides for which the caps hinge to the wall strip (one-piece net); above it caps are separate pieces. */
 export const BODY_HINGED_CAP_SIDES_MAX = 8;
+/**
+ * Largest one-piece net, mm (either way round): the printable area A4 and US Letter share inside a 10 mm
+ * margin (ISO 216 A4 210 × 297 mm, ASME Y14.1 Letter 215.9 × 279.4 mm). A larger net is tiled on office
+ * paper, and caps hinged out of the strip's side make that a 2-D grid of tiles with corner overlaps; with
+ * separate caps the strip tiles along its length and the caps go whole on other sheets.
+ */
+export const BODY_ONE_PIECE_MAX_MM = [190, 259.4] as const;
 
 export interface BodyNet {
   /** The wall strip (the whole net when the caps hinge to it) first, then the separate caps if any. */
@@ -31,7 +39,7 @@ export function bodyNet(body: Body, scaleDenominator: number, gsm: number, nextN
   const faces = bodyFaces(body, scaleDenominator);
   const n = faces.length - 2;
   const hinged = n <= BODY_HINGED_CAP_SIDES_MAX ? bodyNetHinged(faces, gsm, assemblyStep) : null;
-  const built = hinged && !hinged.crowded ? hinged : bodyNetRinged(faces, gsm, assemblyStep);
+  const built = hinged && !hinged.crowded && bodyNetFitsOfficePaper(hinged.pieces[0]!) ? hinged : bodyNetRinged(faces, gsm, assemblyStep);
   // Tabs were numbered 1, 2, … locally; take kit-wide numbers in the same order.
   const global = new Map<number, number>();
   for (const p of built.pieces) for (const t of p.tabs) global.set(t.number, nextNumber());
@@ -174,6 +182,13 @@ function capRingLabel(poly: readonly Vec2Mm[], number: number, apothemMm: number
   const inset = Math.min(2 * 2.5, apothemMm / 3);
   const len = Math.hypot(mid[0], mid[1]) || 1;
   return { number, atMm: [mid[0] - (mid[0] / len) * inset, mid[1] - (mid[1] / len) * inset], angleRad: Math.atan2(b[1] - a[1], b[0] - a[0]) };
+}
+
+function bodyNetFitsOfficePaper(piece: Piece): boolean {
+  const b = pointsBounds(piece.outlineMm);
+  const [w, h] = [b.maxX - b.minX, b.maxY - b.minY];
+  const [a, c] = BODY_ONE_PIECE_MAX_MM;
+  return (w <= a && h <= c) || (h <= a && w <= c);
 }
 
 function lineDistance(p: Vec2Mm, a: Vec2Mm, b: Vec2Mm): number {

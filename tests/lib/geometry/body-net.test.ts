@@ -24,7 +24,8 @@ describe('bodyNet (through modelPatterns)', () => {
 
   test('gives a one-piece net of F faces exactly F − 1 folds between faces', () => {
     for (const n of [3, 6, 8]) {
-      const piece = bodyOf(prism(n, 2, 0.5));
+      // Small enough (50 mm across corners at 1:20) for the one-piece net to fit office paper.
+      const piece = bodyOf(prism(n, 1, 0.25), 20);
       // Euler / net theory (checks.md): a one-piece net of F faces has F − 1 folds.
       expect(piece.hinge.faces.length).toBe(n + 2);
       expect(piece.hinge.joints.length).toBe(n + 1);
@@ -100,7 +101,14 @@ describe('bodyNet (through modelPatterns)', () => {
   });
 
   test('puts a tab on every glued edge pair of a prism: 1 + 2(n − 1) of them', () => {
-    for (const n of [3, 5, 8]) expect(bodyOf(prism(n, 2, 0.5)).tabs.length).toBe(1 + 2 * (n - 1));
+    for (const n of [3, 5, 8]) expect(bodyOf(prism(n, 1, 0.25), 20).tabs.length).toBe(1 + 2 * (n - 1));
+  });
+
+  test('splits the caps off a net too large for office paper, so the strip tiles along its length', () => {
+    // At 1:20 the Skein's hexagonal net would be 424 × 285 mm, over the 190 × 259.4 mm A4 and Letter share.
+    const pieces = bodyPieces(demoModel('skein-probe'), 20);
+    expect(pieces.map((p) => p.id)).toEqual(['body', 'body-top', 'body-bottom']);
+    expect(bodyPieces(demoModel('skein-probe'), 50).map((p) => p.id)).toEqual(['body']);
   });
 
   test('keeps tabs clear of faces and of each other (checked with polygon-clipping)', () => {
@@ -136,7 +144,9 @@ describe('bodyNet (through modelPatterns)', () => {
   test('numbers the assembly steps body first, then one step per appendage', () => {
     const pieces = modelPatterns(demoModel('skein-probe'), { scaleDenominator: 20, paperGsm: 160 }).pieces;
     expect(pieces[0]!.partKind).toBe('body');
-    expect(pieces.map((p) => p.assemblyStep)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+    // The wall strip and its two caps are one step (types.ts: pieces of one step share a number).
+    expect(pieces.map((p) => p.assemblyStep)).toEqual([1, 1, 1, 2, 3, 4, 5, 6, 7, 8]);
+    expect(pieces.slice(0, 3).every((p) => p.partKind === 'body')).toBe(true);
   });
 
   test('widens tabs on heavier paper', () => {
