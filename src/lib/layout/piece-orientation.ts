@@ -69,3 +69,71 @@ function normaliseAngle(angleRad: number): number {
   if (a <= -Math.PI) a += 2 * Math.PI;
   return a;
 }
+
+/**
+ * The sheet rotation (radians, clockwise) for a piece that must be tiled through `window` (mm) with
+ * overlapMm between tiles: among 0, 90° and every hull-edge pose, the one needing fewest tiles, then the
+ * smallest box; within 1 % of that box an axis-aligned pose (the piece's own x along a sheet edge, so a
+ * strip drawn along x is tiled along its length) wins, long side across the sheet first. A degenerate
+ * outline gives 0.
+ */
+export function pieceOrientationForTilesRad(
+  outlineMm: readonly Vec2Mm[],
+  window: { widthMm: number; heightMm: number },
+  overlapMm: number,
+): number {
+  const hull = pieceOrientationHull(outlineMm);
+  if (hull.length < 3) return 0;
+  const candidates = [0, Math.PI / 2];
+  for (let i = 0; i < hull.length; i++) {
+    const a = hull[i]!;
+    const b = hull[(i + 1) % hull.length]!;
+    const edge = Math.atan2(b[1] - a[1], b[0] - a[0]);
+    candidates.push(edge, edge - Math.PI / 2);
+  }
+  const stepX = window.widthMm - overlapMm;
+  const stepY = window.heightMm - overlapMm;
+  if (stepX <= 0 || stepY <= 0) return 0;
+  let best = { tiles: Infinity, aligned: false, across: false, area: Infinity, angle: 0 };
+  for (const raw of candidates) {
+    const angle = normaliseAngle(raw);
+    const { widthMm, heightMm } = pieceOrientationBox(hull, angle);
+    const tiles =
+      Math.max(1, Math.ceil((widthMm - overlapMm) / stepX)) * Math.max(1, Math.ceil((heightMm - overlapMm) / stepY));
+    const quarter = Math.abs(angle / (Math.PI / 2) - Math.round(angle / (Math.PI / 2)));
+    const aligned = quarter < 1e-9;
+    const area = widthMm * heightMm;
+    // Of poses as good within 1 % of box area, an aligned one, then one lying long side across the sheet:
+    // its tiles are short, so they share sheets with other pieces.
+    const across = widthMm >= heightMm;
+    const close = tiles === best.tiles && Math.abs(area - best.area) <= 0.01 * best.area;
+    const better =
+      tiles < best.tiles ||
+      (tiles === best.tiles && area < 0.99 * best.area) ||
+      (close && aligned && !best.aligned) ||
+      (close && aligned === best.aligned && across && !best.across);
+    if (better)
+      best = { tiles, aligned, across, area, angle: aligned ? Math.round(angle / (Math.PI / 2)) * (Math.PI / 2) : angle };
+  }
+  return normaliseAngle(best.angle) === 0 ? 0 : normaliseAngle(best.angle);
+}
+
+/** The box of hull points turned by the sheet rotation angleRad (flat y up, sheet y down), mm. */
+function pieceOrientationBox(hull: readonly Vec2Mm[], angleRad: number): { widthMm: number; heightMm: number } {
+  const c = Math.cos(angleRad);
+  const s = Math.sin(angleRad);
+  let minX = Infinity,
+    maxX = -Infinity,
+    minY = Infinity,
+    maxY = -Infinity;
+  for (const [x, y] of hull) {
+    // The placement rule of placement.ts without translation: q = (x, −y), then rotate by angleRad.
+    const rx = c * x + s * y;
+    const ry = s * x - c * y;
+    minX = Math.min(minX, rx);
+    maxX = Math.max(maxX, rx);
+    minY = Math.min(minY, ry);
+    maxY = Math.max(maxY, ry);
+  }
+  return { widthMm: maxX - minX, heightMm: maxY - minY };
+}

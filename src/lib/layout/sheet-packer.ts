@@ -3,13 +3,14 @@
  * (piece-orientation.ts), then the boxes are packed with quarter turns by the MaxRects best-short-side-fit
  * heuristic (Jylänki, "A Thousand Ways to Pack the Bin", 2010) of maxrects-packer, one sheet after another,
  * around the sheet furniture. Boxes that do not overlap hold pieces that do not overlap. Pieces too large for
- * a sheet are tiled (tiling.ts), one tile per sheet, after the packed sheets.
+ * a sheet are turned to need the fewest tiles (axis-aligned on a tie) and tiled (tiling.ts); tiles are
+ * packed like pieces.
  */
 import { MaxRectsBin, Rectangle } from 'maxrects-packer/dist/maxrects-packer.mjs';
 import { InputError } from '../errors';
 import type { Piece } from '../geometry/types';
 import { freeSpaceRects } from './free-space';
-import { pieceOrientationRad } from './piece-orientation';
+import { pieceOrientationForTilesRad, pieceOrientationRad } from './piece-orientation';
 import { placementAtCorner, placementBounds } from './placement';
 import { SHEET_MARGIN_MM } from './sheet-sizes';
 import {
@@ -75,11 +76,12 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
       for (let copy = 0; copy < options.copies; copy++) items.push(item);
       continue;
     }
+    const tiledRad = pieceOrientationForTilesRad(piece.outlineMm, tileWindow, overlap);
     for (let copy = 0; copy < options.copies; copy++) {
-      for (const tile of tilingPiece(piece, rotationRad, tileWindow, overlap, letter)) {
+      for (const tile of tilingPiece(piece, tiledRad, tileWindow, overlap, letter)) {
         letter += tile.alignmentMarks.length / 2;
         const w = tile.placement.tile!.windowMm;
-        items.push({ piece, rotationRad, widthMm: w.widthMm, heightMm: w.heightMm + TILE_CAPTION_MM, tile });
+        items.push({ piece, rotationRad: tiledRad, widthMm: w.widthMm, heightMm: w.heightMm + TILE_CAPTION_MM, tile });
       }
     }
   }

@@ -35,8 +35,7 @@ export function tilingPiece(
   const stepY = window.heightMm - overlapMm;
   if (stepX <= 0 || stepY <= 0) return [];
   const box = placementBounds({ xMm: 0, yMm: 0, rotationRad, mirrored: false }, piece);
-  const cols = Math.max(1, Math.ceil((box.widthMm - overlapMm) / stepX));
-  const rows = Math.max(1, Math.ceil((box.heightMm - overlapMm) / stepY));
+  const { cols, rows } = tilingGrid(box, window, overlapMm)!;
   // Marks in the frame of the piece's box (origin at its top-left corner), shared by the two tiles they join.
   const marks: { xMm: number; yMm: number; letter: string }[] = [];
   let letter = firstLetter;
@@ -80,6 +79,24 @@ export function tilingPiece(
     }
   }
   return tiles;
+}
+
+/**
+ * Columns and rows of tiles for a placed box (mm) shown through `window` with neighbours overlapping by
+ * overlapMm; null when the window is no larger than the overlap.
+ */
+export function tilingGrid(
+  box: Pick<RectMm, 'widthMm' | 'heightMm'>,
+  window: Pick<RectMm, 'widthMm' | 'heightMm'>,
+  overlapMm: number,
+): { cols: number; rows: number } | null {
+  const stepX = window.widthMm - overlapMm;
+  const stepY = window.heightMm - overlapMm;
+  if (stepX <= 0 || stepY <= 0) return null;
+  return {
+    cols: Math.max(1, Math.ceil((box.widthMm - overlapMm) / stepX)),
+    rows: Math.max(1, Math.ceil((box.heightMm - overlapMm) / stepY)),
+  };
 }
 
 /** Spreadsheet-style letters: 0 → "A", 25 → "Z", 26 → "AA". */

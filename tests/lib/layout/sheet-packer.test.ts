@@ -10,6 +10,8 @@ import type { LaidOutSheet, RectMm } from '../../../src/lib/layout/types';
 import type { Piece } from '../../../src/lib/geometry/types';
 import { cubeNetPiece, rectPiece, sectorPiece, smallKitPieces } from '../../fixtures/pieces/pieces';
 import { multiPolygonArea } from './polygon-area';
+import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
+import { demoModel } from '../geometry/fixtures';
 
 const rectRing = (r: RectMm): Ring => [
   [r.xMm, r.yMm],
@@ -51,6 +53,31 @@ function expectValidSheets(sheets: LaidOutSheet[], pieces: Piece[], units: 'metr
 }
 
 describe('sheetPack', () => {
+  test('tiles the Skein body strip at 1:20 on Letter along its length, on no more than 4 sheets', () => {
+    const pieces = modelPatterns(demoModel('skein-probe'), { scaleDenominator: 20, paperGsm: 160 }).pieces;
+    const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES.letter, units: 'us', copies: 1 });
+    // Four sheets was the diagonal 2 × 2 tiling of the one-piece net; not more.
+    expect(sheets.length).toBeLessThanOrEqual(4);
+    const tiles = sheets.flatMap((s) => s.placements.filter((p) => p.pieceId === 'body'));
+    expect(tiles.length).toBeGreaterThan(1);
+    for (const t of tiles) {
+      // The strip is drawn along flat x: turned by 0 or 180° it runs across the sheet, one row of tiles.
+      expect(Math.abs(Math.sin(t.rotationRad))).toBeLessThan(1e-12);
+      expect(t.tile!.rows).toBe(1);
+    }
+    // Tile windows stay clear of every other placement and window on their sheet (polygon-clipping).
+    sheets.forEach((sheet) => {
+      const shapes: Ring[] = sheet.placements.map((p) =>
+        p.tile
+          ? rectRing(p.tile.windowMm)
+          : placementOutline(p, pieces.find((q) => q.id === p.pieceId)!).map(([x, y]) => [x, y] as [number, number]),
+      );
+      for (let i = 0; i < shapes.length; i++)
+        for (let j = i + 1; j < shapes.length; j++)
+          expect(multiPolygonArea(polygonClipping.intersection([shapes[i]!], [shapes[j]!])), `sheet ${sheet.number}`).toBeLessThan(1e-6);
+    });
+  });
+
   test('places every piece of every copy once, without overlap, inside the margin and clear of furniture', () => {
     const pieces = smallKitPieces();
     for (const [sizeId, units] of [
