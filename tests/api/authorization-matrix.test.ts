@@ -57,6 +57,8 @@ const accounts = (teacher: number, otherTeacher: number, coordinator: number, ad
   admin,
 });
 const adminOnly = (status: number) => accounts(403, 403, 403, status);
+/** A well-formed id that no row has. */
+const MISSING = '00000000-0000-4000-8000-000000000000';
 
 const ROWS: Row[] = [
   // Shell
@@ -117,6 +119,41 @@ const ROWS: Row[] = [
     route: '/api/classes/current',
     method: 'GET',
     expect: { anonymous: 401, classSession: 200, teacher: 403, otherTeacher: 403, coordinator: 403, admin: 403 },
+  },
+  // Data tools (analysis): open to anyone; an empty body is invalid input
+  ...['cleanroom', 'equilibrium-temperature', 'magnetic', 'orbit-eclipse', 'psd-profile', 'thermal', 'vibration'].map(
+    (tool): Row => ({ route: `/api/analysis/${tool}`, method: 'POST', body: {}, expect: all(400) }),
+  ),
+  // Models, patterns and the scale solver
+  { route: '/api/models', method: 'GET', expect: all(200) },
+  { route: '/api/models/patterns', method: 'POST', body: {}, expect: { ...all(400), anonymous: 401 } },
+  { route: '/api/scale/solve', method: 'POST', body: {}, expect: { ...all(400), anonymous: 401 } },
+  // Kits. Rows with [id] use a kit id that does not exist: admitted visitors get 404, the rest 401/403.
+  // (Ownership with real kits is tested beside the kit routes.)
+  { route: '/api/kits', method: 'GET', expect: { ...all(200), anonymous: 401 } },
+  { route: '/api/kits', method: 'POST', body: {}, expect: accounts(400, 400, 403, 403) },
+  { route: '/api/kits/preview', method: 'POST', body: {}, expect: accounts(400, 400, 400, 400) },
+  { route: '/api/kits/preview-file', method: 'POST', body: {}, expect: accounts(400, 400, 400, 400) },
+  { route: '/api/kits/[id]', method: 'GET', path: `/api/kits/${MISSING}`, expect: { ...all(404), anonymous: 401 } },
+  {
+    route: '/api/kits/[id]',
+    method: 'PATCH',
+    path: `/api/kits/${MISSING}`,
+    body: {},
+    expect: accounts(404, 404, 403, 403),
+  },
+  { route: '/api/kits/[id]', method: 'DELETE', path: `/api/kits/${MISSING}`, expect: accounts(404, 404, 403, 403) },
+  ...['json', 'pdf', 'stl', 'svg'].map((ext): Row => ({
+    route: `/api/kits/[id].${ext}`,
+    method: 'GET',
+    path: `/api/kits/${MISSING}.${ext}`,
+    expect: { ...all(404), anonymous: 401 },
+  })),
+  {
+    route: '/api/kits/[id]/duplicate',
+    method: 'POST',
+    path: `/api/kits/${MISSING}/duplicate`,
+    expect: accounts(404, 404, 403, 403),
   },
 ];
 
