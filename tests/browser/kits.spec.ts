@@ -1,0 +1,150 @@
+/**
+ * The kit flow in a real browser: build a kit, change the scale and watch the summary and sheets follow,
+ * save it, download the PDF and count its pages with pdf-lib, open the kit as a student through the class
+ * code, and check the builder and kit pages with axe-core (no serious or critical violations).
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFile } from 'node:fs/promises';
+import type { Browser, Page } from 'playwright-core';
+import type { Knex } from 'knex';
+import { PDFDocument } from 'pdf-lib';
+import { BASE_URL, browserLaunch, pageNew } from './browser';
+import { testKnex } from '../db/database';
+import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
+
+let browser: Browser;
+let knex: Knex;
+let teacherCookie: string;
+let classCode: string;
+let kitPath = '';
+
+beforeAll(async () => {
+  browser = await browserLaunch();
+  knex = testKnex();
+  const teacher = await accountCreate(knex, { role: 'teacher', label: 'kits-browser' });
+  teacherCookie = await userSessionCookie(knex, teacher.id);
+  classCode = (await classCreateDirect(knex, teacher, 'Browser kits class')).code;
+});
+afterAll(async () => {
+  await browser?.close();
+  await knex?.destroy();
+});
+
+async function signedIn(): Promise<{ page: Page; errors: string[] }> {
+  const { page, errors } = await pageNew(browser);
+  const [name, value] = teacherCookie.split('=') as [string, string];
+  await page.context().addCookies([{ name, value, url: BASE_URL }]);
+  return { page, errors };
+}
+
+async function hydrated(page: Page): Promise<void> {
+  await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'));
+}
+
+/** axe-core's serious and critical violations on the current page (ids and first targets). */
+async function axeSerious(page: Page): Promise<string[]> {
+  await page.addScriptTag({ path: 'node_modules/axe-core/axe.min.js' });
+  const violations = await page.evaluate(async () => {
+    // axe is the global the script tag defines.
+    const result = await (
+      window as unknown as {
+        axe: { run: () => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> };
+      }
+    ).axe.run();
+    return result.violations;
+  });
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map(
+      (v) =>
+        `${v.id}: ${v.nodes
+          .map((n) => n.target.join(' '))
+          .slice(0, 3)
+          .join(', ')}`,
+    );
+}
+
+const sheetsText = (page: Page) => page.getByTestId('sheet-previews').innerHTML();
+
+describe('kit builder', () => {
+  it('updates the summary and sheets when the scale changes, then saves the kit', async () => {
+    const { page, errors } = await signedIn();
+    await page.goto('/kits/new?model=skein-probe');
+    await hydrated(page);
+    await page.getByRole('button', { name: '1:25', exact: true }).click();
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="kit-summary"]')?.getAttribute('data-scale') === '25',
+    );
+    const before = await sheetsText(page);
+    await page.getByRole('button', { name: '1:20', exact: true }).click();
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="kit-summary"]')?.getAttribute('data-scale') === '20',
+    );
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="build-status"]')?.getAttribute('data-building') === 'false',
+    );
+    // 2.4 m across the flats at 1:20 is 12 cm (product.md's worked example).
+    expect(await page.getByTestId('kit-summary').textContent()).toContain('Body 12 cm across the flats');
+    expect(await sheetsText(page)).not.toBe(before);
+
+    await page.getByRole('button', { name: 'Save kit' }).click();
+    const saved = page.getByTestId('kit-saved');
+    await saved.waitFor();
+    kitPath = (await saved.getByRole('link', { name: 'Open the kit page' }).getAttribute('href')) ?? '';
+    expect(kitPath).toMatch(/^\/kits\/[0-9a-f-]{36}$/);
+    expect(errors).toEqual([]);
+  });
+
+  it('has no serious or critical axe violations', async () => {
+    const { page } = await signedIn();
+    await page.goto('/kits/new');
+    await hydrated(page);
+    expect(await axeSerious(page)).toEqual([]);
+  });
+
+  it('shows a field error and keeps the old sheets for an impossible copy count', async () => {
+    const { page } = await signedIn();
+    await page.goto('/kits/new');
+    await hydrated(page);
+    await page.getByLabel('Copies (one per team)').fill('0');
+    await expect(page.getByText('copies must be at least 1').isVisible()).resolves.toBe(true);
+  });
+});
+
+describe('kit page', () => {
+  it('downloads a PDF with one page per sheet shown', async () => {
+    expect(kitPath).not.toBe('');
+    const { page } = await signedIn();
+    await page.goto(kitPath);
+    const sheets = await page.getByTestId('kit-sheets').locator('li').count();
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Download the PDF to print' }).click(),
+    ]);
+    const pdf = await PDFDocument.load(await readFile((await download.path())!));
+    expect(pdf.getPageCount()).toBe(sheets);
+  });
+
+  it('has no serious or critical axe violations', async () => {
+    const { page } = await signedIn();
+    await page.goto(kitPath);
+    // The 3D preview mounts client:visible: bring it into view so the check covers the hydrated island.
+    await page.getByTestId('fold-preview').scrollIntoViewIfNeeded();
+    await hydrated(page);
+    expect(await axeSerious(page)).toEqual([]);
+  });
+
+  it('opens for a student through the class code and not before', async () => {
+    const { page } = await pageNew(browser);
+    const refused = await page.goto(kitPath);
+    expect(refused?.status()).toBe(401);
+    const join = await page.request.post('/api/classes/join', {
+      data: { code: classCode },
+      headers: { origin: BASE_URL },
+    });
+    expect(join.status()).toBe(200);
+    await page.goto(kitPath);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Skein probe');
+    expect(await page.getByTestId('kit-sheets').locator('img').count()).toBeGreaterThan(0);
+  });
+});
