@@ -20,11 +20,18 @@ export const SHEET_QR_SIDE_MM = 30;
 /** Width of the legend box on the first sheet, mm. */
 export const SHEET_LEGEND_WIDTH_MM = 78;
 
+/** Height of one cut-list row (and of its title and header rows), mm (common practice, no source). */
+export const SHEET_CUT_LIST_ROW_MM = 5;
+/** Width of the cut-list table on the first panel, mm. */
+export const SHEET_CUT_LIST_WIDTH_MM = 170;
+
 export interface SheetFurnitureLayout {
   footer: RectMm;
   checkSquare: RectMm;
   legend?: RectMm;
   qr?: RectMm;
+  /** The cut list's table on the first sheet of a stock kit: title, header and one row per part. */
+  cutList?: RectMm;
   /** Rectangles pieces must stay clear of, gaps included. */
   obstacles: RectMm[];
 }
@@ -36,12 +43,14 @@ export function sheetFurniturePrintable(size: Pick<SheetSize, 'widthMm' | 'heigh
 
 /**
  * The furniture rectangles of one sheet: the check square in the bottom-right corner of the printable area,
- * the footer to its left along the bottom edge, and on the first sheet the legend and QR code above the footer.
+ * the footer to its left along the bottom edge, and on the first sheet the legend and QR code above the footer
+ * and, when `cutListRows` > 0 (sheet stock), the cut-list table above the legend.
  */
 export function sheetFurnitureLayout(
   printable: RectMm,
   units: KitLayout['units'],
   first: boolean,
+  cutListRows = 0,
 ): SheetFurnitureLayout {
   const side = sheetFurnitureCheckSquareMm(units);
   const gap = SHEET_FURNITURE_GAP_MM;
@@ -70,6 +79,12 @@ export function sheetFurnitureLayout(
   layout.legend = legend;
   layout.qr = qr;
   layout.obstacles.push(grow(legend), grow(qr));
+  if (cutListRows > 0) {
+    const heightMm = SHEET_CUT_LIST_ROW_MM * (cutListRows + 2);
+    const widthMm = Math.min(SHEET_CUT_LIST_WIDTH_MM, printable.widthMm);
+    layout.cutList = { xMm: printable.xMm, yMm: blockTop - 2 * gap - heightMm, widthMm, heightMm };
+    layout.obstacles.push(grow(layout.cutList));
+  }
   return layout;
 }
 

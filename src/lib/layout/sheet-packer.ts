@@ -56,7 +56,12 @@ interface PackItem {
 export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): LaidOutSheet[] {
   const spacing = options.spacingMm ?? PIECE_SPACING_MM;
   const printable = sheetFurniturePrintable(options.sheetSize, options.marginMm ?? SHEET_MARGIN_MM);
-  const freeFirst = freeSpaceRects(printable, sheetFurnitureLayout(printable, options.units, true).obstacles);
+  // Sheet stock prints its cut list on the first panel: one row per part (cut-list.ts).
+  const cutListRows = options.sheetSize.kind === 'stock' ? pieces.length : 0;
+  const freeFirst = freeSpaceRects(
+    printable,
+    sheetFurnitureLayout(printable, options.units, true, cutListRows).obstacles,
+  );
   const freeOther = freeSpaceRects(printable, sheetFurnitureLayout(printable, options.units, false).obstacles);
   const tileWindow: RectMm = {
     xMm: 0,

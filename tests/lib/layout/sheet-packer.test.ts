@@ -33,15 +33,15 @@ function placedRings(sheet: LaidOutSheet, pieces: Piece[]): Ring[] {
 
 // Overlap and containment are checked by polygon-clipping (Martinez-Rueda sweep), a reference library, not by
 // the packer's own box arithmetic. Tolerance 1e-6 mm² for floating-point slivers along shared edges.
-function expectValidSheets(sheets: LaidOutSheet[], pieces: Piece[], units: 'metric' | 'us') {
+function expectValidSheets(sheets: LaidOutSheet[], pieces: Piece[], units: 'metric' | 'us', cutListRows = 0) {
   sheets.forEach((sheet, index) => {
     const rings = placedRings(sheet, pieces);
-    const furniture = sheetFurnitureLayout(sheet.printableMm, units, index === 0);
+    const furniture = sheetFurnitureLayout(sheet.printableMm, units, index === 0, cutListRows);
     const printable = rectRing(sheet.printableMm);
     for (let i = 0; i < rings.length; i++) {
       const outside = polygonClipping.difference([rings[i]!], [printable]);
       expect(multiPolygonArea(outside)).toBeLessThan(1e-6);
-      for (const block of [furniture.checkSquare, furniture.footer, furniture.legend, furniture.qr]) {
+      for (const block of [furniture.checkSquare, furniture.footer, furniture.legend, furniture.qr, furniture.cutList]) {
         if (block)
           expect(multiPolygonArea(polygonClipping.intersection([rings[i]!], [rectRing(block)]))).toBeLessThan(1e-6);
       }
@@ -119,7 +119,9 @@ describe('sheetPack', () => {
   test('lays out sheet stock panels for a life-size build', () => {
     const pieces = [cubeNetPiece('wall', 400), sectorPiece('dish', 600, 2.5), rectPiece('panel', 1100, 700)];
     const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES['panel-1220x2440'], units: 'metric', copies: 2 });
-    expectValidSheets(sheets, pieces, 'metric');
+    // The first panel keeps room for the cut list: one row per part.
+    expectValidSheets(sheets, pieces, 'metric', pieces.length);
+    expect(sheetFurnitureLayout(sheets[0]!.printableMm, 'metric', true, pieces.length).cutList).toBeDefined();
     expect(sheets.every((s) => s.widthMm === 1220 && s.heightMm === 2440)).toBe(true);
   });
 

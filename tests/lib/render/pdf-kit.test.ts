@@ -84,6 +84,32 @@ describe('pdfKit', () => {
     expect(text).toContain('0.0.0-test');
   });
 
+  test('prints the cut list of a stock kit on its first panel, read back as text lines by pdf.js', async () => {
+    const kit = fixtureKit('panel-1220x2440', 'metric', 2);
+    const page = await (await pdfjsPages(pdfKit(kit, fonts))).getPage(1);
+    // Text items on one baseline (same PDF y, 0.01 pt) form a line, read left to right.
+    const lines = new Map<number, { x: number; s: string }[]>();
+    for (const item of (await page.getTextContent()).items) {
+      if (!('str' in item) || !item.str.trim()) continue;
+      const y = Math.round(item.transform[5] * 100) / 100;
+      lines.set(y, [...(lines.get(y) ?? []), { x: item.transform[4], s: item.str }]);
+    }
+    const texts = [...lines.values()].map((l) => l.sort((a, b) => a.x - b.x).map((i) => i.s));
+    expect(texts).toContainEqual(['Cut list']);
+    expect(texts).toContainEqual(['Part', 'Size', 'Qty', 'Sheets']);
+    // The fixture's strip is a 400 × 40 mm rectangle (tests/fixtures/pieces), two copies for two teams.
+    const onSheets = kit.sheets.filter((s) => s.placements.some((p) => p.pieceId === 'long')).map((s) => s.number);
+    expect(texts).toContainEqual(['Panel long', '400 × 40 mm', '2', onSheets.join(', ')]);
+    expect(kit.cutList.length).toBe(kit.pieces.length);
+    for (const row of kit.cutList) expect(texts.some((t) => t[0] === row.part && t[2] === '2')).toBe(true);
+  });
+
+  test('prints no cut list on paper kits', async () => {
+    const page = await (await pdfjsPages(pdfKit(fixtureKit('letter', 'us'), fonts))).getPage(1);
+    const text = (await page.getTextContent()).items.map((i) => ('str' in i ? i.str : '')).join(' ');
+    expect(text).not.toContain('Cut list');
+  });
+
   test('embeds the KitwrightSans subset rather than a standard font', async () => {
     const bytes = pdfKit(fixtureKit(), fonts);
     const raw = new TextDecoder('latin1').decode(bytes);

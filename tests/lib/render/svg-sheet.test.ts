@@ -71,4 +71,15 @@ describe('svgSheet', () => {
       .filter((b) => Math.abs(b.width - 50.8) < 1e-3 && Math.abs(b.height - 50.8) < 1e-3);
     expect(squares).toHaveLength(1);
   });
+
+  test('prints the cut list in the furniture group of a stock kit, as text elements', () => {
+    const panel = fixtureKit('panel-1220x2440', 'metric');
+    const first = group(svgSheet(panel, panel.sheets[0]!), 'furniture');
+    const texts = [...first.matchAll(/<text [^>]*>([^<]*)<\/text>/g)].map((m) => m[1]);
+    expect(texts).toContain('Cut list');
+    // The fixture strip is 400 × 40 mm (tests/fixtures/pieces); the SVG escapes nothing in these cells.
+    expect(texts).toContain('Panel long');
+    expect(texts).toContain('400 × 40 mm');
+    if (panel.sheets[1]) expect(svgSheet(panel, panel.sheets[1])).not.toContain('Cut list');
+  });
 });
