@@ -8,6 +8,7 @@ import { VIEW_FOV_DEG, viewFrame } from './view-frame';
 export interface FoldCanvasProps {
   pieces: readonly Piece[];
   foldPercent: number;
+  foldWholeKit: boolean;
   currentAssemblyStep: number;
   actionsRef: RefObject<ViewActions | null>;
   /** Accessible name of the view region. */
@@ -23,6 +24,7 @@ export interface FoldCanvasProps {
 export default function FoldCanvas({
   pieces,
   foldPercent,
+  foldWholeKit,
   currentAssemblyStep,
   actionsRef,
   label,
@@ -75,6 +77,7 @@ export default function FoldCanvas({
         <FoldScene
           pieces={pieces}
           foldPercent={foldPercent}
+          foldWholeKit={foldWholeKit}
           currentAssemblyStep={currentAssemblyStep}
           frame={frame}
           actionsRef={actionsRef}

@@ -44,6 +44,7 @@ export default function FoldPreview({
               <FoldCanvas
                 pieces={pieces}
                 foldPercent={progress.foldPercent}
+                foldWholeKit={progress.foldWholeKit}
                 currentAssemblyStep={currentAssemblyStep}
                 actionsRef={actionsRef}
                 label={`3D view of the ${title} kit at 1:${scaleDenominator}`}
@@ -56,7 +57,13 @@ export default function FoldPreview({
         </div>
         {webgl !== false && (
           <>
-            <FoldSlider foldPercent={progress.foldPercent} onChange={progress.setFoldPercent} disabled={!webgl} />
+            <FoldSlider
+              foldPercent={progress.foldPercent}
+              onChange={progress.setFoldPercent}
+              foldWholeKit={progress.foldWholeKit}
+              onFoldWholeKitChange={progress.setFoldWholeKit}
+              disabled={!webgl}
+            />
             <ViewButtons actionsRef={actionsRef} hintId={hintId} />
           </>
         )}

@@ -9,6 +9,8 @@ import type { ViewFrame } from './view-frame';
 interface Props {
   pieces: readonly Piece[];
   foldPercent: number;
+  /** Fold every piece by the slider; otherwise only the current step's, the others shown assembled. */
+  foldWholeKit: boolean;
   /** The assemblyStep value of the current step; later steps are ghosted. */
   currentAssemblyStep: number;
   frame: ViewFrame;
@@ -20,7 +22,15 @@ const stateOf = (piece: Piece, current: number): PieceState =>
   piece.assemblyStep < current ? 'built' : piece.assemblyStep === current ? 'current' : 'later';
 
 /** The lit scene inside the canvas: every piece folded by the slider, the orbit rig and the ready signal. */
-export default function FoldScene({ pieces, foldPercent, currentAssemblyStep, frame, actionsRef, onRendered }: Props) {
+export default function FoldScene({
+  pieces,
+  foldPercent,
+  foldWholeKit,
+  currentAssemblyStep,
+  frame,
+  actionsRef,
+  onRendered,
+}: Props) {
   const fraction = foldPercent / 100;
   return (
     <>
@@ -28,7 +38,12 @@ export default function FoldScene({ pieces, foldPercent, currentAssemblyStep, fr
       <hemisphereLight position={[0, 0, 1]} args={['#ffffff', '#b9b2a0', 1.6]} />
       <directionalLight position={[frame.radiusMm * 2, -frame.radiusMm * 3, frame.radiusMm * 4]} intensity={1.8} />
       {pieces.map((p) => (
-        <PieceMesh key={p.id} piece={p} fraction={fraction} state={stateOf(p, currentAssemblyStep)} />
+        <PieceMesh
+          key={p.id}
+          piece={p}
+          fraction={foldWholeKit || stateOf(p, currentAssemblyStep) === 'current' ? fraction : 1}
+          state={stateOf(p, currentAssemblyStep)}
+        />
       ))}
       <ViewRig frame={frame} actionsRef={actionsRef} />
       <SceneReadySignal foldPercent={foldPercent} onRendered={onRendered} />

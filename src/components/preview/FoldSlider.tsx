@@ -3,11 +3,16 @@ import { useId } from 'react';
 interface Props {
   foldPercent: number;
   onChange(percent: number): void;
+  foldWholeKit: boolean;
+  onFoldWholeKitChange(whole: boolean): void;
   disabled?: boolean;
 }
 
-/** The fold slider: a native range input (arrow keys, Page Up/Down, Home/End) from flat sheet to folded part. */
-export default function FoldSlider({ foldPercent, onChange, disabled }: Props) {
+/**
+ * The fold slider: a native range input (arrow keys, Page Up/Down, Home/End) from flat sheet to folded part,
+ * and whether it folds the whole kit or only the current step's pieces.
+ */
+export default function FoldSlider({ foldPercent, onChange, foldWholeKit, onFoldWholeKitChange, disabled }: Props) {
   const id = useId();
   const words = foldPercent === 0 ? 'flat sheet' : foldPercent === 100 ? 'folded' : `${foldPercent} % folded`;
   return (
@@ -37,6 +42,16 @@ export default function FoldSlider({ foldPercent, onChange, disabled }: Props) {
       <output htmlFor={id} className="w-12 text-right tabular-nums text-sm">
         {foldPercent} %
       </output>
+      <label className="flex items-center gap-2 text-sm">
+        <input
+          type="checkbox"
+          checked={foldWholeKit}
+          disabled={disabled}
+          onChange={(e) => onFoldWholeKitChange(e.target.checked)}
+          className="accent-fold"
+        />
+        Fold the whole kit (otherwise only this step’s pieces)
+      </label>
     </div>
   );
 }

@@ -2,7 +2,7 @@
  * The assembly steps of a kit in order: the pieces of each step, the numbered tabs to glue (the numbers
  * printed on the sheets) and a plain-text description for screen readers.
  */
-import type { PartKind, Piece } from '../geometry/types';
+import type { Piece } from '../geometry/types';
 
 export interface AssemblyStep {
   /** 1-based position in the build, contiguous even if the pieces' step numbers have gaps. */
@@ -23,21 +23,18 @@ export function assemblySteps(pieces: readonly Piece[]): AssemblyStep[] {
   return ordered.map((key, i) => {
     const group = byStep.get(key)!;
     const tabNumbers = [...new Set(group.flatMap((p) => p.tabs.map((t) => t.number)))].sort((a, b) => a - b);
-    const action = group
-      .map((p) =>
-        assemblyAction(
-          p.partKind,
-          p.label,
-          p.tabs.map((t) => t.number).sort((a, b) => a - b),
-        ),
-      )
-      .join(' ');
+    const actions = group.map((p) => assemblyAction(p));
+    // One piece: "Label. Action."; several: each action after its own piece's label.
+    const said =
+      group.length === 1
+        ? `${group[0]!.label}. ${actions[0]}`
+        : group.map((p, k) => `${p.label}: ${actions[k]}`).join(' ');
     return {
       number: i + 1,
       pieceIds: group.map((p) => p.id),
       pieceLabels: group.map((p) => p.label),
       tabNumbers,
-      description: `Step ${i + 1} of ${ordered.length}: ${group.map((p) => p.label).join(', ')}. ${action}`,
+      description: `Step ${i + 1} of ${ordered.length}: ${said}`,
     };
   });
 }
@@ -58,21 +55,33 @@ export function tabNumbersLabel(numbers: readonly number[]): string {
   return `${sorted.length === 1 ? 'tab' : 'tabs'} ${list}`;
 }
 
-function assemblyAction(kind: PartKind, label: string, tabs: number[]): string {
+function assemblyAction(piece: Piece): string {
+  const tabs = piece.tabs.map((x) => x.number).sort((a, b) => a - b);
   const t = tabNumbersLabel(tabs);
-  switch (kind) {
-    case 'body':
-      return `Fold along every fold line, then glue ${t}, each onto the edge printed with the same number.`;
+  switch (piece.partKind) {
+    case 'body': {
+      // A body piece with no tabs of its own (a cap) is where other pieces' tabs land.
+      if (tabs.length === 0) {
+        const edges = [...new Set(piece.edgeLabels.map((e) => e.number))];
+        return edges.length > 0
+          ? `Glue it onto ${tabNumbersLabel(edges)}, matching the numbers printed along its edges.`
+          : 'Fold it along its fold lines.';
+      }
+      const fold = piece.folds.some((f) => f.tabNumber === undefined)
+        ? 'Fold along every fold line, then glue'
+        : 'Glue';
+      return `${fold} ${t}, each onto the edge printed with the same number.`;
+    }
     case 'rigid-boom':
-      return `Roll the ${label.toLowerCase()} into a tube and glue its overlap strip (${t}) under the edge with the same number, then stand it on the body.`;
+      return `Roll it into a tube and glue its overlap strip (${t}) under the edge with the same number, then stand it on the body.`;
     case 'dish':
     case 'nozzle':
-      return `Curl the ${label.toLowerCase()} into a cone and glue ${t} under the edge with the same number, then glue it onto the body.`;
+      return `Curl it into a cone and glue ${t} under the edge with the same number, then glue it onto the body.`;
     case 'wire-boom-anchor':
       return `Lay the thread where the body is printed with ${tabs.join(', ')}, fold the anchor over it and glue ${t} there.`;
     case 'deployable-panel':
       return `Fold the hinge strip and glue ${t} onto the body where the same number is printed.`;
     case 'solar-panel':
-      return `Glue the ${label.toLowerCase()} flat onto its face of the body${tabs.length > 0 ? `, with ${t}` : ''}.`;
+      return `Glue it flat onto its face of the body${tabs.length > 0 ? `, with ${t}` : ''}.`;
   }
 }

@@ -20,18 +20,22 @@ describe('assemblySteps', () => {
     for (const p of ps) for (const e of p.edgeLabels) expect(stepped.has(e.number)).toBe(true);
   });
 
-  test('puts the Skein body first and one step per appendage after it, numbered from 1', () => {
-    const steps = assemblySteps(pieces('skein-probe'));
+  test('puts the Skein body pieces first and one step per appendage after them, numbered from 1', () => {
+    const ps = pieces('skein-probe');
+    const steps = assemblySteps(ps);
     expect(steps.map((s) => s.number)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
-    expect(steps[0]!.pieceIds).toEqual(['body']);
+    expect(steps[0]!.pieceIds).toEqual(ps.filter((p) => p.partKind === 'body').map((p) => p.id));
     expect(steps[1]!.pieceLabels).toEqual(['Wire boom +X anchor']);
   });
 
   test('describes each step in words with its position and its tab numbers', () => {
     const steps = assemblySteps(pieces('skein-probe'));
-    expect(steps[0]!.description).toMatch(/^Step 1 of 8: Body\. Fold along every fold line, then glue tabs 1–\d+,/);
+    expect(steps[0]!.description).toMatch(/^Step 1 of 8: Body.*Fold along every fold line, then glue tabs \d+–\d+/);
     const anchor = steps[1]!;
-    expect(anchor.description).toContain(`tab ${anchor.tabNumbers[0]}`);
+    expect(anchor.description).toMatch(
+      new RegExp(`^Step 2 of 8: Wire boom \\+X anchor\\. Lay the thread .* glue tab ${anchor.tabNumbers[0]} there\\.$`),
+    );
+    expect(steps[5]!.description).toMatch(/^Step 6 of 8: Axial boom, top\. Roll it into a tube/);
   });
 
   test('orders steps by assemblyStep and renumbers gaps', () => {
