@@ -5,9 +5,9 @@
 import type { CleanroomInput } from '../analysis/cleanroom';
 import { formFieldNumber, tableCellKey, tableNumbers, type TableRequest, type TableRow } from './table-cells';
 
-/** Column key of the count at particle size index `i`. */
-export function cleanroomCountKey(i: number): string {
-  return `count${i}`;
+/** Column key of the count at particle size `sizeUm` (by size, so unticking a size keeps the other columns). */
+export function cleanroomCountKey(sizeUm: number): string {
+  return `count-${String(sizeUm).replace('.', '_')}`;
 }
 
 export interface CleanroomFields {
@@ -19,7 +19,7 @@ export interface CleanroomFields {
 
 /** Builds the request from sample rows (location, volume, counts) and the room's fields. */
 export function cleanroomTableRequest(rows: readonly TableRow[], f: CleanroomFields): TableRequest<CleanroomInput> {
-  const countKeys = f.sizesUm.map((_, i) => cleanroomCountKey(i));
+  const countKeys = f.sizesUm.map((size) => cleanroomCountKey(size));
   const read = tableNumbers(rows, ['volume', ...countKeys]);
   const errors = { ...read.errors };
   const floorAreaM2 = formFieldNumber(f.floorAreaM2, 'floorAreaM2', errors);
