@@ -18,8 +18,10 @@ export default function ResultList({ items, title }: { items: ResultItem[]; titl
         {items.map((item) => (
           <div key={item.label} className="contents">
             <dt className="font-semibold text-ink-soft">{item.label}</dt>
-            <dd data-testid={item.testId}>
-              <span className="font-semibold text-ink">{item.value}</span>
+            <dd>
+              <span className="font-semibold text-ink" data-testid={item.testId}>
+                {item.value}
+              </span>
               {item.unit && <span className="text-ink-soft"> {item.unit}</span>}
               {item.note && <span className="block text-sm text-ink-soft">{item.note}</span>}
             </dd>

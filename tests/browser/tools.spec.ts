@@ -1,0 +1,131 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { browserLaunch, pageNew } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await browserLaunch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Waits until the island of `component` has hydrated (Astro drops the ssr attribute then). */
+async function islandReady(page: Page, component: string): Promise<void> {
+  await page.waitForSelector(`astro-island[component-url*="${component}"]:not([ssr])`, { state: 'attached' });
+}
+
+/** Serious and critical axe-core violations on the page as it is now, as "id: help" lines. */
+async function axeSerious(page: Page): Promise<string[]> {
+  await page.addScriptTag({ path: 'node_modules/axe-core/axe.min.js' });
+  const violations = await page.evaluate(async () => {
+    const axe = (
+      window as unknown as {
+        axe: { run: () => Promise<{ violations: { id: string; impact: string; help: string }[] }> };
+      }
+    ).axe;
+    return (await axe.run()).violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help }));
+  });
+  return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.help}`);
+}
+
+/** An accelerometer CSV of a 10 Hz, 1 g sine along x (gravity on z), 100 Hz for 5.12 s. */
+function sineCsv(): Buffer {
+  const lines = ['time_s,x_g,y_g,z_g'];
+  for (let i = 0; i < 512; i++) {
+    const t = i / 100;
+    lines.push(`${t.toFixed(2)},${Math.sin(2 * Math.PI * 10 * t).toFixed(6)},0,1`);
+  }
+  return Buffer.from(lines.join('\n') + '\n');
+}
+
+describe('magnetic tool', () => {
+  it('fits the sample readings to an exponent near −3 and draws the plot', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/magnetic');
+    await islandReady(page, 'MagneticTool');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Fit the power law' }).click();
+    const exponent = page.getByTestId('magnetic-exponent');
+    await exponent.waitFor();
+    // The sample is a dipole, whose far field falls as r⁻³ (Griffiths, §5.4.3); 0.1 allows the sample's noise.
+    const n = Number((await exponent.textContent())!.split('±')[0]!.trim());
+    expect(Math.abs(n + 3)).toBeLessThan(0.1);
+    await page.waitForSelector('[data-testid="plot"][data-ready="true"] canvas');
+    expect(await page.locator('[data-testid="plot"] figcaption').textContent()).toMatch(/exponent/);
+    expect(await axeSerious(page)).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+
+  it('shows a typed cell’s problem next to that cell, and the API’s field error next to its cell', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools/magnetic');
+    await islandReady(page, 'MagneticTool');
+    const distance1 = page.getByLabel('Distance, row 1');
+    await distance1.fill('abc');
+    await page.getByLabel('Field, row 1').fill('50');
+    await page.getByRole('button', { name: 'Fit the power law' }).click();
+    await expect(distance1.getAttribute('aria-invalid')).resolves.toBe('true');
+    const describedBy = (await distance1.getAttribute('aria-describedby'))!;
+    expect(await page.locator(`[id="${describedBy}"]`).textContent()).toBe('“abc” is not a number');
+
+    // A number the API refuses (distance must be positive) comes back as readings.0.distanceCm.
+    await distance1.fill('-2');
+    for (const [row, d, b] of [
+      [2, '5', '40'],
+      [3, '6', '20'],
+      [4, '8', '9'],
+    ] as const) {
+      await page.getByLabel(`Distance, row ${row}`).fill(d);
+      await page.getByLabel(`Field, row ${row}`).fill(b);
+    }
+    await page.getByRole('button', { name: 'Fit the power law' }).click();
+    await page.getByRole('alert').filter({ hasText: 'We could not compute that' }).waitFor();
+    const id = (await distance1.getAttribute('aria-describedby'))!;
+    expect(await page.locator(`[id="${id}"]`).textContent()).toMatch(/greater than 0/);
+    expect(await axeSerious(page)).toEqual([]);
+  });
+});
+
+describe('vibration tool', () => {
+  it('analyses an uploaded CSV into Grms and a PSD plot', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/vibration');
+    await islandReady(page, 'VibrationTool');
+    await page.getByLabel('Upload an accelerometer CSV').setInputFiles({
+      name: 'shake.csv',
+      mimeType: 'text/csv',
+      buffer: sineCsv(),
+    });
+    const grms = page.getByTestId('vibration-grms');
+    await grms.waitFor();
+    // A sine of amplitude 1 g has an RMS of 1/√2 = 0.707 g; gravity on z is removed as the mean.
+    expect(Math.abs(Number(await grms.textContent()) - Math.SQRT1_2)).toBeLessThan(0.01);
+    await page.waitForSelector('[data-testid="plot"][data-ready="true"] canvas');
+    expect(await page.locator('[data-testid="plot"] figcaption').first().textContent()).toMatch(/PSD/);
+    expect(await axeSerious(page)).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+});
+
+describe('scale tool', () => {
+  it('explains the scale for the venue chosen, without JavaScript help', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools/scale');
+    await page.getByLabel('Venue', { exact: true }).selectOption('gym-fiba');
+    await page.getByRole('button', { name: 'Find the scale' }).click();
+    await page.waitForURL(/venue=gym-fiba/);
+    expect(await page.getByTestId('scale-explanation').textContent()).toMatch(/FIBA basketball court/);
+    expect(await page.getByTestId('scale-venue-explanation').textContent()).toMatch(/largest scale that fits/);
+    expect(await axeSerious(page)).toEqual([]);
+  });
+
+  it('lists every tool on the tools page', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools');
+    for (const name of ['Shake test', 'Thermal cycling', 'Clean room', 'Magnetic field', 'Scale it']) {
+      expect(await page.getByRole('link', { name, exact: true }).count()).toBe(1);
+    }
+    expect(await axeSerious(page)).toEqual([]);
+  });
+});
