@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { clientIp } from '../../../src/lib/auth/client-ip.server';
+import { clientIp, UNTRUSTED_FORWARDED } from '../../../src/lib/auth/client-ip.server';
 
 const ctx = (xff?: string) => ({
   clientAddress: '10.0.0.5',
@@ -11,8 +11,10 @@ afterEach(() => {
 });
 
 describe('clientIp', () => {
-  it('uses the socket address and ignores X-Forwarded-For unless TRUST_PROXY is set', () => {
-    expect(clientIp(ctx('203.0.113.9'))).toBe('10.0.0.5');
+  it('uses the socket address, and one shared bucket for forged X-Forwarded-For without TRUST_PROXY', () => {
+    expect(clientIp(ctx())).toBe('10.0.0.5');
+    expect(clientIp(ctx('203.0.113.9'))).toBe(UNTRUSTED_FORWARDED);
+    expect(clientIp(ctx('198.51.100.7'))).toBe(UNTRUSTED_FORWARDED);
   });
 
   it('takes the address added by our own proxies, counting TRUST_PROXY hops from the right', () => {

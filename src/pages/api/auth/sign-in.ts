@@ -1,6 +1,7 @@
 import { verificationSend } from '../../../lib/auth/account-flows.server';
 import { actorPublic } from '../../../lib/auth/actor-require';
 import { clientIp } from '../../../lib/auth/client-ip.server';
+import { housekeepingMaybe } from '../../../lib/auth/housekeeping.server';
 import { RATE_LIMITS } from '../../../lib/auth/rate-limit-rules';
 import { rateLimitEnforce, rateLimitReset } from '../../../lib/auth/rate-limit.server';
 import { SignInSchema } from '../../../lib/auth/schemas';
@@ -31,6 +32,7 @@ export const POST = endpoint({ access: ['anyone'] }, async (context) => {
     throw new ForbiddenError(`Confirm your e-mail address first: we have sent a new link to ${check.account.email}.`);
   }
   await rateLimitReset(RATE_LIMITS.signInAccount, input.email);
+  housekeepingMaybe(context.locals.requestId);
   await userSessionStart(context, check.account.id);
   return {
     ok: true,

@@ -1,4 +1,5 @@
 import { clientIp } from '../../../lib/auth/client-ip.server';
+import { housekeepingMaybe } from '../../../lib/auth/housekeeping.server';
 import { classForActor } from '../../../lib/auth/class-access.server';
 import { classIdForCode } from '../../../lib/auth/class-flows.server';
 import { ClassJoinSchema } from '../../../lib/auth/class-schemas';
@@ -20,6 +21,7 @@ export const POST = endpoint({ access: ['anyone'] }, async (context) => {
   const classId = await classIdForCode(input.code);
   await classSessionEnd(context);
   await classSessionStart(context, classId);
+  housekeepingMaybe(context.locals.requestId);
   const view = await classForActor({ kind: 'class', classId, classSessionId: '' }, classId);
   return { ok: true, class: view };
 });
