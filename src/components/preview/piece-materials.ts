@@ -2,7 +2,7 @@ import { DoubleSide, LineBasicMaterial, MeshStandardMaterial } from 'three';
 
 /**
  * Materials shared by every piece, created once at module load (never per frame or per render): pieces
- * already built are paper, the current step's pieces teal, later steps a faint ghost.
+ * already built are paper, the current step's pieces teal with amber glue tabs, later steps a faint ghost.
  */
 export const PIECE_MATERIALS = {
   built: new MeshStandardMaterial({
@@ -29,6 +29,7 @@ export const PIECE_MATERIALS = {
     opacity: 0.25,
     depthWrite: false,
   }),
+  tab: new MeshStandardMaterial({ color: '#e3a33b', side: DoubleSide, roughness: 0.8 }),
   edge: new LineBasicMaterial({ color: '#1b2330' }),
   edgeLater: new LineBasicMaterial({ color: '#6b7482', transparent: true, opacity: 0.35 }),
 } as const;

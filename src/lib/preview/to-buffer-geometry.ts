@@ -4,7 +4,8 @@
  */
 import { BufferGeometry, Float32BufferAttribute, ShapeUtils, Vector2 } from 'three';
 import { hingeTreeFold } from '../geometry/hinge-tree';
-import type { CurvedDevelopment, HingeFace, ModelMesh, Piece, Vec2Mm } from '../geometry/types';
+import type { CurvedDevelopment, GlueTab, HingeFace, ModelMesh, Piece, Vec2Mm } from '../geometry/types';
+import { pieceTabsFold } from './tab-fold';
 
 /** Three vertex indices into a face polygon, counter-clockwise in flat coordinates. */
 export type FaceTriangle = [number, number, number];
@@ -17,7 +18,7 @@ export interface PieceGeometry {
 }
 
 // Triangulation depends only on the flat face, so it is done once per face object, not per fold fraction.
-const trianglesByFace = new WeakMap<HingeFace, FaceTriangle[]>();
+const trianglesByFace = new WeakMap<HingeFace | GlueTab, FaceTriangle[]>();
 
 /**
  * Triangles of a flat face polygon: a strip between its two rulings chains for curved pieces (so no triangle
@@ -66,7 +67,7 @@ function orientCcw(p: readonly Vec2Mm[], [i, j, k]: FaceTriangle): FaceTriangle 
   return cross < 0 ? [i, k, j] : [i, j, k];
 }
 
-function cachedTriangles(face: HingeFace, curved?: CurvedDevelopment): FaceTriangle[] {
+function cachedTriangles(face: HingeFace | GlueTab, curved?: CurvedDevelopment): FaceTriangle[] {
   let triangles = trianglesByFace.get(face);
   if (!triangles) {
     triangles = faceTriangles(face.polygonMm, curved);
@@ -99,6 +100,26 @@ export function pieceGeometry(piece: Piece, fraction: number): PieceGeometry {
   const edges = new BufferGeometry();
   edges.setAttribute('position', new Float32BufferAttribute(lines, 3));
   return { surface, edges };
+}
+
+/**
+ * The piece's glue tabs folded by fraction (tab-fold.ts) as one indexed surface, model mm; tabs that
+ * pieceTabsFold leaves out are missing here too, and a piece without tabs gives an empty geometry.
+ */
+export function pieceTabsGeometry(piece: Piece, fraction: number): BufferGeometry {
+  const positions: number[] = [];
+  const index: number[] = [];
+  for (const folded of pieceTabsFold(piece, fraction)) {
+    const tab = piece.tabs.find((t) => t.number === folded.number)!;
+    const base = positions.length / 3;
+    for (const p of folded.polygonMm) positions.push(p[0], p[1], p[2]);
+    for (const [i, j, k] of cachedTriangles(tab, piece.hinge.curved)) index.push(base + i, base + j, base + k);
+  }
+  const geometry = new BufferGeometry();
+  geometry.setAttribute('position', new Float32BufferAttribute(positions, 3));
+  geometry.setIndex(index);
+  if (index.length > 0) geometry.computeVertexNormals();
+  return geometry;
 }
 
 /** The assembled mesh (model mm) as indexed BufferGeometry with vertex normals; empty mesh → empty geometry. */

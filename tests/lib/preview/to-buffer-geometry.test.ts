@@ -5,7 +5,13 @@ import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
 import { modelMesh, PANEL_MESH_THICKNESS_MM } from '../../../src/lib/geometry/model-mesh';
 import { CHORD_TOLERANCE_MM } from '../../../src/lib/geometry/paper';
 import { polygonArea } from '../../../src/lib/geometry/vec';
-import { faceTriangles, modelMeshGeometry, pieceGeometry } from '../../../src/lib/preview/to-buffer-geometry';
+import {
+  faceTriangles,
+  modelMeshGeometry,
+  pieceGeometry,
+  pieceTabsGeometry,
+} from '../../../src/lib/preview/to-buffer-geometry';
+import { pieceTabsFold } from '../../../src/lib/preview/tab-fold';
 import type { Piece } from '../../../src/lib/geometry/types';
 
 const SCALES = [10, 20];
@@ -142,6 +148,18 @@ describe('pieceGeometry folded at 1', () => {
     for (const axis of ['x', 'y', 'z'] as const) {
       expect(Math.abs(folded.min[axis] - mesh.min[axis])).toBeLessThanOrEqual(slack);
       expect(Math.abs(folded.max[axis] - mesh.max[axis])).toBeLessThanOrEqual(slack);
+    }
+  });
+});
+
+describe('pieceTabsGeometry', () => {
+  test.each(flatPieces)('keeps the area of the folded tabs at every fraction: $name', ({ piece }) => {
+    const drawn = new Set(pieceTabsFold(piece, 0).map((t) => t.number));
+    const flatArea = piece.tabs.filter((t) => drawn.has(t.number)).reduce((s, t) => s + polygonArea(t.polygonMm), 0);
+    for (const f of FRACTIONS) {
+      const g = pieceTabsGeometry(piece, f);
+      if (flatArea === 0) expect(g.getIndex()!.count).toBe(0);
+      else expect(triangleAreaSum(g) / flatArea).toBeCloseTo(1, 5);
     }
   });
 });
