@@ -108,6 +108,72 @@ describe('vibration tool', () => {
   });
 });
 
+describe('vibration tool refusals', () => {
+  it('refuses a file above the limit before sending it', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools/vibration');
+    await islandReady(page, 'VibrationTool');
+    let posted = false;
+    page.on('request', (req) => {
+      if (req.url().includes('/api/analysis/vibration')) posted = true;
+    });
+    await page.getByLabel('Upload an accelerometer CSV').setInputFiles({
+      name: 'huge.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.alloc(17_000_000, 'a'),
+    });
+    await page.getByText('“huge.csv” is 17 MB; this tool reads files up to 16 MB').waitFor();
+    expect(posted).toBe(false);
+  });
+
+  it('shows the server’s message about a bad cell next to the upload', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools/vibration');
+    await islandReady(page, 'VibrationTool');
+    // File row 4 (header, t = 0, t = 0.01, t = 0.02) gets text in its x cell.
+    const lines = sineCsv().toString().split('\n');
+    lines[3] = '0.02,oops,0,1';
+    const text = lines.join('\n');
+    await page
+      .getByLabel('Upload an accelerometer CSV')
+      .setInputFiles({ name: 'bad.csv', mimeType: 'text/csv', buffer: Buffer.from(text) });
+    const upload = page.getByLabel('Upload an accelerometer CSV');
+    await expect.poll(() => upload.getAttribute('aria-invalid')).toBe('true');
+    const ids = (await upload.getAttribute('aria-describedby'))!.split(' ');
+    expect(await page.locator(`[id="${ids.at(-1)}"]`).textContent()).toMatch(/^Row 4, column "x_g"/);
+  });
+});
+
+describe('thermal and clean-room tools', () => {
+  it('fits the thermal sample: the blanket run has the longer time constant', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/thermal');
+    await islandReady(page, 'ThermalTool');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Fit the runs' }).click();
+    const taus = page.getByTestId('thermal-tau');
+    await taus.first().waitFor();
+    const [bare, blanket] = (await taus.allTextContents()).map((t) => Number(t.split('±')[0]));
+    // The sample's runs have τ = 5 and 12 min (thermal-sample.ts); a blanket slows the cooling.
+    expect(blanket! > bare!).toBe(true);
+    await page.waitForSelector('[data-testid="plot"][data-ready="true"] canvas');
+    expect(await axeSerious(page)).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+
+  it('classifies the clean-room sample as ISO Class 7', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/cleanroom');
+    await islandReady(page, 'CleanroomTool');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Classify the air' }).click();
+    // The worst location's 254 000 particles/m³ ≥ 0.5 µm is under Class 7's 352 000 (ISO 14644-1:2015 Table 1).
+    await expect.poll(() => page.getByTestId('cleanroom-class').textContent()).toBe('ISO Class 7');
+    expect(await axeSerious(page)).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+});
+
 describe('scale tool', () => {
   it('explains the scale for the venue chosen, without JavaScript help', async () => {
     const { page } = await pageNew(browser);
