@@ -65,7 +65,7 @@ describe('teacher account in the browser', () => {
     await signIn(page, email, PASSWORD);
     await page.waitForURL('**/classes');
     expect(await page.getByRole('heading', { name: 'My classes' }).isVisible()).toBe(true);
-    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('button', { name: 'Sign out', exact: true }).click();
     await page.waitForURL((url) => url.pathname === '/');
     expect(await page.getByRole('link', { name: 'Sign in' }).first().isVisible()).toBe(true);
     expect(errors).toEqual([]);
@@ -87,7 +87,11 @@ describe('teacher account in the browser', () => {
     await page.getByLabel('New password', { exact: true }).fill(newPassword);
     await page.getByRole('button', { name: 'Set my new password' }).click();
     await page.getByText('every other session has been signed out').waitFor();
-    await page.getByRole('button', { name: 'Sign out' }).click();
+    // The reset signed this browser in.
+    await page.getByRole('link', { name: 'Go to my account' }).click();
+    await page.waitForURL('**/account');
+    expect(await page.getByTestId('account-email').textContent()).toBe(email);
+    await page.getByRole('button', { name: 'Sign out', exact: true }).click();
     await page.waitForURL((url) => url.pathname === '/');
 
     await signIn(page, email, PASSWORD);
