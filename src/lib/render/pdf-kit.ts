@@ -51,7 +51,12 @@ export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
 
 function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
-  const scene = sheetScene(kit, sheet);
+  // Labels are laid out with the embedded font's own advance widths (jspdf's getTextWidth, in mm).
+  const scene = sheetScene(kit, sheet, (text, sizeMm, bold) => {
+    doc.setFont(PDF_FONT_FAMILY, bold ? 'bold' : 'normal');
+    doc.setFontSize(sizeMm * PT_PER_MM);
+    return doc.getTextWidth(text);
+  });
   doc.setLineJoin('round');
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);

@@ -4,7 +4,18 @@
  * legend, QR code). The SVG and PDF renderers draw the same scene.
  */
 import type { Piece, Vec2Mm } from '../geometry/types';
-import { placementApply, placementApplyAngle, placementBounds } from '../layout/placement';
+import { placementApply, placementApplyAngle } from '../layout/placement';
+import {
+  LABEL_BOX_HEIGHT_EM,
+  labelBox,
+  labelBoxesOverlap,
+  labelCandidatePoints,
+  labelPointInside,
+  labelWidthEstimateMm,
+} from './label-placement';
+import type { LabelMeasure } from './label-placement';
+import { polygonArea } from '../geometry/vec';
+import { outlineOf } from '../geometry/piece-builder';
 import {
   sheetFurnitureCheckSquareText,
   sheetFurnitureFooterText,
@@ -50,14 +61,24 @@ const LABEL_SIZE_MM = 3.5;
 const NUMBER_SIZE_MM = 2.6;
 const FOOTER_SIZE_MM = 2.8;
 
-/** The scene of one sheet of a kit; pieces missing from `kit.pieces` are skipped. */
-export function sheetScene(kit: KitLayout, sheet: LaidOutSheet): SheetScene {
+/**
+ * The scene of one sheet of a kit; pieces missing from `kit.pieces` are skipped. Label texts are placed so
+ * their boxes (measured by `measure`, the renderer's font metrics or the stated estimate) do not overlap.
+ */
+export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure = labelWidthEstimateMm): SheetScene {
   const scene: SheetScene = { texts: [], strokes: [], fills: [] };
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
+  const labels = new SceneLabels(scene, measure);
+  // Numbers have fixed homes (their edge or tab); piece names can move, so they are placed last.
+  for (const m of sheet.alignmentMarks) labels.reserve(text(m.letter, [m.atMm[0] + 3.6, m.atMm[1] - 3], NUMBER_SIZE_MM, 'labels', { bold: true, anchor: 'start' }));
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);
-    if (piece) scenePieceTexts(scene, piece, placement);
+    if (piece) scenePieceNumbers(labels, piece, placement);
     if (placement.tile) sceneTileGuides(scene, placement);
+  }
+  for (const placement of sheet.placements) {
+    const piece = byId.get(placement.pieceId);
+    if (piece) scenePieceName(labels, piece, placement);
   }
   for (const mark of sheet.alignmentMarks) {
     const [x, y] = mark.atMm;
@@ -78,9 +99,6 @@ export function sheetScene(kit: KitLayout, sheet: LaidOutSheet): SheetScene {
           [x, y + arm],
         ],
       },
-    );
-    scene.texts.push(
-      text(mark.letter, [x + arm + 0.6, y - arm], NUMBER_SIZE_MM, 'labels', { bold: true, anchor: 'start' }),
     );
   }
   sceneFurniture(scene, kit, sheet);
@@ -109,27 +127,150 @@ function upright(angleRad: number): number {
   return a;
 }
 
-function scenePieceTexts(scene: SheetScene, piece: Piece, placement: Placement) {
+/** The label texts of a sheet and their boxes, so each new label can be kept clear of the ones before. */
+class SceneLabels {
+  readonly boxes: Vec2Mm[][] = [];
+  constructor(
+    readonly scene: SheetScene,
+    readonly measure: LabelMeasure,
+  ) {}
+
+  box(t: SceneText): Vec2Mm[] {
+    return labelBox(t.atMm, t.angleRad, this.measure(t.text, t.sizeMm, t.bold), t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor);
+  }
+
+  free(box: readonly Vec2Mm[]): boolean {
+    return !this.boxes.some((b) => labelBoxesOverlap(b, box));
+  }
+
+  /** Adds a text at its own place whatever it covers (marks whose place is their meaning). */
+  reserve(t: SceneText) {
+    this.scene.texts.push(t);
+    this.boxes.push(this.box(t));
+  }
+
+  /** Adds the first of the candidate texts whose box is free and passes `fits`; false when none is. */
+  tryPlace(candidates: Iterable<SceneText>, fits: (box: Vec2Mm[]) => boolean = () => true): boolean {
+    for (const t of candidates) {
+      const box = this.box(t);
+      if (this.free(box) && fits(box)) {
+        this.scene.texts.push(t);
+        this.boxes.push(box);
+        return true;
+      }
+    }
+    return false;
+  }
+}
+
+/** Sizes tried for a number, mm: full size first, then smaller, before it is nudged further along. */
+const NUMBER_SIZES_MM = [NUMBER_SIZE_MM, 2.1, 1.7];
+/** Shifts along its baseline tried for a number that would cover another label, mm. */
+const NUMBER_SHIFTS_MM = [0, 1.5, -1.5, 3, -3, 4.5, -4.5, 6, -6];
+
+function* numberCandidates(value: string, at: Vec2Mm, angleRad: number): Generator<SceneText> {
+  const [c, s] = [Math.cos(angleRad), Math.sin(angleRad)];
+  for (const size of NUMBER_SIZES_MM)
+    for (const d of NUMBER_SHIFTS_MM) yield text(value, [at[0] + c * d, at[1] + s * d], size, 'labels', { angleRad });
+}
+
+function scenePieceNumbers(labels: SceneLabels, piece: Piece, placement: Placement) {
   const window = placement.tile?.windowMm;
-  const box = placementBounds(placement, piece);
-  // Average glyph advance of the font is about 0.6 em (from memory: DejaVu Sans Bold); keep the label inside.
-  const sizeMm = Math.min(
-    LABEL_SIZE_MM,
-    Math.min(box.widthMm, box.heightMm) / 5,
-    (0.8 * box.widthMm) / (0.6 * piece.label.length),
-  );
-  const center = placementApply(placement, polygonCentroid(piece.hinge.faces[0]?.polygonMm ?? piece.outlineMm));
-  if (sizeMm >= 1.2 && inside(center, window))
-    scene.texts.push(text(piece.label, center, sizeMm, 'labels', { bold: true }));
-  for (const tab of piece.tabs) {
-    const at = placementApply(placement, tab.labelAtMm);
-    if (inside(at, window)) scene.texts.push(text(String(tab.number), at, NUMBER_SIZE_MM, 'labels'));
-  }
-  for (const label of piece.edgeLabels) {
-    const at = placementApply(placement, label.atMm);
-    const angleRad = upright(placementApplyAngle(placement, label.angleRad));
-    if (inside(at, window)) scene.texts.push(text(String(label.number), at, NUMBER_SIZE_MM, 'labels', { angleRad }));
-  }
+  const place = (value: string, at: Vec2Mm, angleRad: number) => {
+    if (!inside(at, window)) return;
+    if (!labels.tryPlace(numberCandidates(value, at, angleRad), (b) => b.every((p) => inside(p, window))))
+      labels.reserve(text(value, at, NUMBER_SIZES_MM[NUMBER_SIZES_MM.length - 1]!, 'labels', { angleRad }));
+  };
+  for (const tab of piece.tabs) place(String(tab.number), placementApply(placement, tab.labelAtMm), 0);
+  for (const label of piece.edgeLabels)
+    place(String(label.number), placementApply(placement, label.atMm), upright(placementApplyAngle(placement, label.angleRad)));
+}
+
+/** Piece names tried, mm: large first; below the last the name is left off. */
+const NAME_SIZES_MM = [LABEL_SIZE_MM, 3, 2.6, 2.2, 1.8, 1.5, 1.2];
+
+/** The name and its shorter forms, dropping leading words but keeping two ("Wire boom +X anchor" → "+X anchor"). */
+export function sceneLabelAbbreviations(label: string): string[] {
+  const words = label.split(/\s+/).filter(Boolean);
+  return words.slice(0, Math.max(1, words.length - 1)).map((_, i) => words.slice(i).join(' '));
+}
+
+/**
+ * The piece's name inside its largest faces (or anywhere inside its outline), at the point farthest from
+ * the edges that leaves it clear of every label already placed; shrunk, then shortened, to fit.
+ */
+function scenePieceName(labels: SceneLabels, piece: Piece, placement: Placement) {
+  const window = sceneNameWindow(placement);
+  const faces = piece.hinge.faces
+    .map((f) => f.polygonMm)
+    .filter((f) => f.length >= 3)
+    .sort((a, b) => Math.abs(polygonArea(b)) - Math.abs(polygonArea(a)))
+    .slice(0, 4)
+    .map((f) => f.map((p) => placementApply(placement, p)));
+  // Last resort for pieces whose faces are all narrow (a many-sided wall strip): across folds, never on tabs.
+  const union = outlineOf(piece.hinge.faces.map((f) => [...f.polygonMm]));
+  const regions = [...faces, union.map((p) => placementApply(placement, p))];
+  const spots = regions.map((r) => ({ within: sceneInside(r, window), points: labelCandidatePoints(r).filter((p) => inside(p, window)) }));
+  // Down to 1.8 mm the full name comes first at every size, then the shorter forms; below that the largest
+  // size that fits wins, whichever form it takes. Upright text first, then reading up the sheet for tall,
+  // narrow pieces.
+  const names = sceneLabelAbbreviations(piece.label);
+  const tries: [string, number][] = [
+    ...names.flatMap((n) => NAME_SIZES_MM.filter((s) => s >= 1.8).map((s) => [n, s] as [string, number])),
+    ...NAME_SIZES_MM.filter((s) => s < 1.8).flatMap((s) => names.map((n) => [n, s] as [string, number])),
+  ];
+  for (const [name, size] of tries)
+    for (const angleRad of [0, -Math.PI / 2])
+      for (const { within, points } of spots) {
+        const candidates = points.map((p) => text(name, p, size, 'labels', { bold: true, angleRad }));
+        if (labels.tryPlace(candidates, within)) return;
+      }
+}
+
+/** Clear paper kept round a piece's name inside its face, mm (common practice, no source). */
+const NAME_PADDING_MM = 0.6;
+
+/** A text box (corners p0…p3, p0→p1 along the baseline) grown by padMm on every side. */
+function sceneBoxPadded(box: readonly Vec2Mm[], padMm: number): Vec2Mm[] {
+  const [p0, p1, p2, p3] = box as [Vec2Mm, Vec2Mm, Vec2Mm, Vec2Mm];
+  const unit = (a: Vec2Mm, b: Vec2Mm): Vec2Mm => {
+    const l = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
+    return [((b[0] - a[0]) / l) * padMm, ((b[1] - a[1]) / l) * padMm];
+  };
+  const u = unit(p0, p1);
+  const v = unit(p0, p3);
+  return [
+    [p0[0] - u[0] - v[0], p0[1] - u[1] - v[1]],
+    [p1[0] + u[0] - v[0], p1[1] + u[1] - v[1]],
+    [p2[0] + u[0] + v[0], p2[1] + u[1] + v[1]],
+    [p3[0] - u[0] + v[0], p3[1] - u[1] + v[1]],
+  ];
+}
+
+/** Where a piece's name may go: its tile's window less the overlap strips the next tiles cover. */
+function sceneNameWindow(placement: Placement): RectMm | undefined {
+  const t = placement.tile;
+  if (!t) return undefined;
+  const right = t.col + 1 < t.cols ? t.overlapMm : 0;
+  const below = t.row + 1 < t.rows ? t.overlapMm : 0;
+  return { ...t.windowMm, widthMm: t.windowMm.widthMm - right, heightMm: t.windowMm.heightMm - below };
+}
+
+/** A test that a text box lies inside a polygon (and the window): corners inside, no edge crossing it. */
+function sceneInside(region: readonly Vec2Mm[], window?: RectMm): (box: Vec2Mm[]) => boolean {
+  const edges = region.map((a, i) => {
+    const b = region[(i + 1) % region.length]!;
+    return { a, b, minX: Math.min(a[0], b[0]), maxX: Math.max(a[0], b[0]), minY: Math.min(a[1], b[1]), maxY: Math.max(a[1], b[1]) };
+  });
+  return (tight) => {
+    const box = sceneBoxPadded(tight, NAME_PADDING_MM);
+    if (!box.every((p) => inside(p, window) && labelPointInside(p, region))) return false;
+    const xs = box.map((p) => p[0]);
+    const ys = box.map((p) => p[1]);
+    const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+    // Only edges whose box meets the text's box can cross it.
+    return !edges.some((e) => e.maxX >= x0 && e.minX <= x1 && e.maxY >= y0 && e.minY <= y1 && labelBoxesOverlap(box, [e.a, e.b]));
+  };
 }
 
 function sceneTileGuides(scene: SheetScene, placement: Placement) {
@@ -267,24 +408,4 @@ function sceneLegend(scene: SheetScene, box: RectMm) {
     y += row;
     scene.texts.push(text(note, [box.xMm, y], 2.5, 'furniture', { anchor: 'start' }));
   }
-}
-
-/** Area centroid of a polygon (mm); a degenerate polygon gives the mean of its points. */
-function polygonCentroid(points: readonly Vec2Mm[]): Vec2Mm {
-  let a = 0,
-    cx = 0,
-    cy = 0;
-  for (let i = 0; i < points.length; i++) {
-    const [x1, y1] = points[i]!;
-    const [x2, y2] = points[(i + 1) % points.length]!;
-    const k = x1 * y2 - x2 * y1;
-    a += k;
-    cx += (x1 + x2) * k;
-    cy += (y1 + y2) * k;
-  }
-  if (Math.abs(a) < 1e-12) {
-    const n = Math.max(points.length, 1);
-    return [points.reduce((s, p) => s + p[0], 0) / n, points.reduce((s, p) => s + p[1], 0) / n];
-  }
-  return [cx / (3 * a), cy / (3 * a)];
 }
