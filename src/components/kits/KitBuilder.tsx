@@ -147,6 +147,7 @@ function KitBuilderForm(props: KitBuilderProps) {
           max={limits.scaleDenominatorMax}
           error={err.scaleDenominator?.message}
           onChange={(n, now) => change('scaleDenominator', n, now)}
+          onCommit={() => valid && setSettled(valid)}
         />
         <div className="grid grid-cols-2 gap-3">
           <div>

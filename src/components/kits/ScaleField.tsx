@@ -7,10 +7,12 @@ interface Props {
   max: number;
   error?: string;
   onChange: (scaleDenominator: number, immediate: boolean) => void;
+  /** Enter in the 1:N field: build now instead of after the typing pause. */
+  onCommit: () => void;
 }
 
 /** The kit's scale: one button per usual ratio (the suggested one marked) and a field for any 1:N. */
-export default function ScaleField({ value, usualScales, suggested, max, error, onChange }: Props) {
+export default function ScaleField({ value, usualScales, suggested, max, error, onChange, onCommit }: Props) {
   const id = useId();
   return (
     <fieldset>
@@ -48,6 +50,11 @@ export default function ScaleField({ value, usualScales, suggested, max, error, 
           aria-invalid={error ? true : undefined}
           aria-describedby={error ? `${id}-err` : undefined}
           onChange={(e) => onChange(e.target.valueAsNumber, false)}
+          onKeyDown={(e) => {
+            if (e.key !== 'Enter') return;
+            e.preventDefault();
+            onCommit();
+          }}
         />
       </div>
       {error && (
