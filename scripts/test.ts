@@ -4,7 +4,7 @@
  * counts are added up; the last line printed is "N passed, N failed" (", N skipped" when any were), and the
  * exit status is non-zero on any failure.
  */
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { PROJECT_ROOT, TEST_DATABASE, databaseReset, databaseUrl } from './lib/postgres';
@@ -33,11 +33,15 @@ function step(name: string, command: string, args: string[], env: NodeJS.Process
   return ok;
 }
 
-function vitest(name: string, config: string, env: NodeJS.ProcessEnv): void {
+/**
+ * Runs vitest asynchronously: the SMTP fake lives in this process and must keep answering while the tests
+ * send and read mail.
+ */
+async function vitest(name: string, config: string, env: NodeJS.ProcessEnv): Promise<void> {
   console.log(`\n=== ${name} ===`);
   const out = join(reportDir, `${name.replace(/\W+/g, '-')}.json`);
   rmSync(out, { force: true });
-  const res = spawnSync(
+  const child = spawn(
     'npx',
     ['vitest', 'run', '--config', config, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`],
     {
@@ -46,8 +50,9 @@ function vitest(name: string, config: string, env: NodeJS.ProcessEnv): void {
       env,
     },
   );
+  const status = await new Promise<number | null>((resolve) => child.once('exit', (code) => resolve(code)));
   if (!existsSync(out)) {
-    console.log(`--- ${name}: no report (exit ${res.status}); counted as one failure`);
+    console.log(`--- ${name}: no report (exit ${status}); counted as one failure`);
     total.failed += 1;
     return;
   }
@@ -60,8 +65,7 @@ function vitest(name: string, config: string, env: NodeJS.ProcessEnv): void {
   };
   total.passed += report.numPassedTests;
   total.failed +=
-    report.numFailedTests +
-    (report.numFailedTests === 0 && res.status !== 0 ? Math.max(1, report.numFailedTestSuites) : 0);
+    report.numFailedTests + (report.numFailedTests === 0 && status !== 0 ? Math.max(1, report.numFailedTestSuites) : 0);
   total.skipped += report.numPendingTests + report.numTodoTests;
 }
 
@@ -101,8 +105,8 @@ async function main(): Promise<void> {
     KW_ADMIN_DATABASE_URL: databaseUrl('postgres'),
   };
   try {
-    vitest('unit, database and API tests', 'vitest.config.ts', testEnv);
-    vitest('browser tests', 'vitest.browser.config.ts', testEnv);
+    await vitest('unit, database and API tests', 'vitest.config.ts', testEnv);
+    await vitest('browser tests', 'vitest.browser.config.ts', testEnv);
   } finally {
     await server.stop();
     await mail.close();

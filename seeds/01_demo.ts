@@ -5,6 +5,13 @@
  */
 import type { Knex } from 'knex';
 import { passwordHash } from '../src/lib/auth/password';
+import { randomUUID } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { buildKit } from '../src/lib/kit/build-kit';
+import { ENGINE_VERSION } from '../src/lib/kit/engine-version';
+import { kitFonts } from '../src/lib/kit/fonts.server';
+import { KitInputsSchema, kitRequestOf } from '../src/lib/kit/kit-inputs';
+import { ModelContentSchema } from '../src/lib/geometry/model-schema';
 import { DEMO_ACCOUNTS } from './data/demo-accounts';
 
 const SCHOOLS = [
@@ -46,14 +53,14 @@ const CLASSES = [
     name: 'Engineering Club',
     grade_band: '6-8',
     student_count: 14,
-    join_code: 'JFCLUB42',
+    join_code: 'JFCXUB42',
   },
   {
     teacher: 'teacher@larkspur.example',
     name: 'Room 12 Explorers',
     grade_band: '3-5',
     student_count: 22,
-    join_code: 'LRK12RMZ',
+    join_code: 'RMKZ2RMP',
   },
   {
     teacher: 'teacher@bright-creek.example',
@@ -94,6 +101,64 @@ export async function seed(knex: Knex): Promise<void> {
     )
     .returning(['id', 'name', 'teacher_id']);
   const classBy = (name: string) => classes.find((c) => c.name === name)!;
+
+  await seedKits(knex, [
+    {
+      classId: classBy('Period 3 Science').id,
+      teacherId: classBy('Period 3 Science').teacher_id,
+      inputs: {
+        modelId: 'skein-probe',
+        activitySlug: 'shake-test',
+        scaleDenominator: 25,
+        sheetSizeId: 'letter',
+        paperGsm: 160,
+        copies: 1,
+        units: 'us',
+        venue: { kind: 'preset', id: 'classroom' },
+      },
+    },
+    {
+      classId: classBy('Engineering Club').id,
+      teacherId: classBy('Engineering Club').teacher_id,
+      inputs: {
+        modelId: 'skein-probe',
+        activitySlug: 'scale-it',
+        scaleDenominator: 50,
+        sheetSizeId: 'letter',
+        paperGsm: 160,
+        copies: 2,
+        units: 'us',
+        venue: { kind: 'preset', id: 'football-field' },
+      },
+    },
+    {
+      classId: classBy('Room 12 Explorers').id,
+      teacherId: classBy('Room 12 Explorers').teacher_id,
+      inputs: {
+        modelId: 'wren-3u',
+        scaleDenominator: 2,
+        sheetSizeId: 'letter',
+        paperGsm: 160,
+        copies: 1,
+        units: 'us',
+        venue: { kind: 'preset', id: 'classroom' },
+      },
+    },
+    {
+      classId: classBy('Physics 2').id,
+      teacherId: classBy('Physics 2').teacher_id,
+      inputs: {
+        modelId: 'thermal-puck',
+        activitySlug: 'thermal-cycling',
+        scaleDenominator: 5,
+        sheetSizeId: 'letter',
+        paperGsm: 160,
+        copies: 1,
+        units: 'us',
+        venue: { kind: 'preset', id: 'classroom' },
+      },
+    },
+  ]);
 
   const coordinator = userBy('coordinator@northfield-lab.example');
   const period3 = classBy('Period 3 Science');
@@ -178,4 +243,36 @@ export async function seed(knex: Knex): Promise<void> {
     { code: 'skein', title: 'Skein activity bookmark', target_url: '/activities', created_by: coordinator.id },
     { code: 'bigbuild', title: 'Big build poster', target_url: '/', created_by: coordinator.id },
   ]);
+}
+
+interface DemoKit {
+  classId: string;
+  teacherId: string;
+  inputs: Record<string, unknown>;
+}
+
+/** Saves demo kits the way the kit API does: validated inputs, a real build for the hash and sheet count. */
+async function seedKits(knex: Knex, kits: DemoKit[]): Promise<void> {
+  const fonts = await kitFonts();
+  const siteUrl = (process.env.SITE_URL ?? 'http://127.0.0.1:4321').replace(/\/+$/, '');
+  for (const kit of kits) {
+    const inputs = KitInputsSchema.parse(kit.inputs);
+    const file = new URL(`../content/models/${inputs.modelId}.json`, import.meta.url);
+    const content = ModelContentSchema.parse(JSON.parse(readFileSync(file, 'utf8')));
+    const id = randomUUID();
+    const qrUrl = `${siteUrl}/kits/${id}`;
+    const build = await buildKit(kitRequestOf(inputs, content.model, qrUrl), fonts, { outputs: ['svg'] });
+    await knex('kits').insert({
+      id,
+      class_id: kit.classId,
+      teacher_id: kit.teacherId,
+      title: content.title,
+      model_id: content.id,
+      activity_slug: inputs.activitySlug ?? null,
+      inputs: JSON.stringify({ ...inputs, qrUrl }),
+      engine_version: ENGINE_VERSION,
+      content_hash: build.contentHash,
+      sheet_count: build.layout.sheets.length,
+    });
+  }
 }

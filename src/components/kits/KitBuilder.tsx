@@ -86,7 +86,8 @@ function KitBuilderForm(props: KitBuilderProps) {
 
   const change = <K extends keyof KitForm>(name: K, value: KitForm[K], now = true) => {
     immediate.current = now;
-    setValue(name, value, { shouldValidate: true, shouldDirty: true });
+    // react-hook-form's path typing cannot follow a generic key into the discriminated venue union.
+    setValue(name, value as never, { shouldValidate: true, shouldDirty: true });
   };
   const model = models.find((m) => m.id === values.modelId);
   const activityList = activities.filter(

@@ -17,7 +17,13 @@ export function appendageFootMm(a: Appendage, face: BodyFace, scaleDenominator: 
 export function appendageDirection(orientation: { tiltDeg: number; azimuthDeg: number }, face: BodyFace): Vec3Mm {
   const t = (orientation.tiltDeg * Math.PI) / 180;
   const az = (orientation.azimuthDeg * Math.PI) / 180;
-  return vec3Unit(vec3Combine([Math.cos(t), face.normal], [Math.sin(t) * Math.cos(az), face.uAxis], [Math.sin(t) * Math.sin(az), face.vAxis]));
+  return vec3Unit(
+    vec3Combine(
+      [Math.cos(t), face.normal],
+      [Math.sin(t) * Math.cos(az), face.uAxis],
+      [Math.sin(t) * Math.sin(az), face.vAxis],
+    ),
+  );
 }
 
 /**

@@ -35,11 +35,20 @@ export interface BodyNet {
 }
 
 /** The body pattern at 1:scaleDenominator on paper of `gsm`; tab numbers come from `nextNumber`, in order. */
-export function bodyNet(body: Body, scaleDenominator: number, gsm: number, nextNumber: () => number, assemblyStep: number): BodyNet {
+export function bodyNet(
+  body: Body,
+  scaleDenominator: number,
+  gsm: number,
+  nextNumber: () => number,
+  assemblyStep: number,
+): BodyNet {
   const faces = bodyFaces(body, scaleDenominator);
   const n = faces.length - 2;
   const hinged = n <= BODY_HINGED_CAP_SIDES_MAX ? bodyNetHinged(faces, gsm, assemblyStep) : null;
-  const built = hinged && !hinged.crowded && bodyNetFitsOfficePaper(hinged.pieces[0]!) ? hinged : bodyNetRinged(faces, gsm, assemblyStep);
+  const built =
+    hinged && !hinged.crowded && bodyNetFitsOfficePaper(hinged.pieces[0]!)
+      ? hinged
+      : bodyNetRinged(faces, gsm, assemblyStep);
   // Tabs were numbered 1, 2, … locally; take kit-wide numbers in the same order.
   const global = new Map<number, number>();
   for (const p of built.pieces) for (const t of p.tabs) global.set(t.number, nextNumber());
@@ -70,7 +79,12 @@ function wallStrip(sides: BodyFace[]): { net: NetFace[]; starts: number[]; width
   const starts: number[] = [];
   widths.reduce((x, w) => (starts.push(x), x + w), 0);
   const net: NetFace[] = sides.map((f, i) => ({
-    flatMm: [[starts[i]!, 0], [starts[i]! + widths[i]!, 0], [starts[i]! + widths[i]!, heightMm], [starts[i]!, heightMm]],
+    flatMm: [
+      [starts[i]!, 0],
+      [starts[i]! + widths[i]!, 0],
+      [starts[i]! + widths[i]!, heightMm],
+      [starts[i]!, heightMm],
+    ],
     modelMm: f.polygonMm,
   }));
   return { net, starts, widths, heightMm };
@@ -102,19 +116,32 @@ function bodyNetHinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
     { parent: c, child: n + 1 },
   ];
   // Glued pairs: the strip's closing edge, then every wall's top and bottom edge except the hinge wall's.
-  const pairs: [NetEdge, NetEdge][] = [[{ face: n - 1, edge: 1 }, { face: 0, edge: 3 }]];
+  const pairs: [NetEdge, NetEdge][] = [
+    [
+      { face: n - 1, edge: 1 },
+      { face: 0, edge: 3 },
+    ],
+  ];
   for (let j = 0; j < n; j++) {
     if (j === c) continue;
-    pairs.push([{ face: j, edge: 2 }, { face: n, edge: j }]);
+    pairs.push([
+      { face: j, edge: 2 },
+      { face: n, edge: j },
+    ]);
     // The bottom cap lists the base vertices in reverse, so wall j's bottom edge is its edge n − 2 − j.
-    pairs.push([{ face: j, edge: 0 }, { face: n + 1, edge: (2 * n - 2 - j) % n }]);
+    pairs.push([
+      { face: j, edge: 0 },
+      { face: n + 1, edge: (2 * n - 2 - j) % n },
+    ]);
   }
   const obstacles: Vec2Mm[][] = net.map((f) => f.flatMm);
   const tabs: NetTab[] = [];
   const edgeLabels: EdgeLabel[] = [];
   let crowded = false;
   pairs.forEach(([first, second], k) => {
-    const edgeMm = vec2Length(vec2Sub(net[first.face]!.flatMm[(first.edge + 1) % 4]!, net[first.face]!.flatMm[first.edge]!));
+    const edgeMm = vec2Length(
+      vec2Sub(net[first.face]!.flatMm[(first.edge + 1) % 4]!, net[first.face]!.flatMm[first.edge]!),
+    );
     const want = paperTabDepthMm(gsm, edgeMm);
     const { tab, label } = netGluePair(net, first, second, k + 1, want, obstacles);
     if ((tab.depthMm ?? 0) < 0.999 * Math.min(want, TAB_DEPTH_MIN_MM)) crowded = true;
@@ -122,7 +149,17 @@ function bodyNetHinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
     edgeLabels.push(label);
     obstacles.push(tab.polygonMm);
   });
-  const piece = pieceFromNet({ id: 'body', partId: 'body', partKind: 'body', label: 'Body', assemblyStep, faces: net, joints, tabs, edgeLabels });
+  const piece = pieceFromNet({
+    id: 'body',
+    partId: 'body',
+    partKind: 'body',
+    label: 'Body',
+    assemblyStep,
+    faces: net,
+    joints,
+    tabs,
+    edgeLabels,
+  });
   return { pieces: [piece], spots: net.map((f) => ({ piece: 0, frame: faceFrame(f) })), crowded };
 }
 
@@ -139,9 +176,18 @@ function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
     }),
   }));
   const all = [...net, ...capNets];
-  const apothemMm = Math.min(...capNets[0]!.flatMm.map((p, i, poly) => lineDistance([0, 0], p, poly[(i + 1) % poly.length]!)));
+  const apothemMm = Math.min(
+    ...capNets[0]!.flatMm.map((p, i, poly) => lineDistance([0, 0], p, poly[(i + 1) % poly.length]!)),
+  );
   const rings = (['top', 'bottom'] as const).map((side, k) =>
-    bodyRingTeeth(net, side, paperTabDepthMm(gsm), apothemMm, k + 2, tabFoldAngle(all, { face: 0, edge: side === 'top' ? 2 : 0 }, { face: n + k, edge: 0 })),
+    bodyRingTeeth(
+      net,
+      side,
+      paperTabDepthMm(gsm),
+      apothemMm,
+      k + 2,
+      tabFoldAngle(all, { face: 0, edge: side === 'top' ? 2 : 0 }, { face: n + k, edge: 0 }),
+    ),
   );
   const obstacles: Vec2Mm[][] = [...net.map((f) => f.flatMm), ...rings.flatMap((r) => r.teethMm)];
   const seamWant = paperTabDepthMm(gsm, heightMm);
@@ -170,7 +216,10 @@ function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
       edgeLabels: [capRingLabel(cap.flatMm, k + 2, apothemMm)],
     }),
   );
-  const spots = [...net.map((f) => ({ piece: 0, frame: faceFrame(f) })), ...capNets.map((f, k) => ({ piece: 1 + k, frame: faceFrame(f) }))];
+  const spots = [
+    ...net.map((f) => ({ piece: 0, frame: faceFrame(f) })),
+    ...capNets.map((f, k) => ({ piece: 1 + k, frame: faceFrame(f) })),
+  ];
   return { pieces: [wall, ...caps], spots, crowded: false };
 }
 
@@ -181,7 +230,11 @@ function capRingLabel(poly: readonly Vec2Mm[], number: number, apothemMm: number
   // The cap is centred on its flat origin, so "inward" is toward (0, 0).
   const inset = Math.min(2 * 2.5, apothemMm / 3);
   const len = Math.hypot(mid[0], mid[1]) || 1;
-  return { number, atMm: [mid[0] - (mid[0] / len) * inset, mid[1] - (mid[1] / len) * inset], angleRad: Math.atan2(b[1] - a[1], b[0] - a[0]) };
+  return {
+    number,
+    atMm: [mid[0] - (mid[0] / len) * inset, mid[1] - (mid[1] / len) * inset],
+    angleRad: Math.atan2(b[1] - a[1], b[0] - a[0]),
+  };
 }
 
 function bodyNetFitsOfficePaper(piece: Piece): boolean {

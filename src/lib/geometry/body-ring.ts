@@ -26,22 +26,45 @@ export interface BodyRing {
  * The ring on `side` of the strip `walls` (their flat rectangles), teeth as deep as `depthWantedMm` allows
  * within the cap's `apothemMm`, numbered `number`, folding by foldAngleRad; no walls gives an empty ring.
  */
-export function bodyRingTeeth(walls: readonly NetFace[], side: 'top' | 'bottom', depthWantedMm: number, apothemMm: number, number: number, foldAngleRad: number): BodyRing {
+export function bodyRingTeeth(
+  walls: readonly NetFace[],
+  side: 'top' | 'bottom',
+  depthWantedMm: number,
+  apothemMm: number,
+  number: number,
+  foldAngleRad: number,
+): BodyRing {
   const n = walls.length;
   const xs = [...walls.map((w) => w.flatMm[0]![0]), walls[n - 1]!.flatMm[1]![0]];
   const y = side === 'top' ? walls[0]!.flatMm[2]![1] : 0;
   const out = side === 'top' ? 1 : -1;
   const lean = Math.PI / n + BODY_RING_CLEARANCE_RAD;
   const narrowest = Math.min(...xs.slice(1).map((x, i) => x - xs[i]!));
-  const depthMm = Math.min(depthWantedMm, BODY_RING_REACH_FRACTION * apothemMm, ((1 - BODY_RING_TIP_FRACTION) * narrowest) / (2 * Math.tan(lean)));
+  const depthMm = Math.min(
+    depthWantedMm,
+    BODY_RING_REACH_FRACTION * apothemMm,
+    ((1 - BODY_RING_TIP_FRACTION) * narrowest) / (2 * Math.tan(lean)),
+  );
   const inset = depthMm * Math.tan(lean);
   const teethMm: Vec2Mm[][] = [];
   for (let j = 0; j < n; j++) {
     const [l, r] = [xs[j]!, xs[j + 1]!];
     // Counter-clockwise: base along the wall edge (reversed from the wall's own direction), then the tip.
-    teethMm.push(side === 'top'
-      ? [[l, y], [r, y], [r - inset, y + depthMm], [l + inset, y + depthMm]]
-      : [[r, y], [l, y], [l + inset, y - depthMm], [r - inset, y - depthMm]]);
+    teethMm.push(
+      side === 'top'
+        ? [
+            [l, y],
+            [r, y],
+            [r - inset, y + depthMm],
+            [l + inset, y + depthMm],
+          ]
+        : [
+            [r, y],
+            [l, y],
+            [l + inset, y - depthMm],
+            [r - inset, y - depthMm],
+          ],
+    );
   }
   const polygonMm: Vec2Mm[] = [];
   if (side === 'top') {
@@ -58,7 +81,16 @@ export function bodyRingTeeth(walls: readonly NetFace[], side: 'top' | 'bottom',
     }
   }
   const m = Math.floor(n / 2);
-  const [from, to]: [Vec2Mm, Vec2Mm] = side === 'top' ? [[xs[n]!, y], [xs[0]!, y]] : [[xs[0]!, y], [xs[n]!, y]];
+  const [from, to]: [Vec2Mm, Vec2Mm] =
+    side === 'top'
+      ? [
+          [xs[n]!, y],
+          [xs[0]!, y],
+        ]
+      : [
+          [xs[0]!, y],
+          [xs[n]!, y],
+        ];
   return {
     tab: {
       number,

@@ -23,13 +23,27 @@ export const SMALLSAT_SIZES_M = {
 /** The base polygon (m, counter-clockwise seen from +z) and height (m) of a body. */
 export function bodyBaseM(body: Body): { base: [number, number][]; heightM: number } {
   if (body.kind === 'box') {
-    const [w, d, h] = body.smallsat ? SMALLSAT_SIZES_M[body.smallsat] : [body.widthM ?? 0, body.depthM ?? 0, body.heightM ?? 0];
-    return { base: [[w / 2, -d / 2], [w / 2, d / 2], [-w / 2, d / 2], [-w / 2, -d / 2]], heightM: h };
+    const [w, d, h] = body.smallsat
+      ? SMALLSAT_SIZES_M[body.smallsat]
+      : [body.widthM ?? 0, body.depthM ?? 0, body.heightM ?? 0];
+    return {
+      base: [
+        [w / 2, -d / 2],
+        [w / 2, d / 2],
+        [-w / 2, d / 2],
+        [-w / 2, -d / 2],
+      ],
+      heightM: h,
+    };
   }
   const n = body.kind === 'prism' ? body.sides : body.facets;
   // Across flats is twice the apothem R·cos(π/n); for odd n that is the flat-to-corner line's usual reading.
-  const circumradiusM = body.kind === 'cylinder' ? body.diameterM / 2
-    : body.across === 'corners' ? body.sizeM / 2 : body.sizeM / (2 * Math.cos(Math.PI / n));
+  const circumradiusM =
+    body.kind === 'cylinder'
+      ? body.diameterM / 2
+      : body.across === 'corners'
+        ? body.sizeM / 2
+        : body.sizeM / (2 * Math.cos(Math.PI / n));
   const base: [number, number][] = [];
   for (let i = 0; i < n; i++) {
     const a = ((2 * i - 1) * Math.PI) / n;
@@ -78,15 +92,34 @@ export function bodyFaces(body: Body, scaleDenominator: number): BodyFace[] {
     const v: Vec3Mm = [0, 0, 1];
     return {
       ref: `side:${i}`,
-      polygonMm: [[a[0], a[1], 0], [b[0], b[1], 0], [b[0], b[1], h], [a[0], a[1], h]],
+      polygonMm: [
+        [a[0], a[1], 0],
+        [b[0], b[1], 0],
+        [b[0], b[1], h],
+        [a[0], a[1], h],
+      ],
       centreMm: [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2, h / 2],
       uAxis: u,
       vAxis: v,
       normal: vec3Cross(u, v),
     };
   });
-  faces.push({ ref: 'top', polygonMm: pts.map(([x, y]) => [x, y, h]), centreMm: [0, 0, h], uAxis: [1, 0, 0], vAxis: [0, 1, 0], normal: [0, 0, 1] });
-  faces.push({ ref: 'bottom', polygonMm: [...pts].reverse().map(([x, y]) => [x, y, 0]), centreMm: [0, 0, 0], uAxis: [1, 0, 0], vAxis: [0, -1, 0], normal: [0, 0, -1] });
+  faces.push({
+    ref: 'top',
+    polygonMm: pts.map(([x, y]) => [x, y, h]),
+    centreMm: [0, 0, h],
+    uAxis: [1, 0, 0],
+    vAxis: [0, 1, 0],
+    normal: [0, 0, 1],
+  });
+  faces.push({
+    ref: 'bottom',
+    polygonMm: [...pts].reverse().map(([x, y]) => [x, y, 0]),
+    centreMm: [0, 0, 0],
+    uAxis: [1, 0, 0],
+    vAxis: [0, -1, 0],
+    normal: [0, 0, -1],
+  });
   return faces;
 }
 

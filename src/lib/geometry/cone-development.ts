@@ -10,8 +10,13 @@ import { curvedDevelopmentPoint, frameApply } from './hinge-tree';
 import { EDGE_LABEL_INSET_MM } from './net-glue';
 
 /** Sector of a cone (topRadiusMm = 0) or frustum; null when radii or height are not positive and ordered. */
-export function coneDevelopment(baseRadiusMm: number, topRadiusMm: number, heightMm: number): Extract<CurvedDevelopment, { kind: 'cone' | 'frustum' }> | null {
-  if (!(baseRadiusMm > topRadiusMm && topRadiusMm >= 0 && heightMm > 0) || !Number.isFinite(baseRadiusMm + heightMm)) return null;
+export function coneDevelopment(
+  baseRadiusMm: number,
+  topRadiusMm: number,
+  heightMm: number,
+): Extract<CurvedDevelopment, { kind: 'cone' | 'frustum' }> | null {
+  if (!(baseRadiusMm > topRadiusMm && topRadiusMm >= 0 && heightMm > 0) || !Number.isFinite(baseRadiusMm + heightMm))
+    return null;
   const slantMm = Math.hypot(baseRadiusMm - topRadiusMm, heightMm);
   const drop = baseRadiusMm - topRadiusMm;
   // Frustum radii s·R/(R − r) and s·r/(R − r); angle 2π·(R − r)/s, which for a cone is 2π·r/L.
@@ -68,9 +73,22 @@ export function conePiece(spec: ConePieceSpec): Piece {
     joints: [],
     // Depth as cut: across the seam at the narrow end of a frustum; a pointed cone's tab is a wedge that
     // vanishes at the apex, so its depth is taken at the rim, where the seam is pressed.
-    tabs: [{ number: spec.tabNumber, polygonMm: tab, labelAtMm: polar(mid, half + tabRad / 2), depthMm: (rIn > 0 ? rIn : rOut) * Math.sin(Math.min(tabRad, Math.PI / 2)) }],
+    tabs: [
+      {
+        number: spec.tabNumber,
+        polygonMm: tab,
+        labelAtMm: polar(mid, half + tabRad / 2),
+        depthMm: (rIn > 0 ? rIn : rOut) * Math.sin(Math.min(tabRad, Math.PI / 2)),
+      },
+    ],
     // The opposite straight edge (at −half) receives the tab; its label sits just inside it.
-    edgeLabels: [{ number: spec.tabNumber, atMm: polar(mid, -half + Math.min(EDGE_LABEL_INSET_MM / mid, half / 4)), angleRad: -half }],
+    edgeLabels: [
+      {
+        number: spec.tabNumber,
+        atMm: polar(mid, -half + Math.min(EDGE_LABEL_INSET_MM / mid, half / 4)),
+        angleRad: -half,
+      },
+    ],
     curved: d,
     rootFrame: spec.frame,
   });

@@ -23,7 +23,10 @@ export function hingeTreeFold(tree: HingeTree, fraction: number): FoldedFace[] {
   const f = Math.min(1, Math.max(0, Number.isFinite(fraction) ? fraction : 0));
   const frame = tree.rootFrame;
   if (tree.curved) {
-    return tree.faces.map((face) => ({ id: face.id, polygonMm: face.polygonMm.map((p) => frameApply(frame, curvedDevelopmentPoint(tree.curved!, p, f))) }));
+    return tree.faces.map((face) => ({
+      id: face.id,
+      polygonMm: face.polygonMm.map((p) => frameApply(frame, curvedDevelopmentPoint(tree.curved!, p, f))),
+    }));
   }
   const motions = new Map<number, Rigid>([[tree.root, IDENTITY]]);
   const children = new Map<number, typeof tree.joints>();
@@ -42,7 +45,10 @@ export function hingeTreeFold(tree: HingeTree, fraction: number): FoldedFace[] {
   for (const face of tree.faces) {
     const m = motions.get(face.id);
     if (!m) continue;
-    folded.push({ id: face.id, polygonMm: face.polygonMm.map(([x, y]) => frameApply(frame, rigidApply(m, [x, y, 0]))) });
+    folded.push({
+      id: face.id,
+      polygonMm: face.polygonMm.map(([x, y]) => frameApply(frame, rigidApply(m, [x, y, 0]))),
+    });
   }
   return folded;
 }
@@ -52,7 +58,11 @@ export function hingeTreeFold(tree: HingeTree, fraction: number): FoldedFace[] {
  * z = 0, the surface's axis along +z for cones, along +y for tubes). At 0 it is p itself; at 1 it lies on the
  * cone, frustum or tube. Cones keep the printed side inside (the dish face); tubes keep it outside.
  */
-export function curvedDevelopmentPoint(curved: CurvedDevelopment, p: Vec2Mm, fraction: number): [number, number, number] {
+export function curvedDevelopmentPoint(
+  curved: CurvedDevelopment,
+  p: Vec2Mm,
+  fraction: number,
+): [number, number, number] {
   if (curved.kind === 'tube') {
     const k = fraction / curved.radiusMm;
     if (k === 0) return [p[0], p[1], 0];
@@ -60,7 +70,8 @@ export function curvedDevelopmentPoint(curved: CurvedDevelopment, p: Vec2Mm, fra
   }
   // A sector of slant radius ρ rolls onto cones of the same slant whose sine of half-angle falls from 1
   // (flat) to r/L (the final cone), so every intermediate shape is itself developable.
-  const sinFinal = (curved.baseRadiusMm - curved.topRadiusMm) / Math.hypot(curved.baseRadiusMm - curved.topRadiusMm, curved.heightMm);
+  const sinFinal =
+    (curved.baseRadiusMm - curved.topRadiusMm) / Math.hypot(curved.baseRadiusMm - curved.topRadiusMm, curved.heightMm);
   const sinHalf = 1 - fraction * (1 - sinFinal);
   const cosHalf = Math.sqrt(Math.max(0, 1 - sinHalf * sinHalf));
   const rho = Math.hypot(p[0], p[1]);
@@ -83,8 +94,11 @@ export function frameApply(frame: PlaneFrame, [x, y, z]: readonly [number, numbe
 /** Rotation by angle about the flat line a→b (right-hand rule), as a rigid motion of local space. */
 function rotationAbout(a: Vec2Mm, b: Vec2Mm, angleRad: number): Rigid {
   const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-  const ux = (b[0] - a[0]) / len, uy = (b[1] - a[1]) / len;
-  const c = Math.cos(angleRad), s = Math.sin(angleRad), k = 1 - c;
+  const ux = (b[0] - a[0]) / len,
+    uy = (b[1] - a[1]) / len;
+  const c = Math.cos(angleRad),
+    s = Math.sin(angleRad),
+    k = 1 - c;
   // Rodrigues' rotation formula with axis (ux, uy, 0).
   const r = [c + ux * ux * k, ux * uy * k, uy * s, ux * uy * k, c + uy * uy * k, -ux * s, -uy * s, ux * s, c];
   const pa: [number, number, number] = [a[0], a[1], 0];
@@ -94,13 +108,19 @@ function rotationAbout(a: Vec2Mm, b: Vec2Mm, angleRad: number): Rigid {
 
 function rigidApply(m: Rigid, [x, y, z]: readonly [number, number, number]): [number, number, number] {
   const r = m.r;
-  return [r[0]! * x + r[1]! * y + r[2]! * z + m.t[0], r[3]! * x + r[4]! * y + r[5]! * z + m.t[1], r[6]! * x + r[7]! * y + r[8]! * z + m.t[2]];
+  return [
+    r[0]! * x + r[1]! * y + r[2]! * z + m.t[0],
+    r[3]! * x + r[4]! * y + r[5]! * z + m.t[1],
+    r[6]! * x + r[7]! * y + r[8]! * z + m.t[2],
+  ];
 }
 
 /** outer ∘ inner: apply inner first. */
 function compose(outer: Rigid, inner: Rigid): Rigid {
-  const a = outer.r, b = inner.r;
+  const a = outer.r,
+    b = inner.r;
   const r: number[] = [];
-  for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) r.push(a[i * 3]! * b[j]! + a[i * 3 + 1]! * b[3 + j]! + a[i * 3 + 2]! * b[6 + j]!);
+  for (let i = 0; i < 3; i++)
+    for (let j = 0; j < 3; j++) r.push(a[i * 3]! * b[j]! + a[i * 3 + 1]! * b[3 + j]! + a[i * 3 + 2]! * b[6 + j]!);
   return { r, t: rigidApply(outer, inner.t) };
 }

@@ -24,37 +24,69 @@ export function modelMesh(model: Model, scaleDenominator: number): ModelMesh {
   const loft = (bottom: Vec3Mm[], top: Vec3Mm[]) => meshLoft(positions, indices, bottom, top);
   const faces = bodyFaces(model.body, scaleDenominator);
   const sides = faces.slice(0, -2);
-  loft(sides.map((f) => f.polygonMm[0]!), sides.map((f) => f.polygonMm[3]!));
+  loft(
+    sides.map((f) => f.polygonMm[0]!),
+    sides.map((f) => f.polygonMm[3]!),
+  );
   for (const a of model.appendages) {
     const face = faces.find((f) => f.ref === a.face)!;
     const foot = appendageFootMm(a, face, scaleDenominator);
     if (a.kind === 'rigid-boom' || a.kind === 'dish' || a.kind === 'nozzle') {
       const axis = appendageDirection(a.orientation, face);
       const frame = frameAroundAxis(foot, axis, face);
-      const [r0, r1, len] = a.kind === 'rigid-boom' ? [a.diameterM / 2, a.diameterM / 2, a.lengthM]
-        : a.kind === 'dish' ? [(a.innerDiameterM ?? 0) / 2, a.diameterM / 2, a.depthM] : [a.throatDiameterM / 2, a.exitDiameterM / 2, a.lengthM];
+      const [r0, r1, len] =
+        a.kind === 'rigid-boom'
+          ? [a.diameterM / 2, a.diameterM / 2, a.lengthM]
+          : a.kind === 'dish'
+            ? [(a.innerDiameterM ?? 0) / 2, a.diameterM / 2, a.depthM]
+            : [a.throatDiameterM / 2, a.exitDiameterM / 2, a.lengthM];
       // Both rings share the segment count of the wider one so the loft's walls pair up.
       const n = ringSegments(Math.max(r0, r1) * k);
       const ring = (rMm: number, along: number): Vec3Mm[] => {
         if (rMm === 0) return [vec3Combine([1, foot], [along, axis])];
         return Array.from({ length: n }, (_, i) => {
           const t = (2 * Math.PI * i) / n;
-          return vec3Combine([1, foot], [along, axis], [rMm * Math.cos(t), frame.xAxis], [rMm * Math.sin(t), frame.yAxis]);
+          return vec3Combine(
+            [1, foot],
+            [along, axis],
+            [rMm * Math.cos(t), frame.xAxis],
+            [rMm * Math.sin(t), frame.yAxis],
+          );
         });
       };
       loft(ring(r0 * k, 0), ring(r1 * k, len * k));
     } else if (a.kind === 'solar-panel' || a.kind === 'deployable-panel') {
       const [w, h] = [a.widthM * k, a.heightM * k];
-      let frame = { originMm: vec3Combine([1, foot], [-w / 2, face.uAxis], [-h / 2, face.vAxis]), xAxis: face.uAxis, yAxis: face.vAxis };
+      let frame = {
+        originMm: vec3Combine([1, foot], [-w / 2, face.uAxis], [-h / 2, face.vAxis]),
+        xAxis: face.uAxis,
+        yAxis: face.vAxis,
+      };
       if (a.kind === 'deployable-panel') {
         const along = a.hingeEdge === 'top' || a.hingeEdge === 'bottom' ? a.position.uM * k : a.position.vM * k;
         const faceW = vec3Length(vec3Sub(face.polygonMm[1]!, face.polygonMm[0]!));
-        frame = deployablePanelFrame(face, a.hingeEdge, along, w, faceW, face.polygonMm[2]![2], (a.deployAngleDeg * Math.PI) / 180).frame;
+        frame = deployablePanelFrame(
+          face,
+          a.hingeEdge,
+          along,
+          w,
+          faceW,
+          face.polygonMm[2]![2],
+          (a.deployAngleDeg * Math.PI) / 180,
+        ).frame;
       }
       const n = vec3Cross(frame.xAxis, frame.yAxis);
-      const rect = [[0, 0], [w, 0], [w, h], [0, h]].map(([x, y]) => vec3Combine([1, frame.originMm], [x!, frame.xAxis], [y!, frame.yAxis]));
+      const rect = [
+        [0, 0],
+        [w, 0],
+        [w, h],
+        [0, h],
+      ].map(([x, y]) => vec3Combine([1, frame.originMm], [x!, frame.xAxis], [y!, frame.yAxis]));
       // A fixed panel sits on its face; a deployable one keeps its printed face and grows toward its back.
-      loft(rect.map((p) => vec3Combine([1, p], [-PANEL_MESH_THICKNESS_MM, n])), rect);
+      loft(
+        rect.map((p) => vec3Combine([1, p], [-PANEL_MESH_THICKNESS_MM, n])),
+        rect,
+      );
     }
   }
   return { positions: Float32Array.from(positions), indices: Uint32Array.from(indices) };

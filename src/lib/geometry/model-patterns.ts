@@ -20,9 +20,16 @@ export const SCALE_DENOMINATOR_MAX = 100_000;
 
 export const PatternOptionsSchema = z.object({
   /** The kit is 1:scaleDenominator of the real model. */
-  scaleDenominator: z.number().finite('the scale must be a finite number').min(1, 'the scale must be 1:1 or smaller (denominator at least 1)')
+  scaleDenominator: z
+    .number()
+    .finite('the scale must be a finite number')
+    .min(1, 'the scale must be 1:1 or smaller (denominator at least 1)')
     .max(SCALE_DENOMINATOR_MAX, `the scale denominator must be at most ${SCALE_DENOMINATOR_MAX}`),
-  paperGsm: z.number().finite().min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`).max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`),
+  paperGsm: z
+    .number()
+    .finite()
+    .min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`)
+    .max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`),
 });
 export type PatternOptions = z.infer<typeof PatternOptionsSchema>;
 
@@ -53,22 +60,47 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
     switch (a.kind) {
       case 'rigid-boom': {
         const frame = frameAlongAxis(foot, appendageDirection(a.orientation, face), face);
-        pieces.push(tubePiece({ ...base, diameterMm: a.diameterM * k, lengthMm: a.lengthM * k, frame, tabNumber: next(), overlapMm: paperOverlapMm(gsm) }));
+        pieces.push(
+          tubePiece({
+            ...base,
+            diameterMm: a.diameterM * k,
+            lengthMm: a.lengthM * k,
+            frame,
+            tabNumber: next(),
+            overlapMm: paperOverlapMm(gsm),
+          }),
+        );
         break;
       }
       case 'dish':
       case 'nozzle': {
-        const [R, r, h] = a.kind === 'dish' ? [a.diameterM / 2, (a.innerDiameterM ?? 0) / 2, a.depthM] : [a.exitDiameterM / 2, a.throatDiameterM / 2, a.lengthM];
+        const [R, r, h] =
+          a.kind === 'dish'
+            ? [a.diameterM / 2, (a.innerDiameterM ?? 0) / 2, a.depthM]
+            : [a.exitDiameterM / 2, a.throatDiameterM / 2, a.lengthM];
         const development = coneDevelopment(R * k, r * k, h * k)!;
         const axis = appendageDirection(a.orientation, face);
         // The narrow end sits on the face; a frustum's virtual apex lies h·r/(R − r) behind it.
         const apex = vec3Combine([1, foot], [(-h * k * r) / (R - r), axis]);
-        pieces.push(conePiece({ ...base, partKind: a.kind, development, frame: frameAroundAxis(apex, axis, face), tabNumber: next(), tabDepthMm: paperTabDepthMm(gsm) }));
+        pieces.push(
+          conePiece({
+            ...base,
+            partKind: a.kind,
+            development,
+            frame: frameAroundAxis(apex, axis, face),
+            tabNumber: next(),
+            tabDepthMm: paperTabDepthMm(gsm),
+          }),
+        );
         break;
       }
       case 'solar-panel': {
         const [w, h] = [a.widthM * k, a.heightM * k];
-        const frame = { originMm: vec3Combine([1, foot], [-w / 2, face.uAxis], [-h / 2, face.vAxis]), xAxis: face.uAxis, yAxis: face.vAxis };
+        const frame = {
+          originMm: vec3Combine([1, foot], [-w / 2, face.uAxis], [-h / 2, face.vAxis]),
+          xAxis: face.uAxis,
+          yAxis: face.vAxis,
+        };
         pieces.push(panelPiece({ ...base, widthMm: w, heightMm: h, frame }));
         break;
       }
@@ -77,16 +109,42 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
         const along = a.hingeEdge === 'top' || a.hingeEdge === 'bottom' ? a.position.uM * k : a.position.vM * k;
         const faceW = Math.hypot(...vec3Combine([1, face.polygonMm[1]!], [-1, face.polygonMm[0]!]));
         const faceH = face.polygonMm[2]![2];
-        const placed = deployablePanelFrame(face, a.hingeEdge, along, w, faceW, faceH, (a.deployAngleDeg * Math.PI) / 180);
+        const placed = deployablePanelFrame(
+          face,
+          a.hingeEdge,
+          along,
+          w,
+          faceW,
+          faceH,
+          (a.deployAngleDeg * Math.PI) / 180,
+        );
         const num = next();
-        pieces.push(panelPiece({ ...base, widthMm: w, heightMm: h, frame: placed.frame, hingeStrip: { number: num, depthMm: paperTabDepthMm(gsm, w), angleRad: placed.stripAngleRad } }));
+        pieces.push(
+          panelPiece({
+            ...base,
+            widthMm: w,
+            heightMm: h,
+            frame: placed.frame,
+            hingeStrip: { number: num, depthMm: paperTabDepthMm(gsm, w), angleRad: placed.stripAngleRad },
+          }),
+        );
         markFace(a.face, placed.hingeMidMm, num);
         break;
       }
       case 'wire-boom': {
         const num = next();
         const spot = wireAnchorPlacement(face, foot);
-        pieces.push(wireAnchorPiece({ ...base, id: `${a.id}-anchor`, label: `${a.label} anchor`, face, footMm: spot.centreMm, sideMm: spot.sideMm, tabNumber: num }));
+        pieces.push(
+          wireAnchorPiece({
+            ...base,
+            id: `${a.id}-anchor`,
+            label: `${a.label} anchor`,
+            face,
+            footMm: spot.centreMm,
+            sideMm: spot.sideMm,
+            tabNumber: num,
+          }),
+        );
         markFace(a.face, spot.centreMm, num);
         threads.push(wireBoomThread(a.id, a.label, a.lengthM, N));
         break;

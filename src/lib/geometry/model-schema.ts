@@ -27,13 +27,18 @@ const lengthM = (what: string) =>
     .max(MODEL_LENGTH_MAX_M, `${what} must be at most ${MODEL_LENGTH_MAX_M} m`);
 
 const degrees = (what: string, min: number, max: number) =>
-  z.number({ invalid_type_error: `${what} must be a number of degrees` }).finite(`${what} must be finite`)
-    .min(min, `${what} must be at least ${min}°`).max(max, `${what} must be at most ${max}°`);
+  z
+    .number({ invalid_type_error: `${what} must be a number of degrees` })
+    .finite(`${what} must be finite`)
+    .min(min, `${what} must be at least ${min}°`)
+    .max(max, `${what} must be at most ${max}°`);
 
 const PrismBodySchema = z.object({
   kind: z.literal('prism'),
   /** Number of side walls of the regular polygon. */
-  sides: z.number().int('sides must be a whole number')
+  sides: z
+    .number()
+    .int('sides must be a whole number')
     .min(PRISM_SIDES_MIN, `a prism needs at least ${PRISM_SIDES_MIN} sides`)
     .max(PRISM_SIDES_MAX, `a prism has at most ${PRISM_SIDES_MAX} sides; use a cylinder for more`),
   /** Whether sizeM is measured between opposite flats or opposite corners. */
@@ -45,7 +50,9 @@ const PrismBodySchema = z.object({
 const BoxBodySchema = z.object({
   kind: z.literal('box'),
   /** A small-satellite size instead of widthM/depthM/heightM. */
-  smallsat: z.enum(SMALLSAT_SIZES, { errorMap: () => ({ message: `smallsat must be one of ${SMALLSAT_SIZES.join(', ')}` }) }).optional(),
+  smallsat: z
+    .enum(SMALLSAT_SIZES, { errorMap: () => ({ message: `smallsat must be one of ${SMALLSAT_SIZES.join(', ')}` }) })
+    .optional(),
   widthM: lengthM('the box width (x)').optional(),
   depthM: lengthM('the box depth (y)').optional(),
   heightM: lengthM('the box height (z)').optional(),
@@ -56,21 +63,30 @@ const CylinderBodySchema = z.object({
   diameterM: lengthM('the cylinder diameter'),
   heightM: lengthM('the body height'),
   /** Flat wall facets standing in for the round wall (corners on the true circle). */
-  facets: z.number().int('facets must be a whole number')
+  facets: z
+    .number()
+    .int('facets must be a whole number')
     .min(CYLINDER_FACETS_MIN, `a cylinder needs at least ${CYLINDER_FACETS_MIN} facets`)
     .max(CYLINDER_FACETS_MAX, `a cylinder has at most ${CYLINDER_FACETS_MAX} facets`),
 });
 
-export const BodySchema = z.discriminatedUnion('kind', [PrismBodySchema, BoxBodySchema, CylinderBodySchema]).superRefine((b, ctx) => {
-  if (b.kind !== 'box') return;
-  const dims = [b.widthM, b.depthM, b.heightM].filter((d) => d !== undefined).length;
-  if ((b.smallsat !== undefined) === (dims > 0) || (b.smallsat === undefined && dims < 3)) {
-    ctx.addIssue({ code: 'custom', message: 'a box needs either a smallsat size (e.g. "3U") or all of widthM, depthM and heightM, not both' });
-  }
-});
+export const BodySchema = z
+  .discriminatedUnion('kind', [PrismBodySchema, BoxBodySchema, CylinderBodySchema])
+  .superRefine((b, ctx) => {
+    if (b.kind !== 'box') return;
+    const dims = [b.widthM, b.depthM, b.heightM].filter((d) => d !== undefined).length;
+    if ((b.smallsat !== undefined) === dims > 0 || (b.smallsat === undefined && dims < 3)) {
+      ctx.addIssue({
+        code: 'custom',
+        message: 'a box needs either a smallsat size (e.g. "3U") or all of widthM, depthM and heightM, not both',
+      });
+    }
+  });
 
 /** A body face: the top, the bottom, or side wall i (0-based, side 0 faces +x). */
-export const FaceRefSchema = z.string().regex(/^(top|bottom|side:\d{1,3})$/, 'face must be "top", "bottom" or "side:<number>"');
+export const FaceRefSchema = z
+  .string()
+  .regex(/^(top|bottom|side:\d{1,3})$/, 'face must be "top", "bottom" or "side:<number>"');
 
 const AppendageBase = {
   id: z.string().regex(/^[a-z0-9][a-z0-9-]{0,39}$/, 'id must be 1–40 lower-case letters, digits or dashes'),
@@ -80,58 +96,128 @@ const AppendageBase = {
   position: z.object({ uM: z.number().finite(), vM: z.number().finite() }).default({ uM: 0, vM: 0 }),
 };
 /** Direction away from the face: tilt from the outward normal, azimuth about it from the face's u axis. */
-const OrientationSchema = z.object({
-  tiltDeg: degrees('tilt', 0, APPENDAGE_TILT_MAX_DEG),
-  azimuthDeg: degrees('azimuth', -360, 360),
-}).default({ tiltDeg: 0, azimuthDeg: 0 });
+const OrientationSchema = z
+  .object({
+    tiltDeg: degrees('tilt', 0, APPENDAGE_TILT_MAX_DEG),
+    azimuthDeg: degrees('azimuth', -360, 360),
+  })
+  .default({ tiltDeg: 0, azimuthDeg: 0 });
 
 const AppendageSchema = z.discriminatedUnion('kind', [
-  z.object({ ...AppendageBase, kind: z.literal('rigid-boom'), orientation: OrientationSchema, lengthM: lengthM('the boom length'), diameterM: lengthM('the boom diameter') }),
-  z.object({ ...AppendageBase, kind: z.literal('wire-boom'), orientation: OrientationSchema, lengthM: lengthM('the wire boom length') }),
-  z.object({ ...AppendageBase, kind: z.literal('dish'), orientation: OrientationSchema, diameterM: lengthM('the dish diameter'), depthM: lengthM('the dish depth'),
-    innerDiameterM: lengthM('the dish inner diameter').optional() }),
-  z.object({ ...AppendageBase, kind: z.literal('nozzle'), orientation: OrientationSchema, throatDiameterM: lengthM('the nozzle throat diameter'),
-    exitDiameterM: lengthM('the nozzle exit diameter'), lengthM: lengthM('the nozzle length') }),
-  z.object({ ...AppendageBase, kind: z.literal('solar-panel'), widthM: lengthM('the panel width'), heightM: lengthM('the panel height') }),
-  z.object({ ...AppendageBase, kind: z.literal('deployable-panel'), widthM: lengthM('the panel width (along the hinge)'), heightM: lengthM('the panel height (away from the hinge)'),
+  z.object({
+    ...AppendageBase,
+    kind: z.literal('rigid-boom'),
+    orientation: OrientationSchema,
+    lengthM: lengthM('the boom length'),
+    diameterM: lengthM('the boom diameter'),
+  }),
+  z.object({
+    ...AppendageBase,
+    kind: z.literal('wire-boom'),
+    orientation: OrientationSchema,
+    lengthM: lengthM('the wire boom length'),
+  }),
+  z.object({
+    ...AppendageBase,
+    kind: z.literal('dish'),
+    orientation: OrientationSchema,
+    diameterM: lengthM('the dish diameter'),
+    depthM: lengthM('the dish depth'),
+    innerDiameterM: lengthM('the dish inner diameter').optional(),
+  }),
+  z.object({
+    ...AppendageBase,
+    kind: z.literal('nozzle'),
+    orientation: OrientationSchema,
+    throatDiameterM: lengthM('the nozzle throat diameter'),
+    exitDiameterM: lengthM('the nozzle exit diameter'),
+    lengthM: lengthM('the nozzle length'),
+  }),
+  z.object({
+    ...AppendageBase,
+    kind: z.literal('solar-panel'),
+    widthM: lengthM('the panel width'),
+    heightM: lengthM('the panel height'),
+  }),
+  z.object({
+    ...AppendageBase,
+    kind: z.literal('deployable-panel'),
+    widthM: lengthM('the panel width (along the hinge)'),
+    heightM: lengthM('the panel height (away from the hinge)'),
     hingeEdge: z.enum(['top', 'bottom', 'left', 'right']),
     /** 0 = folded flat against the face, 90 = standing straight out, 180 = in line with the face. */
-    deployAngleDeg: degrees('the deploy angle', 0, 180).default(90) }),
+    deployAngleDeg: degrees('the deploy angle', 0, 180).default(90),
+  }),
 ]);
 
-export const ModelSchema = z.object({
-  schemaVersion: z.literal(MODEL_SCHEMA_VERSION, { errorMap: () => ({ message: `schemaVersion must be ${MODEL_SCHEMA_VERSION}` }) }),
-  name: z.string().trim().min(1, 'name is missing').max(80, 'name must be at most 80 characters'),
-  body: BodySchema,
-  appendages: z.array(AppendageSchema).max(APPENDAGES_MAX, `a model has at most ${APPENDAGES_MAX} appendages`).default([]),
-}).superRefine((model, ctx) => {
-  const faces = bodyFaceSizesM(model.body);
-  const seen = new Set<string>();
-  model.appendages.forEach((a, i) => {
-    if (seen.has(a.id)) ctx.addIssue({ code: 'custom', path: ['appendages', i, 'id'], message: `id "${a.id}" is used twice` });
-    seen.add(a.id);
-    if (a.kind === 'dish' && a.innerDiameterM !== undefined && a.innerDiameterM >= a.diameterM) {
-      ctx.addIssue({ code: 'custom', path: ['appendages', i, 'innerDiameterM'], message: `the dish inner diameter (${a.innerDiameterM} m) must be smaller than its diameter (${a.diameterM} m)` });
-    }
-    if (a.kind === 'nozzle' && a.throatDiameterM >= a.exitDiameterM) {
-      ctx.addIssue({ code: 'custom', path: ['appendages', i, 'exitDiameterM'], message: `the nozzle exit (${a.exitDiameterM} m) must be wider than its throat (${a.throatDiameterM} m)` });
-    }
-    const face = faces.get(a.face);
-    if (!face) {
-      ctx.addIssue({ code: 'custom', path: ['appendages', i, 'face'], message: `face "${a.face}" does not exist: this body has top, bottom and side:0 to side:${faces.size - 3}` });
-      return;
-    }
-    if (a.kind === 'deployable-panel' && !a.face.startsWith('side:')) {
-      ctx.addIssue({ code: 'custom', path: ['appendages', i, 'face'], message: 'a deployable panel hinges on a side wall (side:<number>)' });
-    }
-    if (face.kind === 'side' && (Math.abs(a.position.uM) > face.widthM / 2 || Math.abs(a.position.vM) > face.heightM / 2)) {
-      ctx.addIssue({ code: 'custom', path: ['appendages', i, 'position'], message: `position must lie on ${a.face}, within ±${round(face.widthM / 2)} m along and ±${round(face.heightM / 2)} m up from its centre` });
-    }
-    if (face.kind === 'cap' && Math.hypot(a.position.uM, a.position.vM) > face.inRadiusM) {
-      ctx.addIssue({ code: 'custom', path: ['appendages', i, 'position'], message: `position must lie on ${a.face}, within ${round(face.inRadiusM)} m of its centre` });
-    }
+export const ModelSchema = z
+  .object({
+    schemaVersion: z.literal(MODEL_SCHEMA_VERSION, {
+      errorMap: () => ({ message: `schemaVersion must be ${MODEL_SCHEMA_VERSION}` }),
+    }),
+    name: z.string().trim().min(1, 'name is missing').max(80, 'name must be at most 80 characters'),
+    body: BodySchema,
+    appendages: z
+      .array(AppendageSchema)
+      .max(APPENDAGES_MAX, `a model has at most ${APPENDAGES_MAX} appendages`)
+      .default([]),
+  })
+  .superRefine((model, ctx) => {
+    const faces = bodyFaceSizesM(model.body);
+    const seen = new Set<string>();
+    model.appendages.forEach((a, i) => {
+      if (seen.has(a.id))
+        ctx.addIssue({ code: 'custom', path: ['appendages', i, 'id'], message: `id "${a.id}" is used twice` });
+      seen.add(a.id);
+      if (a.kind === 'dish' && a.innerDiameterM !== undefined && a.innerDiameterM >= a.diameterM) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['appendages', i, 'innerDiameterM'],
+          message: `the dish inner diameter (${a.innerDiameterM} m) must be smaller than its diameter (${a.diameterM} m)`,
+        });
+      }
+      if (a.kind === 'nozzle' && a.throatDiameterM >= a.exitDiameterM) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['appendages', i, 'exitDiameterM'],
+          message: `the nozzle exit (${a.exitDiameterM} m) must be wider than its throat (${a.throatDiameterM} m)`,
+        });
+      }
+      const face = faces.get(a.face);
+      if (!face) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['appendages', i, 'face'],
+          message: `face "${a.face}" does not exist: this body has top, bottom and side:0 to side:${faces.size - 3}`,
+        });
+        return;
+      }
+      if (a.kind === 'deployable-panel' && !a.face.startsWith('side:')) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['appendages', i, 'face'],
+          message: 'a deployable panel hinges on a side wall (side:<number>)',
+        });
+      }
+      if (
+        face.kind === 'side' &&
+        (Math.abs(a.position.uM) > face.widthM / 2 || Math.abs(a.position.vM) > face.heightM / 2)
+      ) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['appendages', i, 'position'],
+          message: `position must lie on ${a.face}, within ±${round(face.widthM / 2)} m along and ±${round(face.heightM / 2)} m up from its centre`,
+        });
+      }
+      if (face.kind === 'cap' && Math.hypot(a.position.uM, a.position.vM) > face.inRadiusM) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['appendages', i, 'position'],
+          message: `position must lie on ${a.face}, within ${round(face.inRadiusM)} m of its centre`,
+        });
+      }
+    });
   });
-});
 
 export type Model = z.infer<typeof ModelSchema>;
 export type ModelInput = z.input<typeof ModelSchema>;

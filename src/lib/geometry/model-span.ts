@@ -26,12 +26,16 @@ export function modelSpan(model: Model): ModelSpan {
       max[i] = Math.max(max[i]!, v);
     });
   };
-  for (let i = 0; i < mesh.positions.length; i += 3) add(mesh.positions[i]!, mesh.positions[i + 1]!, mesh.positions[i + 2]!);
+  for (let i = 0; i < mesh.positions.length; i += 3)
+    add(mesh.positions[i]!, mesh.positions[i + 1]!, mesh.positions[i + 2]!);
   const faces = bodyFaces(model.body, 1);
   for (const a of model.appendages) {
     if (a.kind !== 'wire-boom') continue;
     const face = faces.find((f) => f.ref === a.face)!;
-    const tip = vec3Combine([1, appendageFootMm(a, face, 1)], [a.lengthM * 1000, appendageDirection(a.orientation, face)]);
+    const tip = vec3Combine(
+      [1, appendageFootMm(a, face, 1)],
+      [a.lengthM * 1000, appendageDirection(a.orientation, face)],
+    );
     add(tip[0], tip[1], tip[2]);
   }
   const extentsMm = [0, 1, 2].map((i) => max[i]! - min[i]!) as [number, number, number];

@@ -5,7 +5,18 @@
 import type { EdgeLabel, Vec2Mm } from './types';
 import type { NetFace, NetTab } from './piece-builder';
 import { tabFit } from './tab-fit';
-import { polygonNormal3, vec2Add, vec2Length, vec2Scale, vec2Sub, vec2Unit, vec3Cross, vec3Dot, vec3Sub, vec3Unit } from './vec';
+import {
+  polygonNormal3,
+  vec2Add,
+  vec2Length,
+  vec2Scale,
+  vec2Sub,
+  vec2Unit,
+  vec3Cross,
+  vec3Dot,
+  vec3Sub,
+  vec3Unit,
+} from './vec';
 
 export interface NetEdge {
   face: number;
@@ -20,8 +31,18 @@ export const EDGE_LABEL_INSET_MM = 2.5;
  * A tab on whichever of the two edges leaves room for the deeper one (first edge on a tie), fitted clear of
  * `obstacles`, and the partner edge's label; the tab's fold angle lays it against the partner face.
  */
-export function netGluePair(faces: NetFace[], first: NetEdge, second: NetEdge, number: number, depthWantedMm: number, obstacles: Vec2Mm[][]): { tab: NetTab; label: EdgeLabel } {
-  const options = [[first, second], [second, first]] as const;
+export function netGluePair(
+  faces: NetFace[],
+  first: NetEdge,
+  second: NetEdge,
+  number: number,
+  depthWantedMm: number,
+  obstacles: Vec2Mm[][],
+): { tab: NetTab; label: EdgeLabel } {
+  const options = [
+    [first, second],
+    [second, first],
+  ] as const;
   let best: { tab: NetTab; label: EdgeLabel; depth: number } | null = null;
   for (const [on, partner] of options) {
     const [a, b] = edgeFlat(faces, on);
@@ -61,8 +82,10 @@ function edgeLabel(faces: NetFace[], e: NetEdge, number: number): EdgeLabel {
 
 /** The tab (right of a→b) folds about a→b by the dihedral that brings it onto the partner face, radians. */
 export function tabFoldAngle(faces: NetFace[], on: NetEdge, partner: NetEdge): number {
-  const f = faces[on.face]!, g = faces[partner.face]!;
+  const f = faces[on.face]!,
+    g = faces[partner.face]!;
   const axis = vec3Unit(vec3Sub(f.modelMm[(on.edge + 1) % f.modelMm.length]!, f.modelMm[on.edge]!));
-  const nf = polygonNormal3(f.modelMm), ng = polygonNormal3(g.modelMm);
+  const nf = polygonNormal3(f.modelMm),
+    ng = polygonNormal3(g.modelMm);
   return Math.atan2(vec3Dot(vec3Cross(nf, ng), axis), vec3Dot(nf, ng));
 }

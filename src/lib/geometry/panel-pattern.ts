@@ -24,7 +24,12 @@ export interface PanelPieceSpec {
 /** The panel piece: one face, with the hinge strip as a tab below its hinge edge when deployable. */
 export function panelPiece(spec: PanelPieceSpec): Piece {
   const [w, h] = [spec.widthMm, spec.heightMm];
-  const face: Vec2Mm[] = [[0, 0], [w, 0], [w, h], [0, h]];
+  const face: Vec2Mm[] = [
+    [0, 0],
+    [w, 0],
+    [w, h],
+    [0, h],
+  ];
   const strip = spec.hingeStrip;
   const inset = strip ? Math.min(strip.depthMm * 0.3, w / 4) : 0;
   return pieceFromNet({
@@ -35,13 +40,22 @@ export function panelPiece(spec: PanelPieceSpec): Piece {
     assemblyStep: spec.assemblyStep,
     faces: [{ flatMm: face, modelMm: face.map(([x, y]) => frameApply(spec.frame, [x, y, 0])) }],
     joints: [],
-    tabs: strip ? [{
-      number: strip.number,
-      polygonMm: [[w, 0], [0, 0], [inset, -strip.depthMm], [w - inset, -strip.depthMm]],
-      labelAtMm: [w / 2, -strip.depthMm / 2],
-      depthMm: strip.depthMm,
-      fold: { fromMm: [0, 0], toMm: [w, 0], angleRad: strip.angleRad },
-    }] : [],
+    tabs: strip
+      ? [
+          {
+            number: strip.number,
+            polygonMm: [
+              [w, 0],
+              [0, 0],
+              [inset, -strip.depthMm],
+              [w - inset, -strip.depthMm],
+            ],
+            labelAtMm: [w / 2, -strip.depthMm / 2],
+            depthMm: strip.depthMm,
+            fold: { fromMm: [0, 0], toMm: [w, 0], angleRad: strip.angleRad },
+          },
+        ]
+      : [],
     edgeLabels: [],
     rootFrame: spec.frame,
   });
@@ -52,7 +66,15 @@ export function panelPiece(spec: PanelPieceSpec): Piece {
  * along that edge, turned out by deployRad (0 stowed on the face, π in line with it), and the hinge strip's
  * fold angle (the strip lies on the face, printed side out).
  */
-export function deployablePanelFrame(face: BodyFace, edge: 'top' | 'bottom' | 'left' | 'right', alongMm: number, widthMm: number, faceWidthMm: number, faceHeightMm: number, deployRad: number): { frame: PlaneFrame; stripAngleRad: number; hingeMidMm: Vec3Mm } {
+export function deployablePanelFrame(
+  face: BodyFace,
+  edge: 'top' | 'bottom' | 'left' | 'right',
+  alongMm: number,
+  widthMm: number,
+  faceWidthMm: number,
+  faceHeightMm: number,
+  deployRad: number,
+): { frame: PlaneFrame; stripAngleRad: number; hingeMidMm: Vec3Mm } {
   const { uAxis: u, vAxis: v, normal: n, centreMm: c } = face;
   // Inward direction on the face from the hinge edge, and the hinge point at the edge's middle.
   const spec = {

@@ -36,7 +36,12 @@ export function paperOverlapMm(gsm: number): number {
 }
 
 /** Points along a circular arc (centre, radius mm, angles rad), both ends included, within CHORD_TOLERANCE_MM. */
-export function arcPoints(centre: readonly [number, number], radiusMm: number, fromRad: number, toRad: number): [number, number][] {
+export function arcPoints(
+  centre: readonly [number, number],
+  radiusMm: number,
+  fromRad: number,
+  toRad: number,
+): [number, number][] {
   const span = toRad - fromRad;
   // Sagitta of a chord subtending δ is R·(1 − cos(δ/2)); keep it under the tolerance.
   const maxStep = radiusMm > CHORD_TOLERANCE_MM ? 2 * Math.acos(1 - CHORD_TOLERANCE_MM / radiusMm) : Math.PI;

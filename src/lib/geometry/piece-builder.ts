@@ -4,8 +4,30 @@
  * Flat coordinates mm, y up, CCW; model space mm at kit scale. Each face's model polygon lists its vertices
  * in the same order as its flat polygon, so its Newell normal is the printed side.
  */
-import type { CurvedDevelopment, EdgeLabel, FoldLine, GlueTab, HingeJoint, PartKind, Piece, PlaneFrame, Vec2Mm, Vec3Mm } from './types';
-import { polygonArea, polygonNormal3, vec2Length, vec2Sub, vec2Unit, vec3Combine, vec3Cross, vec3Dot, vec3Sub, vec3Unit } from './vec';
+import type {
+  CurvedDevelopment,
+  EdgeLabel,
+  FoldLine,
+  GlueTab,
+  HingeJoint,
+  PartKind,
+  Piece,
+  PlaneFrame,
+  Vec2Mm,
+  Vec3Mm,
+} from './types';
+import {
+  polygonArea,
+  polygonNormal3,
+  vec2Length,
+  vec2Sub,
+  vec2Unit,
+  vec3Combine,
+  vec3Cross,
+  vec3Dot,
+  vec3Sub,
+  vec3Unit,
+} from './vec';
 
 export interface NetFace {
   flatMm: Vec2Mm[];
@@ -39,9 +61,21 @@ const key = (p: Vec2Mm): string => `${Math.round(p[0] * KEY_SCALE)},${Math.round
 /** Builds the Piece; throws Error (a programming fault, not user input) if a joint's faces share no edge. */
 export function pieceFromNet(spec: NetPieceSpec): Piece {
   const joints: HingeJoint[] = spec.joints.map(({ parent, child }) => netJoint(spec.faces, parent, child));
-  const folds: FoldLine[] = joints.map((j) => ({ fromMm: j.axisMm[0], toMm: j.axisMm[1], kind: j.angleRad >= 0 ? 'mountain' : 'valley', angleRad: j.angleRad }));
+  const folds: FoldLine[] = joints.map((j) => ({
+    fromMm: j.axisMm[0],
+    toMm: j.axisMm[1],
+    kind: j.angleRad >= 0 ? 'mountain' : 'valley',
+    angleRad: j.angleRad,
+  }));
   for (const t of spec.tabs) {
-    if (t.fold) folds.push({ fromMm: t.fold.fromMm, toMm: t.fold.toMm, kind: t.fold.angleRad >= 0 ? 'mountain' : 'valley', angleRad: t.fold.angleRad, tabNumber: t.number });
+    if (t.fold)
+      folds.push({
+        fromMm: t.fold.fromMm,
+        toMm: t.fold.toMm,
+        kind: t.fold.angleRad >= 0 ? 'mountain' : 'valley',
+        angleRad: t.fold.angleRad,
+        tabNumber: t.number,
+      });
   }
   const faces = spec.faces.map((f, id) => ({ id, polygonMm: f.flatMm }));
   return {
@@ -51,7 +85,12 @@ export function pieceFromNet(spec: NetPieceSpec): Piece {
     label: spec.label,
     outlineMm: outlineOf([...faces.map((f) => f.polygonMm), ...spec.tabs.map((t) => t.polygonMm)]),
     folds,
-    tabs: spec.tabs.map(({ number, polygonMm, labelAtMm, depthMm }) => ({ number, polygonMm, labelAtMm, ...(depthMm === undefined ? {} : { depthMm }) })),
+    tabs: spec.tabs.map(({ number, polygonMm, labelAtMm, depthMm }) => ({
+      number,
+      polygonMm,
+      labelAtMm,
+      ...(depthMm === undefined ? {} : { depthMm }),
+    })),
     edgeLabels: spec.edgeLabels,
     hinge: {
       root: 0,
@@ -66,14 +105,17 @@ export function pieceFromNet(spec: NetPieceSpec): Piece {
 }
 
 function netJoint(faces: NetFace[], parent: number, child: number): HingeJoint {
-  const p = faces[parent]!, c = faces[child]!;
+  const p = faces[parent]!,
+    c = faces[child]!;
   const parentEdges = new Set(p.flatMm.map((v, i) => `${key(v)}>${key(p.flatMm[(i + 1) % p.flatMm.length]!)}`));
   for (let i = 0; i < c.flatMm.length; i++) {
-    const a = c.flatMm[i]!, b = c.flatMm[(i + 1) % c.flatMm.length]!;
+    const a = c.flatMm[i]!,
+      b = c.flatMm[(i + 1) % c.flatMm.length]!;
     if (!parentEdges.has(`${key(b)}>${key(a)}`)) continue;
     // The child lies left of a→b (CCW), so right of b→a: with that axis a positive angle folds it backward.
     const axis3 = vec3Unit(vec3Sub(c.modelMm[i]!, c.modelMm[(i + 1) % c.modelMm.length]!));
-    const np = polygonNormal3(p.modelMm), nc = polygonNormal3(c.modelMm);
+    const np = polygonNormal3(p.modelMm),
+      nc = polygonNormal3(c.modelMm);
     const angleRad = Math.atan2(vec3Dot(vec3Cross(np, nc), axis3), vec3Dot(np, nc));
     return { parent, child, axisMm: [b, a], angleRad };
   }
@@ -101,9 +143,11 @@ export function outlineOf(polygons: readonly Vec2Mm[][]): Vec2Mm[] {
   const edges = new Map<string, { from: Vec2Mm; to: Vec2Mm; fromKey: string; toKey: string }>();
   for (const poly of polygons) {
     for (let i = 0; i < poly.length; i++) {
-      const from = poly[i]!, to = poly[(i + 1) % poly.length]!;
+      const from = poly[i]!,
+        to = poly[(i + 1) % poly.length]!;
       if (vec2Length(vec2Sub(to, from)) === 0) continue;
-      const fromKey = key(from), toKey = key(to);
+      const fromKey = key(from),
+        toKey = key(to);
       const reverse = `${toKey}>${fromKey}`;
       if (edges.has(reverse)) edges.delete(reverse);
       else edges.set(`${fromKey}>${toKey}`, { from, to, fromKey, toKey });

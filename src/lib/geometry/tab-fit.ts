@@ -11,8 +11,15 @@ import { pointsBounds, vec2Add, vec2Cross, vec2Length, vec2Scale, vec2Sub, vec2U
  * steep where a neighbouring face leaves only a narrow wedge (a cap beside its hinge wall), then both.
  */
 const STEEP_DEG = [60, 76, 82, 86, 88, 89.5];
-const TAPER_PAIRS_RAD = [[30, 30], [45, 45], ...STEEP_DEG.flatMap((d) => [[30, d], [d, 30]]), ...STEEP_DEG.map((d) => [d, d])]
-  .map(([a, b]) => [(a! * Math.PI) / 180, (b! * Math.PI) / 180] as const);
+const TAPER_PAIRS_RAD = [
+  [30, 30],
+  [45, 45],
+  ...STEEP_DEG.flatMap((d) => [
+    [30, d],
+    [d, 30],
+  ]),
+  ...STEEP_DEG.map((d) => [d, d]),
+].map(([a, b]) => [(a! * Math.PI) / 180, (b! * Math.PI) / 180] as const);
 /** The clearance probe's sides lean out by this much more (radians, at most half the side's own angle). */
 const PROBE_WIDEN_RAD = (3 * Math.PI) / 180;
 const BISECTION_STEPS = 16;
@@ -33,7 +40,10 @@ export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: r
   for (const taper of TAPER_PAIRS_RAD) {
     const depthCap = Math.min(depthWantedMm, (0.98 * edgeMm) / (Math.tan(taper[0]) + Math.tan(taper[1])));
     if (depthCap <= best.depthMm) continue;
-    const probe = taper.map((t) => t - Math.min(PROBE_WIDEN_RAD, (Math.PI / 2 - t) / 2)) as unknown as readonly [number, number];
+    const probe = taper.map((t) => t - Math.min(PROBE_WIDEN_RAD, (Math.PI / 2 - t) / 2)) as unknown as readonly [
+      number,
+      number,
+    ];
     const fits = (d: number) => !near.some((o) => convexOverlap(tabPolygon(a, b, d, probe, true), o));
     let depth = depthCap;
     if (!fits(depth)) {
@@ -53,7 +63,13 @@ export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: r
 }
 
 /** The trapezoid [b, a, a', b'] outside edge a→b; the probe form lifts its base corners off the edge. */
-function tabPolygon(a: Vec2Mm, b: Vec2Mm, depthMm: number, taperRad: readonly [number, number], probe: boolean): Vec2Mm[] {
+function tabPolygon(
+  a: Vec2Mm,
+  b: Vec2Mm,
+  depthMm: number,
+  taperRad: readonly [number, number],
+  probe: boolean,
+): Vec2Mm[] {
   const dir = vec2Unit(vec2Sub(b, a));
   const out: Vec2Mm = [dir[1], -dir[0]];
   const a2 = vec2Add(vec2Add(a, vec2Scale(out, depthMm)), vec2Scale(dir, depthMm * Math.tan(Math.max(0, taperRad[0]))));
@@ -68,14 +84,20 @@ function tabPolygon(a: Vec2Mm, b: Vec2Mm, depthMm: number, taperRad: readonly [n
 function boundsNear(poly: readonly Vec2Mm[], a: Vec2Mm, b: Vec2Mm, reachMm: number): boolean {
   const o = pointsBounds(poly);
   const e = pointsBounds([a, b]);
-  return !(o.minX > e.maxX + reachMm || o.maxX < e.minX - reachMm || o.minY > e.maxY + reachMm || o.maxY < e.minY - reachMm);
+  return !(
+    o.minX > e.maxX + reachMm ||
+    o.maxX < e.minX - reachMm ||
+    o.minY > e.maxY + reachMm ||
+    o.maxY < e.minY - reachMm
+  );
 }
 
 /** Whether two convex CCW polygons share interior points: a vertex inside the other, or crossing edges. */
 export function convexOverlap(p: readonly Vec2Mm[], q: readonly Vec2Mm[]): boolean {
   if (p.some((v) => insideConvex(v, q)) || q.some((v) => insideConvex(v, p))) return true;
   for (let i = 0; i < p.length; i++) {
-    const p1 = p[i]!, p2 = p[(i + 1) % p.length]!;
+    const p1 = p[i]!,
+      p2 = p[(i + 1) % p.length]!;
     for (let j = 0; j < q.length; j++) {
       if (segmentsCross(p1, p2, q[j]!, q[(j + 1) % q.length]!)) return true;
     }
@@ -86,7 +108,8 @@ export function convexOverlap(p: readonly Vec2Mm[], q: readonly Vec2Mm[]): boole
 function insideConvex(v: Vec2Mm, poly: readonly Vec2Mm[]): boolean {
   const eps = 1e-9;
   for (let i = 0; i < poly.length; i++) {
-    const a = poly[i]!, b = poly[(i + 1) % poly.length]!;
+    const a = poly[i]!,
+      b = poly[(i + 1) % poly.length]!;
     const len = vec2Length(vec2Sub(b, a));
     if (len === 0) continue;
     if (vec2Cross(vec2Sub(b, a), vec2Sub(v, a)) / len <= eps * Math.max(1, len)) return false;

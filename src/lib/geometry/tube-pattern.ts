@@ -43,8 +43,22 @@ export function tubePiece(spec: TubePieceSpec): Piece {
     assemblyStep: spec.assemblyStep,
     faces: [{ flatMm: face, modelMm: face.map((p) => frameApply(frame, curvedDevelopmentPoint(curved, p, 1))) }],
     joints: [],
-    tabs: [{ number: spec.tabNumber, polygonMm: [[c, L], [c, 0], [c + w, 0], [c + w, L]], labelAtMm: [c + w / 2, L / 2], depthMm: w }],
-    edgeLabels: [{ number: spec.tabNumber, atMm: [Math.min(EDGE_LABEL_INSET_MM, c / 4), L / 2], angleRad: Math.PI / 2 }],
+    tabs: [
+      {
+        number: spec.tabNumber,
+        polygonMm: [
+          [c, L],
+          [c, 0],
+          [c + w, 0],
+          [c + w, L],
+        ],
+        labelAtMm: [c + w / 2, L / 2],
+        depthMm: w,
+      },
+    ],
+    edgeLabels: [
+      { number: spec.tabNumber, atMm: [Math.min(EDGE_LABEL_INSET_MM, c / 4), L / 2], angleRad: Math.PI / 2 },
+    ],
     curved,
     rootFrame: frame,
   });

@@ -38,7 +38,9 @@ export function vec3Unit(a: Vec3Mm): Vec3Mm {
 
 /** Sum of k_i · v_i, for building points from frames. */
 export function vec3Combine(...terms: [number, Vec3Mm][]): Vec3Mm {
-  let x = 0, y = 0, z = 0;
+  let x = 0,
+    y = 0,
+    z = 0;
   for (const [k, v] of terms) {
     x += k * v[0];
     y += k * v[1];
@@ -60,7 +62,9 @@ export function polygonArea(points: readonly Vec2Mm[]): number {
 
 /** Newell's normal of a 3D polygon (unit; zero for a degenerate polygon). */
 export function polygonNormal3(points: readonly Vec3Mm[]): Vec3Mm {
-  let x = 0, y = 0, z = 0;
+  let x = 0,
+    y = 0,
+    z = 0;
   for (let i = 0; i < points.length; i++) {
     const a = points[i]!;
     const b = points[(i + 1) % points.length]!;
@@ -74,7 +78,10 @@ export function polygonNormal3(points: readonly Vec3Mm[]): Vec3Mm {
 /** Axis-aligned bounds of flat points, mm; empty input gives a zero box at the origin. */
 export function pointsBounds(points: readonly Vec2Mm[]): { minX: number; minY: number; maxX: number; maxY: number } {
   if (points.length === 0) return { minX: 0, minY: 0, maxX: 0, maxY: 0 };
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const [x, y] of points) {
     if (x < minX) minX = x;
     if (y < minY) minY = y;

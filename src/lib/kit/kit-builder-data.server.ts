@@ -9,7 +9,7 @@ import { SHEET_SIZES } from '../layout/sheet-sizes';
 import { VENUES } from '../layout/venues';
 import { AppError } from '../errors';
 import { demoModelById, demoModels } from './demo-models.server';
-import { KIT_SETTINGS_LIMITS } from './kit-inputs';
+import { KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
 import type { KitForm } from './kit-settings';
 import type { KitBuilderProps } from '../../components/kits/builder-props';
@@ -41,13 +41,13 @@ export async function kitBuilderProps(
     initialError = err.message;
     return null;
   });
-  const initial: KitForm = {
+  const initial = {
     ...base,
     venue: { ...base.venue },
     scaleDenominator: solve?.suggestedScaleDenominator ?? 20,
     copies: 1,
     ...(activity ? { activitySlug: activity.slug } : {}),
-  };
+  } satisfies KitForm & KitInputs;
   const preview = await kitPreview(initial, `${siteUrl.replace(/\/+$/, '')}/kits/new`).catch((err: unknown) => {
     if (!(err instanceof AppError)) throw err;
     initialError = err.message;

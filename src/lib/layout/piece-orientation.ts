@@ -113,7 +113,13 @@ export function pieceOrientationForTilesRad(
       (close && aligned && !best.aligned) ||
       (close && aligned === best.aligned && across && !best.across);
     if (better)
-      best = { tiles, aligned, across, area, angle: aligned ? Math.round(angle / (Math.PI / 2)) * (Math.PI / 2) : angle };
+      best = {
+        tiles,
+        aligned,
+        across,
+        area,
+        angle: aligned ? Math.round(angle / (Math.PI / 2)) * (Math.PI / 2) : angle,
+      };
   }
   return normaliseAngle(best.angle) === 0 ? 0 : normaliseAngle(best.angle);
 }

@@ -78,7 +78,9 @@ function tabReachMm(polygonMm: readonly (readonly [number, number])[]): number {
   const [b, a] = [polygonMm[0], polygonMm[1]];
   if (!a || !b) return 0;
   const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-  return Math.max(...polygonMm.map((p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len));
+  return Math.max(
+    ...polygonMm.map((p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len),
+  );
 }
 
 /** The paper scale for a parsed model; throws InputError for a requested scale that makes parts too small. */

@@ -22,12 +22,25 @@ export const LABEL_BOX_HEIGHT_EM = 1.1;
  * The four corners of a text box: `atMm` is the middle of its left end (anchor start) or its centre (anchor
  * middle), the baseline turned clockwise by angleRad on the sheet.
  */
-export function labelBox(atMm: Vec2Mm, angleRad: number, widthMm: number, heightMm: number, anchor: 'start' | 'middle'): Vec2Mm[] {
+export function labelBox(
+  atMm: Vec2Mm,
+  angleRad: number,
+  widthMm: number,
+  heightMm: number,
+  anchor: 'start' | 'middle',
+): Vec2Mm[] {
   const c = Math.cos(angleRad);
   const s = Math.sin(angleRad);
   const [x0, x1] = anchor === 'middle' ? [-widthMm / 2, widthMm / 2] : [0, widthMm];
   const h = heightMm / 2;
-  return ([[x0, -h], [x1, -h], [x1, h], [x0, h]] as const).map(([x, y]) => [atMm[0] + c * x - s * y, atMm[1] + s * x + c * y]);
+  return (
+    [
+      [x0, -h],
+      [x1, -h],
+      [x1, h],
+      [x0, h],
+    ] as const
+  ).map(([x, y]) => [atMm[0] + c * x - s * y, atMm[1] + s * x + c * y]);
 }
 
 /** Whether two convex polygons (corner lists) overlap by more than `slackMm` along every axis. */
@@ -80,7 +93,8 @@ export function labelEdgeClearanceMm(p: Vec2Mm, poly: readonly Vec2Mm[]): number
 export function labelCandidatePoints(poly: readonly Vec2Mm[], count = 24): Vec2Mm[] {
   if (poly.length < 3) return [];
   let [minX, minY, maxX, maxY] = [Infinity, Infinity, -Infinity, -Infinity];
-  for (const [x, y] of poly) [minX, minY, maxX, maxY] = [Math.min(minX, x), Math.min(minY, y), Math.max(maxX, x), Math.max(maxY, y)];
+  for (const [x, y] of poly)
+    [minX, minY, maxX, maxY] = [Math.min(minX, x), Math.min(minY, y), Math.max(maxX, x), Math.max(maxY, y)];
   const scored: { p: Vec2Mm; d: number }[] = [];
   const grid = (x0: number, y0: number, w: number, h: number, steps: number) => {
     for (let i = 0; i <= steps; i++) {
@@ -98,5 +112,8 @@ export function labelCandidatePoints(poly: readonly Vec2Mm[], count = 24): Vec2M
     const h = (maxY - minY) / (5 * (k + 1));
     grid(best.p[0] - w / 2, best.p[1] - h / 2, w, h, 8);
   }
-  return scored.sort((a, b) => b.d - a.d).slice(0, count).map((s) => s.p);
+  return scored
+    .sort((a, b) => b.d - a.d)
+    .slice(0, count)
+    .map((s) => s.p);
 }

@@ -65,12 +65,19 @@ const FOOTER_SIZE_MM = 2.8;
  * The scene of one sheet of a kit; pieces missing from `kit.pieces` are skipped. Label texts are placed so
  * their boxes (measured by `measure`, the renderer's font metrics or the stated estimate) do not overlap.
  */
-export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure = labelWidthEstimateMm): SheetScene {
+export function sheetScene(
+  kit: KitLayout,
+  sheet: LaidOutSheet,
+  measure: LabelMeasure = labelWidthEstimateMm,
+): SheetScene {
   const scene: SheetScene = { texts: [], strokes: [], fills: [] };
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
   const labels = new SceneLabels(scene, measure);
   // Numbers have fixed homes (their edge or tab); piece names can move, so they are placed last.
-  for (const m of sheet.alignmentMarks) labels.reserve(text(m.letter, [m.atMm[0] + 3.6, m.atMm[1] - 3], NUMBER_SIZE_MM, 'labels', { bold: true, anchor: 'start' }));
+  for (const m of sheet.alignmentMarks)
+    labels.reserve(
+      text(m.letter, [m.atMm[0] + 3.6, m.atMm[1] - 3], NUMBER_SIZE_MM, 'labels', { bold: true, anchor: 'start' }),
+    );
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);
     if (piece) scenePieceNumbers(labels, piece, placement);
@@ -136,7 +143,13 @@ class SceneLabels {
   ) {}
 
   box(t: SceneText): Vec2Mm[] {
-    return labelBox(t.atMm, t.angleRad, this.measure(t.text, t.sizeMm, t.bold), t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor);
+    return labelBox(
+      t.atMm,
+      t.angleRad,
+      this.measure(t.text, t.sizeMm, t.bold),
+      t.sizeMm * LABEL_BOX_HEIGHT_EM,
+      t.anchor,
+    );
   }
 
   free(box: readonly Vec2Mm[]): boolean {
@@ -183,7 +196,11 @@ function scenePieceNumbers(labels: SceneLabels, piece: Piece, placement: Placeme
   };
   for (const tab of piece.tabs) place(String(tab.number), placementApply(placement, tab.labelAtMm), 0);
   for (const label of piece.edgeLabels)
-    place(String(label.number), placementApply(placement, label.atMm), upright(placementApplyAngle(placement, label.angleRad)));
+    place(
+      String(label.number),
+      placementApply(placement, label.atMm),
+      upright(placementApplyAngle(placement, label.angleRad)),
+    );
 }
 
 /** Piece names tried, mm: large first; below the last the name is left off. */
@@ -210,7 +227,10 @@ function scenePieceName(labels: SceneLabels, piece: Piece, placement: Placement)
   // Last resort for pieces whose faces are all narrow (a many-sided wall strip): across folds, never on tabs.
   const union = outlineOf(piece.hinge.faces.map((f) => [...f.polygonMm]));
   const regions = [...faces, union.map((p) => placementApply(placement, p))];
-  const spots = regions.map((r) => ({ within: sceneInside(r, window), points: labelCandidatePoints(r).filter((p) => inside(p, window)) }));
+  const spots = regions.map((r) => ({
+    within: sceneInside(r, window),
+    points: labelCandidatePoints(r).filter((p) => inside(p, window)),
+  }));
   // Down to 1.8 mm the full name comes first at every size, then the shorter forms; below that the largest
   // size that fits wins, whichever form it takes. Upright text first, then reading up the sheet for tall,
   // narrow pieces.
@@ -260,7 +280,14 @@ function sceneNameWindow(placement: Placement): RectMm | undefined {
 function sceneInside(region: readonly Vec2Mm[], window?: RectMm): (box: Vec2Mm[]) => boolean {
   const edges = region.map((a, i) => {
     const b = region[(i + 1) % region.length]!;
-    return { a, b, minX: Math.min(a[0], b[0]), maxX: Math.max(a[0], b[0]), minY: Math.min(a[1], b[1]), maxY: Math.max(a[1], b[1]) };
+    return {
+      a,
+      b,
+      minX: Math.min(a[0], b[0]),
+      maxX: Math.max(a[0], b[0]),
+      minY: Math.min(a[1], b[1]),
+      maxY: Math.max(a[1], b[1]),
+    };
   });
   return (tight) => {
     const box = sceneBoxPadded(tight, NAME_PADDING_MM);
@@ -269,7 +296,9 @@ function sceneInside(region: readonly Vec2Mm[], window?: RectMm): (box: Vec2Mm[]
     const ys = box.map((p) => p[1]);
     const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
     // Only edges whose box meets the text's box can cross it.
-    return !edges.some((e) => e.maxX >= x0 && e.minX <= x1 && e.maxY >= y0 && e.minY <= y1 && labelBoxesOverlap(box, [e.a, e.b]));
+    return !edges.some(
+      (e) => e.maxX >= x0 && e.minX <= x1 && e.maxY >= y0 && e.minY <= y1 && labelBoxesOverlap(box, [e.a, e.b]),
+    );
   };
 }
 

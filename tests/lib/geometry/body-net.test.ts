@@ -5,19 +5,25 @@ import { hingeTreeFold } from '../../../src/lib/geometry/hinge-tree';
 import type { Piece } from '../../../src/lib/geometry/types';
 import { DEMO_IDS, demoModel, model, sub, dot, cross } from './fixtures';
 
-const prism = (sides: number, sizeM: number, heightM: number) => model({ body: { kind: 'prism', sides, across: 'corners', sizeM, heightM } });
-const bodyOf = (m: ReturnType<typeof model>, n = 10, gsm = 160) => modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.find((p) => p.partKind === 'body')!;
-const bodyPieces = (m: ReturnType<typeof model>, n = 10, gsm = 160) => modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.filter((p) => p.partKind === 'body');
+const prism = (sides: number, sizeM: number, heightM: number) =>
+  model({ body: { kind: 'prism', sides, across: 'corners', sizeM, heightM } });
+const bodyOf = (m: ReturnType<typeof model>, n = 10, gsm = 160) =>
+  modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.find((p) => p.partKind === 'body')!;
+const bodyPieces = (m: ReturnType<typeof model>, n = 10, gsm = 160) =>
+  modelPatterns(m, { scaleDenominator: n, paperGsm: gsm }).pieces.filter((p) => p.partKind === 'body');
 const clip = (poly: readonly (readonly [number, number])[]) => [[...poly.map((p) => [p[0], p[1]] as [number, number])]];
-const areaOf = (mp: ReturnType<typeof polygonClipping.union>) => mp.reduce((s, poly) => s + poly.reduce((t, ring, i) => t + (i === 0 ? 1 : -1) * Math.abs(ringArea(ring)), 0), 0);
-const ringArea = (r: [number, number][]) => r.reduce((s, p, i) => s + p[0] * r[(i + 1) % r.length]![1] - r[(i + 1) % r.length]![0] * p[1], 0) / 2;
+const areaOf = (mp: ReturnType<typeof polygonClipping.union>) =>
+  mp.reduce((s, poly) => s + poly.reduce((t, ring, i) => t + (i === 0 ? 1 : -1) * Math.abs(ringArea(ring)), 0), 0);
+const ringArea = (r: [number, number][]) =>
+  r.reduce((s, p, i) => s + p[0] * r[(i + 1) % r.length]![1] - r[(i + 1) % r.length]![0] * p[1], 0) / 2;
 
 describe('bodyNet (through modelPatterns)', () => {
   test.each([3, 4, 6, 7, 12, 24])('keeps the surface area of a %i-sided prism', (n) => {
     const R = 1; // across corners 2 m → circumradius 1 m → 100 mm at 1:10
     const pieces = bodyPieces(prism(n, 2 * R, 0.5));
     // CRC Standard Mathematical Tables: regular n-gon area (n/2)·R²·sin(2π/n), side 2R·sin(π/n).
-    const Rmm = 100, H = 50;
+    const Rmm = 100,
+      H = 50;
     const expected = 2 * (n / 2) * Rmm ** 2 * Math.sin((2 * Math.PI) / n) + n * 2 * Rmm * Math.sin(Math.PI / n) * H;
     expect(pieces.reduce((s, p) => s + p.faceAreaMm2, 0)).toBeCloseTo(expected, 6);
   });
@@ -51,7 +57,9 @@ describe('bodyNet (through modelPatterns)', () => {
       const [wall, top] = bodyPieces(m, 5);
       const ring = wall!.tabs.find((t) => t.labelAtMm[1] > 0 && t.polygonMm.length > 4)!;
       const H = wall!.hinge.faces[0]!.polygonMm[2]![1];
-      const cap = top!.hinge.faces[0]!.polygonMm.map((p) => [Math.round(p[0] * 1e6) / 1e6, Math.round(p[1] * 1e6) / 1e6] as [number, number]);
+      const cap = top!.hinge.faces[0]!.polygonMm.map(
+        (p) => [Math.round(p[0] * 1e6) / 1e6, Math.round(p[1] * 1e6) / 1e6] as [number, number],
+      );
       // Each tooth folds about its own wall's top edge onto the cap plane: along the edge it keeps x − x_j,
       // away from it it goes toward the cap centre (cap flat = model x, y about the axis).
       const teeth = wall!.hinge.faces.map((f, j) => {
@@ -64,12 +72,25 @@ describe('bodyNet (through modelPatterns)', () => {
         const base = [[x0, H], [x1, H], ...pts.sort((p, q) => q[0] - p[0])] as [number, number][];
         // Snapped to 1 nm: polygon-clipping fails on corners shared to within rounding (about 1e-13 mm apart).
         const snap = (v: number) => Math.round(v * 1e6) / 1e6;
-        return base.map(([x, y]) => [snap(a[0] + (x - x0) * u[0]! + (y - H) * inward[0]!), snap(a[1] + (x - x0) * u[1]! + (y - H) * inward[1]!)] as [number, number]);
+        return base.map(
+          ([x, y]) =>
+            [
+              snap(a[0] + (x - x0) * u[0]! + (y - H) * inward[0]!),
+              snap(a[1] + (x - x0) * u[1]! + (y - H) * inward[1]!),
+            ] as [number, number],
+        );
       });
       for (let j = 0; j < facets; j++) {
-        const tooth = teeth[j]!, next = teeth[(j + 1) % facets]!;
-        expect(areaOf(polygonClipping.intersection(clip(tooth), clip(next))), `${facets}: teeth ${j}, ${j + 1}`).toBeLessThan(1e-9 * Math.abs(ringArea(tooth)) + 1e-9);
-        expect(areaOf(polygonClipping.intersection(clip(tooth), clip(cap))), `${facets}: tooth ${j} inside the cap`).toBeCloseTo(Math.abs(ringArea(tooth)), 6);
+        const tooth = teeth[j]!,
+          next = teeth[(j + 1) % facets]!;
+        expect(
+          areaOf(polygonClipping.intersection(clip(tooth), clip(next))),
+          `${facets}: teeth ${j}, ${j + 1}`,
+        ).toBeLessThan(1e-9 * Math.abs(ringArea(tooth)) + 1e-9);
+        expect(
+          areaOf(polygonClipping.intersection(clip(tooth), clip(cap))),
+          `${facets}: tooth ${j} inside the cap`,
+        ).toBeCloseTo(Math.abs(ringArea(tooth)), 6);
       }
     }
   });
@@ -79,9 +100,14 @@ describe('bodyNet (through modelPatterns)', () => {
       for (const piece of modelPatterns(demoModel(id), { scaleDenominator: 20, paperGsm: 120 }).pieces) {
         const folded = new Map(hingeTreeFold(piece.hinge, 0.5).map((f) => [f.id, f.polygonMm]));
         piece.hinge.joints.forEach((j, i) => {
-          const p = folded.get(j.parent)!, c = folded.get(j.child)!;
+          const p = folded.get(j.parent)!,
+            c = folded.get(j.child)!;
           const normal = cross(sub(p[1]!, p[0]!), sub(p[2]!, p[0]!));
-          const centroid = c.reduce((s, v) => [s[0] + v[0] / c.length, s[1] + v[1] / c.length, s[2] + v[2] / c.length] as [number, number, number], [0, 0, 0] as [number, number, number]);
+          const centroid = c.reduce(
+            (s, v) =>
+              [s[0] + v[0] / c.length, s[1] + v[1] / c.length, s[2] + v[2] / c.length] as [number, number, number],
+            [0, 0, 0] as [number, number, number],
+          );
           const side = dot(sub(centroid, p[0]!), normal);
           // Mountain: seen from the printed side the child drops away behind the paper.
           expect(piece.folds[i]!.kind, `${piece.id} joint ${i}`).toBe(side < 0 ? 'mountain' : 'valley');
@@ -114,7 +140,9 @@ describe('bodyNet (through modelPatterns)', () => {
   test('keeps tabs clear of faces and of each other (checked with polygon-clipping)', () => {
     for (const m of [prism(6, 2, 0.5), prism(24, 2, 0.5), demoModel('thermal-puck'), demoModel('wren-3u')]) {
       const piece: Piece = bodyOf(m, 5);
-      const polys = [...piece.hinge.faces.map((f) => f.polygonMm), ...piece.tabs.map((t) => t.polygonMm)].filter((p) => p.length >= 3);
+      const polys = [...piece.hinge.faces.map((f) => f.polygonMm), ...piece.tabs.map((t) => t.polygonMm)].filter(
+        (p) => p.length >= 3,
+      );
       for (let i = 0; i < polys.length; i++) {
         for (let j = i + 1; j < polys.length; j++) {
           const overlap = areaOf(polygonClipping.intersection(clip(polys[i]!), clip(polys[j]!)));
@@ -123,19 +151,25 @@ describe('bodyNet (through modelPatterns)', () => {
       }
       // The outline is the union of faces and tabs (reference library's union against ours).
       const union = areaOf(polygonClipping.union(clip(polys[0]!), ...polys.slice(1).map(clip)));
-      expect(Math.abs(ringArea(piece.outlineMm.map((p) => [p[0], p[1]]))) ).toBeCloseTo(union, 4);
+      expect(Math.abs(ringArea(piece.outlineMm.map((p) => [p[0], p[1]])))).toBeCloseTo(union, 4);
     }
   });
 
   test('gives every glued pair a real tab, even beside a many-sided cap', () => {
     for (const facets of [6, 24, 64, 256]) {
       const piece = bodyOf(model({ body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.15, facets } }), 5);
-      for (const t of piece.tabs) expect(Math.abs(ringArea(t.polygonMm.map((p) => [p[0], p[1]]))), `${facets} facets, tab ${t.number}`).toBeGreaterThan(0);
+      for (const t of piece.tabs)
+        expect(
+          Math.abs(ringArea(t.polygonMm.map((p) => [p[0], p[1]]))),
+          `${facets} facets, tab ${t.number}`,
+        ).toBeGreaterThan(0);
     }
   });
 
   test("folds a deployable panel's hinge strip as a valley when the panel stands straight out", () => {
-    const panel = modelPatterns(demoModel('wren-3u'), { scaleDenominator: 5, paperGsm: 160 }).pieces.find((p) => p.partKind === 'deployable-panel')!;
+    const panel = modelPatterns(demoModel('wren-3u'), { scaleDenominator: 5, paperGsm: 160 }).pieces.find(
+      (p) => p.partKind === 'deployable-panel',
+    )!;
     const strip = panel.folds.find((f) => f.tabNumber !== undefined)!;
     expect(strip.kind).toBe('valley');
     expect(strip.angleRad).toBeCloseTo(-Math.PI / 2, 12);
@@ -150,8 +184,10 @@ describe('bodyNet (through modelPatterns)', () => {
   });
 
   test('widens tabs on heavier paper', () => {
-    const light = bodyOf(prism(6, 2, 0.5), 5, 80), heavy = bodyOf(prism(6, 2, 0.5), 5, 300);
-    const depth = (p: Piece) => Math.max(...p.tabs[0]!.polygonMm.map((v) => Math.abs(v[0] - p.tabs[0]!.polygonMm[0]![0])));
+    const light = bodyOf(prism(6, 2, 0.5), 5, 80),
+      heavy = bodyOf(prism(6, 2, 0.5), 5, 300);
+    const depth = (p: Piece) =>
+      Math.max(...p.tabs[0]!.polygonMm.map((v) => Math.abs(v[0] - p.tabs[0]!.polygonMm[0]![0])));
     expect(depth(heavy)).toBeGreaterThan(depth(light));
   });
 });

@@ -24,7 +24,12 @@ describe('coneDevelopment', () => {
   });
 
   test('makes each sector arc as long as the circle it rolls into (2πr)', () => {
-    for (const [R, r, h] of [[30, 0, 40], [40, 20, 21], [100, 1, 3], [5, 4.9, 200]] as const) {
+    for (const [R, r, h] of [
+      [30, 0, 40],
+      [40, 20, 21],
+      [100, 1, 3],
+      [5, 4.9, 200],
+    ] as const) {
       const d = coneDevelopment(R, r, h)!;
       expect(d.outerRadiusMm * d.sectorAngleRad).toBeCloseTo(2 * Math.PI * R, 9);
       expect(d.innerRadiusMm * d.sectorAngleRad).toBeCloseTo(2 * Math.PI * r, 9);
@@ -39,14 +44,28 @@ describe('coneDevelopment', () => {
   });
 });
 
-const dishModel = (innerDiameterM?: number) => model({
-  body: { kind: 'box', widthM: 1, depthM: 1, heightM: 1 },
-  appendages: [{ kind: 'dish', id: 'dish', label: 'Dish', face: 'side:1', orientation: { tiltDeg: 20, azimuthDeg: 40 }, diameterM: 0.6, depthM: 0.15, ...(innerDiameterM ? { innerDiameterM } : {}) }],
-});
+const dishModel = (innerDiameterM?: number) =>
+  model({
+    body: { kind: 'box', widthM: 1, depthM: 1, heightM: 1 },
+    appendages: [
+      {
+        kind: 'dish',
+        id: 'dish',
+        label: 'Dish',
+        face: 'side:1',
+        orientation: { tiltDeg: 20, azimuthDeg: 40 },
+        diameterM: 0.6,
+        depthM: 0.15,
+        ...(innerDiameterM ? { innerDiameterM } : {}),
+      },
+    ],
+  });
 
 describe('conePiece (through modelPatterns)', () => {
   test.each([[undefined], [0.2]])('has the lateral area of its cone or frustum (inner diameter %s)', (inner) => {
-    const piece = modelPatterns(dishModel(inner), { scaleDenominator: 10, paperGsm: 160 }).pieces.find((p) => p.id === 'dish')!;
+    const piece = modelPatterns(dishModel(inner), { scaleDenominator: 10, paperGsm: 160 }).pieces.find(
+      (p) => p.id === 'dish',
+    )!;
     const [R, r, h] = [30, (inner ?? 0) * 50, 15];
     // CRC Standard Mathematical Tables: frustum lateral area π(R + r)·s (r = 0 for a cone).
     const s = Math.hypot(R - r, h);
@@ -58,13 +77,22 @@ describe('conePiece (through modelPatterns)', () => {
   });
 
   test.each([[undefined], [0.2]])('rolls every outline vertex onto the cone surface (inner diameter %s)', (inner) => {
-    const piece = modelPatterns(dishModel(inner), { scaleDenominator: 10, paperGsm: 160 }).pieces.find((p) => p.id === 'dish')!;
+    const piece = modelPatterns(dishModel(inner), { scaleDenominator: 10, paperGsm: 160 }).pieces.find(
+      (p) => p.id === 'dish',
+    )!;
     const [face] = hingeTreeFold(piece.hinge, 1);
-    const R = 30, r = (inner ?? 0) * 50, h = 15;
+    const R = 30,
+      r = (inner ?? 0) * 50,
+      h = 15;
     // Independent geometry: the axis leaves the face of side 1 (+y) tilted 20° toward azimuth 40°.
-    const t = (20 * Math.PI) / 180, az = (40 * Math.PI) / 180;
-    const n = [0, 1, 0] as const, u = [-1, 0, 0] as const, v = [0, 0, 1] as const;
-    const axis = [0, 1, 2].map((i) => Math.cos(t) * n[i]! + Math.sin(t) * (Math.cos(az) * u[i]! + Math.sin(az) * v[i]!)) as [number, number, number];
+    const t = (20 * Math.PI) / 180,
+      az = (40 * Math.PI) / 180;
+    const n = [0, 1, 0] as const,
+      u = [-1, 0, 0] as const,
+      v = [0, 0, 1] as const;
+    const axis = [0, 1, 2].map(
+      (i) => Math.cos(t) * n[i]! + Math.sin(t) * (Math.cos(az) * u[i]! + Math.sin(az) * v[i]!),
+    ) as [number, number, number];
     const foot = [0, 50, 50] as const;
     const tol = 1e-6 * 60;
     for (const p of face!.polygonMm) {

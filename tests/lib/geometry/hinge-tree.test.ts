@@ -13,10 +13,16 @@ describe('hingeTreeFold', () => {
     const all = flat.flatMap((f) => f.polygonMm);
     const flatAll = body.hinge.faces.flatMap((f) => f.polygonMm);
     for (let i = 1; i < all.length; i += 7) {
-      expect(norm(sub(all[i]!, all[0]!))).toBeCloseTo(Math.hypot(flatAll[i]![0] - flatAll[0]![0], flatAll[i]![1] - flatAll[0]![1]), 9);
+      expect(norm(sub(all[i]!, all[0]!))).toBeCloseTo(
+        Math.hypot(flatAll[i]![0] - flatAll[0]![0], flatAll[i]![1] - flatAll[0]![1]),
+        9,
+      );
     }
     const n = cross(sub(all[1]!, all[0]!), sub(all[3]!, all[0]!));
-    for (const p of all) expect(Math.abs((p[0] - all[0]![0]) * n[0] + (p[1] - all[0]![1]) * n[1] + (p[2] - all[0]![2]) * n[2]) / norm(n)).toBeLessThan(1e-9);
+    for (const p of all)
+      expect(
+        Math.abs((p[0] - all[0]![0]) * n[0] + (p[1] - all[0]![1]) * n[1] + (p[2] - all[0]![2]) * n[2]) / norm(n),
+      ).toBeLessThan(1e-9);
   });
 
   test.each(DEMO_IDS)('folds every flat piece of %s back onto the assembled model', (id) => {
@@ -24,10 +30,12 @@ describe('hingeTreeFold', () => {
     const mesh = modelMesh(m, N);
     const tris: [number, number, number][][] = [];
     for (let i = 0; i < mesh.indices.length; i += 3) {
-      tris.push([0, 1, 2].map((k) => {
-        const j = mesh.indices[i + k]! * 3;
-        return [mesh.positions[j]!, mesh.positions[j + 1]!, mesh.positions[j + 2]!] as [number, number, number];
-      }));
+      tris.push(
+        [0, 1, 2].map((k) => {
+          const j = mesh.indices[i + k]! * 3;
+          return [mesh.positions[j]!, mesh.positions[j + 1]!, mesh.positions[j + 2]!] as [number, number, number];
+        }),
+      );
     }
     const { pieces } = modelPatterns(m, { scaleDenominator: N, paperGsm: 160 });
     let sizeMm = 0;
@@ -44,7 +52,9 @@ describe('hingeTreeFold', () => {
   });
 
   test('rolls a tube onto a circle of its radius about its axis', () => {
-    const boom = modelPatterns(demoModel('skein-probe'), { scaleDenominator: N, paperGsm: 160 }).pieces.find((p) => p.id === 'axial-top')!;
+    const boom = modelPatterns(demoModel('skein-probe'), { scaleDenominator: N, paperGsm: 160 }).pieces.find(
+      (p) => p.id === 'axial-top',
+    )!;
     const [face] = hingeTreeFold(boom.hinge, 1);
     // The axial boom stands on the top centre along +z: radius 0.05 m → 2.5 mm at 1:20; top at 45 mm.
     for (const p of face!.polygonMm) {
@@ -58,7 +68,8 @@ describe('hingeTreeFold', () => {
     const tube = { kind: 'tube' as const, radiusMm: 3, lengthMm: 10 };
     for (const f of [0.25, 0.5, 1]) {
       // Arc length of the rolled edge from x = 0 to x = 1 stays 1: sample two close points.
-      const a = curvedDevelopmentPoint(tube, [0.5, 0], f), b = curvedDevelopmentPoint(tube, [0.5001, 0], f);
+      const a = curvedDevelopmentPoint(tube, [0.5, 0], f),
+        b = curvedDevelopmentPoint(tube, [0.5001, 0], f);
       expect(norm(sub(b, a))).toBeCloseTo(0.0001, 9);
     }
   });

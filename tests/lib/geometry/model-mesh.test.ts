@@ -5,10 +5,12 @@ import { DEMO_IDS, demoModel, model } from './fixtures';
 /** Connected components of a mesh as lists of triangle indices. */
 function components(indices: Uint32Array): number[][] {
   const parent = new Map<number, number>();
-  const find = (x: number): number => (parent.get(x) ?? x) === x ? x : find(parent.get(x)!);
+  const find = (x: number): number => ((parent.get(x) ?? x) === x ? x : find(parent.get(x)!));
   for (let i = 0; i < indices.length; i += 3) {
     const [a, b, c] = [find(indices[i]!), find(indices[i + 1]!), find(indices[i + 2]!)];
-    parent.set(b, a); parent.set(c, a); if (!parent.has(a)) parent.set(a, a);
+    parent.set(b, a);
+    parent.set(c, a);
+    if (!parent.has(a)) parent.set(a, a);
   }
   const groups = new Map<number, number[]>();
   for (let t = 0; t < indices.length / 3; t++) {
@@ -19,11 +21,19 @@ function components(indices: Uint32Array): number[][] {
 }
 
 /** Signed volume by the divergence theorem (sum of tetrahedra to the origin). */
-function volume(pos: Float32Array, idx: Uint32Array, tris: number[] = Array.from({ length: idx.length / 3 }, (_, i) => i)): number {
+function volume(
+  pos: Float32Array,
+  idx: Uint32Array,
+  tris: number[] = Array.from({ length: idx.length / 3 }, (_, i) => i),
+): number {
   let v = 0;
   for (const t of tris) {
     const [a, b, c] = [0, 1, 2].map((k) => idx[t * 3 + k]! * 3);
-    v += (pos[a!]! * (pos[b! + 1]! * pos[c! + 2]! - pos[b! + 2]! * pos[c! + 1]!) - pos[a! + 1]! * (pos[b!]! * pos[c! + 2]! - pos[b! + 2]! * pos[c!]!) + pos[a! + 2]! * (pos[b!]! * pos[c! + 1]! - pos[b! + 1]! * pos[c!]!)) / 6;
+    v +=
+      (pos[a!]! * (pos[b! + 1]! * pos[c! + 2]! - pos[b! + 2]! * pos[c! + 1]!) -
+        pos[a! + 1]! * (pos[b!]! * pos[c! + 2]! - pos[b! + 2]! * pos[c!]!) +
+        pos[a! + 2]! * (pos[b!]! * pos[c! + 1]! - pos[b! + 1]! * pos[c!]!)) /
+      6;
   }
   return v;
 }
@@ -36,7 +46,8 @@ describe('modelMesh', () => {
       const directed = new Set<string>();
       for (const t of tris) {
         for (let k = 0; k < 3; k++) {
-          const a = mesh.indices[t * 3 + k]!, b = mesh.indices[t * 3 + ((k + 1) % 3)]!;
+          const a = mesh.indices[t * 3 + k]!,
+            b = mesh.indices[t * 3 + ((k + 1) % 3)]!;
           verts.add(a);
           expect(directed.has(`${a}>${b}`)).toBe(false);
           directed.add(`${a}>${b}`);

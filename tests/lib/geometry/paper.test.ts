@@ -1,5 +1,11 @@
 import { describe, expect, test } from 'vitest';
-import { arcPoints, CHORD_TOLERANCE_MM, paperTabDepthMm, paperThicknessMm, PAPER_DENSITY_G_PER_CM3 } from '../../../src/lib/geometry/paper';
+import {
+  arcPoints,
+  CHORD_TOLERANCE_MM,
+  paperTabDepthMm,
+  paperThicknessMm,
+  PAPER_DENSITY_G_PER_CM3,
+} from '../../../src/lib/geometry/paper';
 
 describe('paperThicknessMm', () => {
   test('divides weight by the assumed density', () => {

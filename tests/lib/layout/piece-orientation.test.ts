@@ -5,10 +5,14 @@ import { tilingGrid } from '../../../src/lib/layout/tiling';
 import type { Vec2Mm } from '../../../src/lib/geometry/types';
 
 const rect = (w: number, h: number, turnRad = 0): Vec2Mm[] =>
-  ([[0, 0], [w, 0], [w, h], [0, h]] as const).map(([x, y]) => [
-    x * Math.cos(turnRad) - y * Math.sin(turnRad),
-    x * Math.sin(turnRad) + y * Math.cos(turnRad),
-  ]);
+  (
+    [
+      [0, 0],
+      [w, 0],
+      [w, h],
+      [0, h],
+    ] as const
+  ).map(([x, y]) => [x * Math.cos(turnRad) - y * Math.sin(turnRad), x * Math.sin(turnRad) + y * Math.cos(turnRad)]);
 const window = { widthMm: 190, heightMm: 200 };
 const boxOf = (outlineMm: Vec2Mm[], rotationRad: number) =>
   placementBounds({ xMm: 0, yMm: 0, rotationRad, mirrored: false }, { outlineMm });
@@ -36,6 +40,15 @@ describe('pieceOrientationForTilesRad', () => {
   });
 
   test('gives 0 for a degenerate outline', () => {
-    expect(pieceOrientationForTilesRad([[0, 0], [1, 1]], window, 12)).toBe(0);
+    expect(
+      pieceOrientationForTilesRad(
+        [
+          [0, 0],
+          [1, 1],
+        ],
+        window,
+        12,
+      ),
+    ).toBe(0);
   });
 });

@@ -84,11 +84,18 @@ describe('pieceTabDepthMm', () => {
     if (!fold) return null;
     const [a, b] = [fold.fromMm, fold.toMm];
     const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
-    const reach = tab.polygonMm.map((p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len);
+    const reach = tab.polygonMm.map(
+      (p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len,
+    );
     return Math.min(...reach.filter((r) => r > 1e-6));
   };
   const cylinder = (facets: number) =>
-    ModelSchema.parse({ schemaVersion: 1, name: `Cylinder ${facets}`, body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.3, facets }, appendages: [] });
+    ModelSchema.parse({
+      schemaVersion: 1,
+      name: `Cylinder ${facets}`,
+      body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.3, facets },
+      appendages: [],
+    });
   const cases = [
     ...['skein-probe', 'wren-3u', 'thermal-puck'].map((id) => [id, demoModel(id)] as const),
     ...[16, 64, 256].map((f) => [`cylinder ${f}`, cylinder(f)] as const),

@@ -41,7 +41,13 @@ function expectValidSheets(sheets: LaidOutSheet[], pieces: Piece[], units: 'metr
     for (let i = 0; i < rings.length; i++) {
       const outside = polygonClipping.difference([rings[i]!], [printable]);
       expect(multiPolygonArea(outside)).toBeLessThan(1e-6);
-      for (const block of [furniture.checkSquare, furniture.footer, furniture.legend, furniture.qr, furniture.cutList]) {
+      for (const block of [
+        furniture.checkSquare,
+        furniture.footer,
+        furniture.legend,
+        furniture.qr,
+        furniture.cutList,
+      ]) {
         if (block)
           expect(multiPolygonArea(polygonClipping.intersection([rings[i]!], [rectRing(block)]))).toBeLessThan(1e-6);
       }
@@ -70,11 +76,17 @@ describe('sheetPack', () => {
       const shapes: Ring[] = sheet.placements.map((p) =>
         p.tile
           ? rectRing(p.tile.windowMm)
-          : placementOutline(p, pieces.find((q) => q.id === p.pieceId)!).map(([x, y]) => [x, y] as [number, number]),
+          : placementOutline(
+              p,
+              pieces.find((q) => q.id === p.pieceId)!,
+            ).map(([x, y]) => [x, y] as [number, number]),
       );
       for (let i = 0; i < shapes.length; i++)
         for (let j = i + 1; j < shapes.length; j++)
-          expect(multiPolygonArea(polygonClipping.intersection([shapes[i]!], [shapes[j]!])), `sheet ${sheet.number}`).toBeLessThan(1e-6);
+          expect(
+            multiPolygonArea(polygonClipping.intersection([shapes[i]!], [shapes[j]!])),
+            `sheet ${sheet.number}`,
+          ).toBeLessThan(1e-6);
     });
   });
 

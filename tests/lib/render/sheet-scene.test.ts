@@ -13,28 +13,56 @@ function kitOf(id: string, n: number): KitLayout {
   const { pieces, threads } = modelPatterns(demoModel(id), { scaleDenominator: n, paperGsm: 160 });
   const sheetSize = SHEET_SIZES.letter;
   const sheets = sheetPack(pieces, { sheetSize, units: 'us', copies: 1 });
-  return { title: id, scaleDenominator: n, sheetSize, units: 'us', pieces, sheets, threads, cutList: [], qrUrl: 'https://kitwright.example/k', engineVersion: 'test' };
+  return {
+    title: id,
+    scaleDenominator: n,
+    sheetSize,
+    units: 'us',
+    pieces,
+    sheets,
+    threads,
+    cutList: [],
+    qrUrl: 'https://kitwright.example/k',
+    engineVersion: 'test',
+  };
 }
 
 describe('sheetScene', () => {
-  test.each([['skein-probe', 20], ['skein-probe', 50], ['thermal-puck', 5], ['wren-3u', 2]] as const)(
-    'keeps every label box of the %s at 1:%i clear of every other (polygon-clipping)',
-    (id, n) => {
-      const kit = kitOf(id, n);
-      for (const sheet of kit.sheets) {
-        const boxes = sheetScene(kit, sheet)
-          .texts.filter((t) => t.group === 'labels')
-          .map((t) => labelBox(t.atMm, t.angleRad, labelWidthEstimateMm(t.text, t.sizeMm, t.bold), t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor).map(([x, y]) => [x, y] as [number, number]));
-        for (let i = 0; i < boxes.length; i++)
-          for (let j = i + 1; j < boxes.length; j++)
-            // Reference library's intersection; 1e-6 mm² for slivers along touching sides.
-            expect(multiPolygonArea(polygonClipping.intersection([boxes[i]!], [boxes[j]!])), `${id} sheet ${sheet.number}`).toBeLessThan(1e-6);
-      }
-    },
-  );
+  test.each([
+    ['skein-probe', 20],
+    ['skein-probe', 50],
+    ['thermal-puck', 5],
+    ['wren-3u', 2],
+  ] as const)('keeps every label box of the %s at 1:%i clear of every other (polygon-clipping)', (id, n) => {
+    const kit = kitOf(id, n);
+    for (const sheet of kit.sheets) {
+      const boxes = sheetScene(kit, sheet)
+        .texts.filter((t) => t.group === 'labels')
+        .map((t) =>
+          labelBox(
+            t.atMm,
+            t.angleRad,
+            labelWidthEstimateMm(t.text, t.sizeMm, t.bold),
+            t.sizeMm * LABEL_BOX_HEIGHT_EM,
+            t.anchor,
+          ).map(([x, y]) => [x, y] as [number, number]),
+        );
+      for (let i = 0; i < boxes.length; i++)
+        for (let j = i + 1; j < boxes.length; j++)
+          // Reference library's intersection; 1e-6 mm² for slivers along touching sides.
+          expect(
+            multiPolygonArea(polygonClipping.intersection([boxes[i]!], [boxes[j]!])),
+            `${id} sheet ${sheet.number}`,
+          ).toBeLessThan(1e-6);
+    }
+  });
 
   test('shortens a name by leading words, keeping two', () => {
-    expect(sceneLabelAbbreviations('Wire boom +X anchor')).toEqual(['Wire boom +X anchor', 'boom +X anchor', '+X anchor']);
+    expect(sceneLabelAbbreviations('Wire boom +X anchor')).toEqual([
+      'Wire boom +X anchor',
+      'boom +X anchor',
+      '+X anchor',
+    ]);
     expect(sceneLabelAbbreviations('Body')).toEqual(['Body']);
   });
 });
