@@ -13,12 +13,7 @@ import { freeSpaceRects } from './free-space';
 import { pieceOrientationForTilesRad, pieceOrientationRad } from './piece-orientation';
 import { placementAtCorner, placementBounds } from './placement';
 import { SHEET_MARGIN_MM } from './sheet-sizes';
-import {
-  SHEET_FURNITURE_GAP_MM,
-  sheetFurnitureCheckSquareMm,
-  sheetFurnitureLayout,
-  sheetFurniturePrintable,
-} from './sheet-furniture';
+import { sheetFurnitureLayout, sheetFurniturePrintable } from './sheet-furniture';
 import { TILE_CAPTION_MM, TILE_OVERLAP_MM, tilingPiece } from './tiling';
 import type { PieceTile } from './tiling';
 import type { KitLayout, LaidOutSheet, RectMm, SheetSize } from './types';
@@ -63,12 +58,14 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
     sheetFurnitureLayout(printable, options.units, true, cutListRows).obstacles,
   );
   const freeOther = freeSpaceRects(printable, sheetFurnitureLayout(printable, options.units, false).obstacles);
+  // A tile must fit the largest free area of a sheet without a legend (below its caption), or a full-size
+  // tile could never be placed.
+  const largestFree = freeOther.reduce((a, r) => (r.widthMm * r.heightMm > a.widthMm * a.heightMm ? r : a));
   const tileWindow: RectMm = {
     xMm: 0,
     yMm: 0,
-    widthMm: printable.widthMm,
-    heightMm:
-      printable.heightMm - sheetFurnitureCheckSquareMm(options.units) - SHEET_FURNITURE_GAP_MM - TILE_CAPTION_MM,
+    widthMm: largestFree.widthMm,
+    heightMm: largestFree.heightMm - TILE_CAPTION_MM,
   };
   const overlap = options.overlapMm ?? TILE_OVERLAP_MM;
   const items: PackItem[] = [];
@@ -105,12 +102,22 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
   while (remaining.length > 0 || sheets.length === 0) {
     const free = sheets.length === 0 ? freeFirst : freeOther;
     const sheet = emptySheet(sheets.length + 1, options.sheetSize, printable);
-    const bin = new MaxRectsBin<Rectangle>(printable.widthMm, printable.heightMm, spacing, {
-      smart: false,
-      pot: false,
-      allowRotation: true,
-    });
-    bin.freeRects = free.map((r) => new Rectangle(r.widthMm + spacing, r.heightMm + spacing, r.xMm, r.yMm));
+    // The free rectangles are in sheet coordinates (they start at the margin), so the bin spans the sheet up
+    // to the printable area's far edges; the free rectangles alone keep placements inside the margin.
+    const bin = new MaxRectsBin<Rectangle>(
+      printable.xMm + printable.widthMm,
+      printable.yMm + printable.heightMm,
+      spacing,
+      {
+        smart: false,
+        pot: false,
+        allowRotation: true,
+      },
+    );
+    // A nanometre of slack: tiles cut to exactly a free rectangle's size must not miss it by rounding.
+    bin.freeRects = free.map(
+      (r) => new Rectangle(r.widthMm + spacing + FIT_SLACK_MM, r.heightMm + spacing + FIT_SLACK_MM, r.xMm, r.yMm),
+    );
     const left: PackItem[] = [];
     for (const item of remaining) {
       const rect = bin.add(new Rectangle(item.widthMm, item.heightMm, 0, 0, false, !item.tile));
@@ -150,6 +157,8 @@ function sheetPackTile(sheet: LaidOutSheet, tile: PieceTile, xMm: number, yMm: n
   for (const m of tile.alignmentMarks)
     sheet.alignmentMarks.push({ atMm: [m.atMm[0] + xMm, m.atMm[1] + yMm], letter: m.letter });
 }
+
+const FIT_SLACK_MM = 1e-6;
 
 function boxFits(item: Pick<PackItem, 'widthMm' | 'heightMm'>, r: RectMm): boolean {
   return (

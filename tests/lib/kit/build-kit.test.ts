@@ -34,6 +34,20 @@ const fixtureEngine: KitEngine = {
 };
 
 describe('buildKit', () => {
+  test('packs full-size tiles of the Skein probe at 1:5 on Letter (tiles exactly as large as the free area)', async () => {
+    const kit = await buildKit(request({ scaleDenominator: 5 }), fonts, { outputs: ['svg'] });
+    const tiles = kit.layout.sheets.flatMap((s) => s.placements.filter((p) => p.tile));
+    expect(tiles.length).toBeGreaterThan(0);
+    for (const sheet of kit.layout.sheets) {
+      for (const p of sheet.placements.filter((q) => q.tile)) {
+        const w = p.tile!.windowMm;
+        // Inside the printable area, to well under a micrometre.
+        expect(w.xMm).toBeGreaterThanOrEqual(sheet.printableMm.xMm - 1e-6);
+        expect(w.xMm + w.widthMm).toBeLessThanOrEqual(sheet.printableMm.xMm + sheet.printableMm.widthMm + 1e-6);
+      }
+    }
+  });
+
   test('builds the Skein probe at 1:20 on Letter with the model engine: PDF pages = sheets = SVGs', async () => {
     const kit = await buildKit(request(), fonts);
     const pdf = await PDFDocument.load(kit.pdf!);
