@@ -43,7 +43,8 @@ export default tseslint.config(
     rules: { 'no-restricted-imports': ['error', PURE_RESTRICTIONS] },
   },
   {
-    files: ['src/components/**'],
+    // Islands (.tsx/.ts) run in the browser; .astro components render on the server and may read adapters.
+    files: ['src/components/**/*.tsx', 'src/components/**/*.ts'],
     rules: {
       'no-restricted-imports': [
         'error',
