@@ -43,22 +43,38 @@ export function labelBox(
   ).map(([x, y]) => [atMm[0] + c * x - s * y, atMm[1] + s * x + c * y]);
 }
 
-/** Whether two convex polygons (corner lists) overlap by more than `slackMm` along every axis. */
+/**
+ * Whether two convex polygons (corner lists) overlap by more than `slackMm` along every axis (separating
+ * axis theorem; the x and y axes are tried first, as a cheap bounding-box rejection).
+ */
 export function labelBoxesOverlap(a: readonly Vec2Mm[], b: readonly Vec2Mm[], slackMm = 0): boolean {
+  if (separatedAlong(a, b, 1, 0, slackMm) || separatedAlong(a, b, 0, 1, slackMm)) return false;
   for (const poly of [a, b]) {
     for (let i = 0; i < poly.length; i++) {
       const p = poly[i]!;
       const q = poly[(i + 1) % poly.length]!;
       const len = Math.hypot(q[0] - p[0], q[1] - p[1]);
       if (len === 0) continue;
-      const n: Vec2Mm = [-(q[1] - p[1]) / len, (q[0] - p[0]) / len];
-      const project = (pts: readonly Vec2Mm[]) => pts.map((v) => v[0] * n[0] + v[1] * n[1]);
-      const pa = project(a);
-      const pb = project(b);
-      if (Math.max(...pa) <= Math.min(...pb) + slackMm || Math.max(...pb) <= Math.min(...pa) + slackMm) return false;
+      if (separatedAlong(a, b, -(q[1] - p[1]) / len, (q[0] - p[0]) / len, slackMm)) return false;
     }
   }
   return true;
+}
+
+/** True when the projections of a and b on the axis (nx, ny) overlap by no more than slackMm. */
+function separatedAlong(a: readonly Vec2Mm[], b: readonly Vec2Mm[], nx: number, ny: number, slackMm: number): boolean {
+  let [aMin, aMax, bMin, bMax] = [Infinity, -Infinity, Infinity, -Infinity];
+  for (const v of a) {
+    const d = v[0] * nx + v[1] * ny;
+    if (d < aMin) aMin = d;
+    if (d > aMax) aMax = d;
+  }
+  for (const v of b) {
+    const d = v[0] * nx + v[1] * ny;
+    if (d < bMin) bMin = d;
+    if (d > bMax) bMax = d;
+  }
+  return aMax <= bMin + slackMm || bMax <= aMin + slackMm;
 }
 
 /** Whether point p lies inside a simple polygon (even-odd rule). */

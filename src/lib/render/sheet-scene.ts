@@ -218,19 +218,13 @@ export function sceneLabelAbbreviations(label: string): string[] {
  */
 function scenePieceName(labels: SceneLabels, piece: Piece, placement: Placement) {
   const window = sceneNameWindow(placement);
-  const faces = piece.hinge.faces
-    .map((f) => f.polygonMm)
-    .filter((f) => f.length >= 3)
-    .sort((a, b) => Math.abs(polygonArea(b)) - Math.abs(polygonArea(a)))
-    .slice(0, 4)
-    .map((f) => f.map((p) => placementApply(placement, p)));
-  // Last resort for pieces whose faces are all narrow (a many-sided wall strip): across folds, never on tabs.
-  const union = outlineOf(piece.hinge.faces.map((f) => [...f.polygonMm]));
-  const regions = [...faces, union.map((p) => placementApply(placement, p))];
-  const spots = regions.map((r) => ({
-    within: sceneInside(r, window),
-    points: labelCandidatePoints(r).filter((p) => inside(p, window)),
-  }));
+  const spots = sceneNameRegions(piece).map(({ region, points }) => {
+    const placed = region.map((p) => placementApply(placement, p));
+    return {
+      within: sceneInside(placed, window),
+      points: points.map((p) => placementApply(placement, p)).filter((p) => inside(p, window)),
+    };
+  });
   // Down to 1.8 mm the full name comes first at every size, then the shorter forms; below that the largest
   // size that fits wins, whichever form it takes. Upright text first, then reading up the sheet for tall,
   // narrow pieces.
@@ -245,6 +239,28 @@ function scenePieceName(labels: SceneLabels, piece: Piece, placement: Placement)
         const candidates = points.map((p) => text(name, p, size, 'labels', { bold: true, angleRad }));
         if (labels.tryPlace(candidates, within)) return;
       }
+}
+
+const nameRegionCache = new WeakMap<Piece, { region: Vec2Mm[]; points: Vec2Mm[] }[]>();
+
+/**
+ * Where a piece's name may go, in its own flat coordinates: its four largest faces, then (last resort for
+ * pieces whose faces are all narrow, like a many-sided wall strip) the union of its faces — across folds,
+ * never on tabs — each with its candidate points. Placements are rigid motions, so the regions and points
+ * are computed once per piece and moved onto each sheet, copy and tile.
+ */
+function sceneNameRegions(piece: Piece): { region: Vec2Mm[]; points: Vec2Mm[] }[] {
+  const cached = nameRegionCache.get(piece);
+  if (cached) return cached;
+  const faces = piece.hinge.faces
+    .map((f) => f.polygonMm)
+    .filter((f) => f.length >= 3)
+    .sort((a, b) => Math.abs(polygonArea(b)) - Math.abs(polygonArea(a)))
+    .slice(0, 4);
+  const union = outlineOf(piece.hinge.faces.map((f) => [...f.polygonMm]));
+  const regions = [...faces, union].map((region) => ({ region: [...region], points: labelCandidatePoints(region) }));
+  nameRegionCache.set(piece, regions);
+  return regions;
 }
 
 /** Clear paper kept round a piece's name inside its face, mm (common practice, no source). */
