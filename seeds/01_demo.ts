@@ -102,61 +102,26 @@ export async function seed(knex: Knex): Promise<void> {
     .returning(['id', 'name', 'teacher_id']);
   const classBy = (name: string) => classes.find((c) => c.name === name)!;
 
-  await seedKits(knex, [
+  // Each kit differs from the usual classroom settings (Letter, 160 g/m², one copy) only where shown.
+  await seedKits(knex, classBy, [
     {
-      classId: classBy('Period 3 Science').id,
-      teacherId: classBy('Period 3 Science').teacher_id,
-      inputs: {
-        modelId: 'skein-probe',
-        activitySlug: 'shake-test',
-        scaleDenominator: 25,
-        sheetSizeId: 'letter',
-        paperGsm: 160,
-        copies: 1,
-        units: 'us',
-        venue: { kind: 'preset', id: 'classroom' },
-      },
+      className: 'Period 3 Science',
+      inputs: { modelId: 'skein-probe', activitySlug: 'shake-test', scaleDenominator: 25 },
     },
     {
-      classId: classBy('Engineering Club').id,
-      teacherId: classBy('Engineering Club').teacher_id,
+      className: 'Engineering Club',
       inputs: {
         modelId: 'skein-probe',
         activitySlug: 'scale-it',
         scaleDenominator: 50,
-        sheetSizeId: 'letter',
-        paperGsm: 160,
         copies: 2,
-        units: 'us',
         venue: { kind: 'preset', id: 'football-field' },
       },
     },
+    { className: 'Room 12 Explorers', inputs: { modelId: 'wren-3u', scaleDenominator: 2 } },
     {
-      classId: classBy('Room 12 Explorers').id,
-      teacherId: classBy('Room 12 Explorers').teacher_id,
-      inputs: {
-        modelId: 'wren-3u',
-        scaleDenominator: 2,
-        sheetSizeId: 'letter',
-        paperGsm: 160,
-        copies: 1,
-        units: 'us',
-        venue: { kind: 'preset', id: 'classroom' },
-      },
-    },
-    {
-      classId: classBy('Physics 2').id,
-      teacherId: classBy('Physics 2').teacher_id,
-      inputs: {
-        modelId: 'thermal-puck',
-        activitySlug: 'thermal-cycling',
-        scaleDenominator: 5,
-        sheetSizeId: 'letter',
-        paperGsm: 160,
-        copies: 1,
-        units: 'us',
-        venue: { kind: 'preset', id: 'classroom' },
-      },
+      className: 'Physics 2',
+      inputs: { modelId: 'thermal-puck', activitySlug: 'thermal-cycling', scaleDenominator: 5 },
     },
   ]);
 
@@ -246,17 +211,29 @@ export async function seed(knex: Knex): Promise<void> {
 }
 
 interface DemoKit {
-  classId: string;
-  teacherId: string;
+  className: string;
   inputs: Record<string, unknown>;
 }
 
+const DEMO_KIT_DEFAULTS = {
+  sheetSizeId: 'letter',
+  paperGsm: 160,
+  copies: 1,
+  units: 'us',
+  venue: { kind: 'preset', id: 'classroom' },
+};
+
 /** Saves demo kits the way the kit API does: validated inputs, a real build for the hash and sheet count. */
-async function seedKits(knex: Knex, kits: DemoKit[]): Promise<void> {
+async function seedKits(
+  knex: Knex,
+  classBy: (name: string) => { id: string; teacher_id: string },
+  kits: DemoKit[],
+): Promise<void> {
   const fonts = await kitFonts();
   const siteUrl = (process.env.SITE_URL ?? 'http://127.0.0.1:4321').replace(/\/+$/, '');
   for (const kit of kits) {
-    const inputs = KitInputsSchema.parse(kit.inputs);
+    const inputs = KitInputsSchema.parse({ ...DEMO_KIT_DEFAULTS, ...kit.inputs });
+    const owner = classBy(kit.className);
     const file = new URL(`../content/models/${inputs.modelId}.json`, import.meta.url);
     const content = ModelContentSchema.parse(JSON.parse(readFileSync(file, 'utf8')));
     const id = randomUUID();
@@ -264,8 +241,8 @@ async function seedKits(knex: Knex, kits: DemoKit[]): Promise<void> {
     const build = await buildKit(kitRequestOf(inputs, content.model, qrUrl), fonts, { outputs: ['svg'] });
     await knex('kits').insert({
       id,
-      class_id: kit.classId,
-      teacher_id: kit.teacherId,
+      class_id: owner.id,
+      teacher_id: owner.teacher_id,
       title: content.title,
       model_id: content.id,
       activity_slug: inputs.activitySlug ?? null,
