@@ -58,12 +58,12 @@ export const VENUE_MARGIN_FRACTION = 0.05;
 
 export const CustomVenueSchema = z.object({
   lengthM: z
-    .number()
+    .number({ invalid_type_error: 'the venue length must be a number of metres, e.g. 9' })
     .finite('the venue length must be a finite number of metres')
     .positive('the venue length must be more than 0 m')
     .max(10_000, 'the venue length must be at most 10 km'),
   widthM: z
-    .number()
+    .number({ invalid_type_error: 'the venue width must be a number of metres, e.g. 7' })
     .finite('the venue width must be a finite number of metres')
     .positive('the venue width must be more than 0 m')
     .max(10_000, 'the venue width must be at most 10 km'),

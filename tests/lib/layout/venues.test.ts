@@ -1,5 +1,11 @@
 import { describe, expect, test } from 'vitest';
-import { VENUES, VENUE_MARGIN_FRACTION, solveVenueScale, venueCustom } from '../../../src/lib/layout/venues';
+import {
+  CustomVenueSchema,
+  VENUES,
+  VENUE_MARGIN_FRACTION,
+  solveVenueScale,
+  venueCustom,
+} from '../../../src/lib/layout/venues';
 import { MM_PER_FOOT, feetToMm } from '../../../src/lib/layout/units';
 import { THREAD_TIE_OFF_ALLOWANCE_MM } from '../../../src/lib/geometry/wire-boom';
 import { demoModel } from '../geometry/fixtures';
@@ -63,5 +69,13 @@ describe('solveVenueScale', () => {
     expect(solveVenueScale(demoModel('skein-probe'), v).scaleDenominator).toBe(
       Math.ceil(Math.max(spanY / 9000, 72400 / 3600)),
     );
+  });
+});
+
+describe('CustomVenueSchema', () => {
+  test('says what would work for a length that is not a number', () => {
+    const result = CustomVenueSchema.safeParse({ lengthM: Number('abc'), widthM: 7 });
+    expect(result.success).toBe(false);
+    expect(result.error?.issues[0]?.message).toBe('the venue length must be a number of metres, e.g. 9');
   });
 });
