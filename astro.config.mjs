@@ -1,8 +1,10 @@
 // @ts-check
 import { defineConfig } from 'astro/config';
 import node from '@astrojs/node';
+import preact from '@astrojs/preact';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
+import { COMPAT_LIBRARIES, PREACT_ISLANDS, REACT_ISLANDS, islandRuntimes } from './config/island-runtimes.mjs';
 
 /** Hosts the server answers for: loopback, plus SITE_URL's host in production. */
 function allowedDomains() {
@@ -16,7 +18,9 @@ export default defineConfig({
   // KW_OUT_DIR lets two test runs on one machine build side by side (DEVELOPERS.md).
   outDir: process.env.KW_OUT_DIR ?? './dist',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react()],
+  // Preact islands are tagged for their renderer (config/island-runtimes.mjs); Astro asks React first about
+  // the rest, which it answers without rendering them.
+  integrations: [react({ include: REACT_ISLANDS }), preact({ include: PREACT_ISLANDS, exclude: REACT_ISLANDS })],
   server: {
     host: process.env.HOST ?? '127.0.0.1',
     port: Number(process.env.PORT ?? 4321),
@@ -25,10 +29,13 @@ export default defineConfig({
   // adapter sees every request as http://localhost and refuses same-site posts on 127.0.0.1.
   security: { checkOrigin: true, allowedDomains: allowedDomains() },
   vite: {
-    plugins: [tailwindcss()],
+    plugins: [islandRuntimes(), tailwindcss()],
+    // The dev server's pre-bundler would bind these to React before the alias sees them.
+    optimizeDeps: { exclude: COMPAT_LIBRARIES, include: ['preact/compat', 'preact/hooks', 'preact/jsx-runtime'] },
     ssr: {
       // Native and CommonJS server-only packages stay outside the bundle.
       external: ['@node-rs/argon2', 'sharp', 'pg', 'knex'],
+      noExternal: COMPAT_LIBRARIES,
     },
   },
 });

@@ -10,6 +10,7 @@ export default getViteConfig({
       'tests/api/**/*.test.ts',
       'tests/db/**/*.test.ts',
       'tests/scripts/**/*.test.ts',
+      'tests/config/**/*.test.ts',
     ],
     environment: 'node',
     testTimeout: 30_000,

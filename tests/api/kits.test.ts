@@ -113,9 +113,85 @@ describe('POST /api/kits/preview', () => {
     expect((await body(res)).error.message).toMatch(message);
   });
 
+  describe('streamed (Accept: application/x-ndjson)', () => {
+    const streamed = (inputs: object) =>
+      postJson('/api/kits/preview', inputs, { ...as(teacherCookie), accept: 'application/x-ndjson' });
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    const lines = async (res: Response): Promise<any[]> =>
+      (await res.text())
+        .split('\n')
+        .filter(Boolean)
+        .map((l) => JSON.parse(l));
+
+    it('reports patterns, layout and sheets as each ends, then the same preview as the plain answer', async () => {
+      // A scale no other test builds, so the server's cache cannot answer without building.
+      const inputs = { ...INPUTS, scaleDenominator: 23 };
+      const res = await streamed(inputs);
+      expect(res.status).toBe(200);
+      expect(res.headers.get('content-type')).toContain('application/x-ndjson');
+      const got = await lines(res);
+      expect(got.slice(0, 3).map((l) => [l.type, l.stage])).toEqual([
+        ['stage', 'patterns'],
+        ['stage', 'layout'],
+        ['stage', 'svg'],
+      ]);
+      expect(got.slice(0, 3).every((l) => l.ms >= 0)).toBe(true);
+      expect(got).toHaveLength(4);
+      const plain = await body(await postJson('/api/kits/preview', inputs, as(teacherCookie)));
+      expect(got[3].type).toBe('result');
+      expect(got[3].data.contentHash).toBe(plain.contentHash);
+      expect(got[3].data.sheetCount).toBe(plain.sheetCount);
+    });
+
+    it('refuses a scale too small to cut with a plain 400 before any stage', async () => {
+      const res = await streamed({ ...INPUTS, scaleDenominator: 500 });
+      expect(res.status).toBe(400);
+      expect((await body(res)).error.fields.scaleDenominator).toBeDefined();
+    });
+
+    it('ends with an error line (status 400) when the layout needs more than 200 sheets', async () => {
+      const got = await lines(await streamed({ ...INPUTS, scaleDenominator: 2 }));
+      expect(got[0]).toMatchObject({ type: 'stage', stage: 'patterns' });
+      const last = got[got.length - 1];
+      expect(last).toMatchObject({ type: 'error', status: 400, error: { code: 'invalid_input' } });
+      expect(last.error.message).toMatch(/200 is the most a kit may have/);
+    });
+  });
+
   it('asks anonymous callers to sign in', async () => {
     const res = await postJson('/api/kits/preview', INPUTS);
     expect(res.status).toBe(401);
+  });
+});
+
+describe('POST /api/kits/preview-file', () => {
+  it('answers the PDF of unsaved settings, one page per sheet (read back with pdf-lib)', async () => {
+    const preview = await body(await postJson('/api/kits/preview', INPUTS, as(teacherCookie)));
+    const res = await postJson('/api/kits/preview-file', { inputs: INPUTS, output: 'pdf' }, as(teacherCookie));
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    const pdf = await PDFDocument.load(new Uint8Array(await res.arrayBuffer()));
+    expect(pdf.getPageCount()).toBe(preview.sheetCount);
+  });
+
+  it('streams patterns, layout and PDF, then the same PDF base64 in the last line', async () => {
+    const inputs = { ...INPUTS, scaleDenominator: 24 };
+    const res = await postJson(
+      '/api/kits/preview-file',
+      { inputs, output: 'pdf' },
+      { ...as(teacherCookie), accept: 'application/x-ndjson' },
+    );
+    const got = (await res.text())
+      .split('\n')
+      .filter(Boolean)
+      .map((l) => JSON.parse(l));
+    expect(got.map((l) => l.stage ?? l.type)).toEqual(['patterns', 'layout', 'pdf', 'result']);
+    const file = got[3].data;
+    expect(file.type).toBe('application/pdf');
+    expect(file.name).toMatch(/^skein-probe-1-24-letter\.pdf$/);
+    const pdf = await PDFDocument.load(Buffer.from(file.base64, 'base64'));
+    const plain = await postJson('/api/kits/preview-file', { inputs, output: 'pdf' }, as(teacherCookie));
+    expect(pdf.getPageCount()).toBe((await PDFDocument.load(new Uint8Array(await plain.arrayBuffer()))).getPageCount());
   });
 });
 

@@ -5,6 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFile } from 'node:fs/promises';
+import { gzipSync } from 'node:zlib';
 import type { Browser, Page } from 'playwright-core';
 import type { Knex } from 'knex';
 import { PDFDocument } from 'pdf-lib';
@@ -93,6 +94,47 @@ describe('kit builder', () => {
     kitPath = (await saved.getByRole('link', { name: 'Open the kit page' }).getAttribute('href')) ?? '';
     expect(kitPath).toMatch(/^\/kits\/[0-9a-f-]{36}$/);
     expect(errors).toEqual([]);
+  });
+
+  it('shows each build stage as the server finishes it, and Cancel keeps the sheets it had', async () => {
+    const { page, errors } = await signedIn();
+    await page.goto('/kits/new?model=skein-probe');
+    await hydrated(page);
+    const before = await sheetsText(page);
+    // Twelve teams at 1:19 take the server several hundred milliseconds, long enough to watch and cancel.
+    await page.getByLabel('Any scale 1 :').fill('19');
+    await page.getByLabel('Copies (one per team)').fill('12');
+    await page.locator('[data-testid="build-progress"] [data-stage="patterns"][data-state="done"]').waitFor();
+    expect(await page.getByRole('progressbar', { name: 'Building the sheets' }).getAttribute('aria-valuenow')).not.toBe(
+      '0',
+    );
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="build-status"]')?.getAttribute('data-building') === 'false',
+    );
+    expect(await sheetsText(page)).toBe(before);
+    expect(await page.getByTestId('build-status').getByRole('alert').count()).toBe(0);
+    expect(await page.getByTestId('build-status').textContent()).toContain('Cancelled.');
+    await page.getByRole('button', { name: 'Build these settings' }).click();
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="kit-summary"]')?.getAttribute('data-scale') === '19',
+    );
+    expect(await page.getByTestId('kit-summary').textContent()).toContain('for 12 teams');
+    expect(errors).toEqual([]);
+  });
+
+  it('ships at most 60 kB of JavaScript (gzip) before the 3D island', async () => {
+    const { page } = await signedIn();
+    const scripts: Promise<number>[] = [];
+    page.on('response', (res) => {
+      if (res.request().resourceType() === 'script')
+        scripts.push(res.body().then((b) => gzipSync(b, { level: 9 }).length));
+    });
+    await page.goto('/kits/new?model=skein-probe', { waitUntil: 'networkidle' });
+    await hydrated(page);
+    const total = (await Promise.all(scripts)).reduce((a, b) => a + b, 0);
+    expect(scripts.length).toBeGreaterThan(0);
+    expect(total / 1024).toBeLessThanOrEqual(60);
   });
 
   it('has no serious or critical axe violations', async () => {

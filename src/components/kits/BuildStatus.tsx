@@ -1,58 +1,43 @@
-import { useEffect, useState } from 'react';
 import type { KitPreview } from '../../lib/kit/kit-queries';
+import { KIT_STAGE_LABELS, kitStagesOf, type KitStageDone } from '../../lib/kit/kit-stages';
+import BuildProgress from './BuildProgress';
 
 interface Props {
   building: boolean;
   error: string | null;
+  /** Stages of the running build reported so far. */
+  done: readonly KitStageDone[];
   timings: KitPreview['timingsMs'] | null;
+  /** The last build was cancelled: the sheets shown are for earlier settings. */
+  cancelled: boolean;
   onCancel: () => void;
+  onRebuild: () => void;
 }
 
-const STAGES: [keyof KitPreview['timingsMs'], string][] = [
-  ['patterns', 'patterns'],
-  ['layout', 'layout'],
-  ['svg', 'sheets'],
-];
+const PREVIEW_STAGES = kitStagesOf('svg');
 
-/**
- * The build's state, honestly: while the request runs, an indeterminate bar with the elapsed time and a
- * Cancel button (it aborts the request); afterwards, the time the server spent in each stage.
- */
-export default function BuildStatus({ building, error, timings, onCancel }: Props) {
-  const [elapsedMs, setElapsedMs] = useState(0);
-  useEffect(() => {
-    if (!building) return;
-    const start = performance.now();
-    setElapsedMs(0);
-    const timer = setInterval(() => setElapsedMs(performance.now() - start), 100);
-    return () => clearInterval(timer);
-  }, [building]);
-
+/** The sheet preview's build: its stages while it runs, its error, or the time each stage took. */
+export default function BuildStatus({ building, error, done, timings, cancelled, onCancel, onRebuild }: Props) {
   return (
     <div className="min-h-12 text-sm" aria-live="polite" data-testid="build-status" data-building={building}>
       {building ? (
-        <div className="flex items-center gap-3">
-          <div
-            className="h-2 w-40 overflow-hidden rounded-full bg-paper-deep"
-            role="progressbar"
-            aria-label="Building the sheets"
-          >
-            <div className="h-full w-1/3 animate-pulse rounded-full bg-fold" />
-          </div>
-          <span>Building patterns, layout and sheets on the server… {(elapsedMs / 1000).toFixed(1)} s</span>
-          <button type="button" className="btn-secondary py-1 text-sm" onClick={onCancel}>
-            Cancel
-          </button>
-        </div>
+        <BuildProgress what="the sheets" planned={PREVIEW_STAGES} done={done} onCancel={onCancel} />
       ) : error ? (
         <p role="alert" className="rounded-lg border border-danger/40 bg-danger-light p-3 text-danger">
           {error}
         </p>
+      ) : cancelled ? (
+        <p className="flex flex-wrap items-center gap-3">
+          <span>Cancelled. The sheets below are for your earlier settings.</span>
+          <button type="button" className="btn-secondary py-1 text-sm" onClick={onRebuild}>
+            Build these settings
+          </button>
+        </p>
       ) : timings ? (
         <p className="text-ink-soft">
           Built in {Math.round(timings.total)} ms (
-          {STAGES.filter(([k]) => timings[k] !== undefined)
-            .map(([k, label]) => `${label} ${Math.round(timings[k]!)} ms`)
+          {PREVIEW_STAGES.filter((k) => timings[k] !== undefined)
+            .map((k) => `${KIT_STAGE_LABELS[k].toLowerCase()} ${Math.round(timings[k]!)} ms`)
             .join(', ')}
           ).
         </p>

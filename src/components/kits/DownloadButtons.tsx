@@ -1,5 +1,7 @@
 import { useState } from 'react';
-import { apiFile, ApiError } from '../../lib/http/client';
+import { apiFileProgress, ApiError } from '../../lib/http/client';
+import { kitStagesOf, type KitStageDone } from '../../lib/kit/kit-stages';
+import BuildProgress from './BuildProgress';
 import type { KitForm } from '../../lib/kit/kit-settings';
 import type { KitView } from '../../lib/kit/kit-queries';
 
@@ -21,7 +23,8 @@ const LABELS: Record<Output, string> = {
  * the current settings (their QR code points at the builder).
  */
 export default function DownloadButtons({ form, saved, sheetCount }: Props) {
-  const [busy, setBusy] = useState<Output | null>(null);
+  const [busy, setBusy] = useState<{ output: Output; abort: AbortController } | null>(null);
+  const [done, setDone] = useState<KitStageDone[]>([]);
   const [error, setError] = useState<string | null>(null);
 
   if (saved) {
@@ -48,11 +51,15 @@ export default function DownloadButtons({ form, saved, sheetCount }: Props) {
 
   const download = async (output: Output) => {
     if (!form) return;
-    setBusy(output);
+    const abort = new AbortController();
+    setBusy({ output, abort });
+    setDone([]);
     setError(null);
     try {
-      const { blob, fileName } = await apiFile('/api/kits/preview-file', {
+      const { blob, fileName } = await apiFileProgress('/api/kits/preview-file', {
         body: { inputs: form, output, ...(output === 'svg' ? { sheet: 1 } : {}) },
+        signal: abort.signal,
+        onStage: (stage, ms) => setDone((d) => [...d, { stage, ms }]),
       });
       const url = URL.createObjectURL(blob);
       const a = document.createElement('a');
@@ -61,7 +68,7 @@ export default function DownloadButtons({ form, saved, sheetCount }: Props) {
       a.click();
       setTimeout(() => URL.revokeObjectURL(url), 10_000);
     } catch (err) {
-      setError(err instanceof ApiError ? err.message : 'The download failed.');
+      if (!abort.signal.aborted) setError(err instanceof ApiError ? err.message : 'The download failed.');
     } finally {
       setBusy(null);
     }
@@ -78,12 +85,22 @@ export default function DownloadButtons({ form, saved, sheetCount }: Props) {
             disabled={!form || busy !== null}
             onClick={() => download(o)}
           >
-            {busy === o
+            {busy?.output === o
               ? 'Preparing…'
               : `Download ${LABELS[o]}${o === 'svg' && sheetCount > 1 ? ` (sheet 1 of ${sheetCount})` : ''}`}
           </button>
         ))}
       </div>
+      {busy && (
+        <div className="mt-2 text-sm" aria-live="polite">
+          <BuildProgress
+            what={`the ${busy.output.toUpperCase()}`}
+            planned={kitStagesOf(busy.output)}
+            done={done}
+            onCancel={() => busy.abort.abort()}
+          />
+        </div>
+      )}
       <p className="mt-1 text-xs text-ink-soft">
         Save the kit first to give its QR code a page of its own and an SVG per sheet.
       </p>

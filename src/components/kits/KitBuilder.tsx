@@ -4,7 +4,13 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { keepPreviousData, QueryClient, QueryClientProvider, useQuery, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
 import { kitFormSchema, type KitForm } from '../../lib/kit/kit-settings';
-import { kitPreviewQueryOptions, scaleSolveQueryOptions, type KitView } from '../../lib/kit/kit-queries';
+import {
+  kitPreviewQueryOptions,
+  scaleSolveQueryOptions,
+  type BuildListener,
+  type KitView,
+} from '../../lib/kit/kit-queries';
+import type { KitStageDone } from '../../lib/kit/kit-stages';
 import type { KitBuilderProps } from './builder-props';
 import BuildStatus from './BuildStatus';
 import DownloadButtons from './DownloadButtons';
@@ -72,7 +78,19 @@ function KitBuilderForm(props: KitBuilderProps) {
     // validKey stands for valid's content, so an equal form does not restart the timer.
   }, [validKey]);
 
-  const preview = useQuery({ ...kitPreviewQueryOptions(settled), placeholderData: keepPreviousData });
+  const [stagesDone, setStagesDone] = useState<KitStageDone[]>([]);
+  const [cancelled, setCancelled] = useState(false);
+  const listener = useMemo<BuildListener>(
+    () => ({
+      begin: () => {
+        setStagesDone([]);
+        setCancelled(false);
+      },
+      stage: (stage, ms) => setStagesDone((d) => [...d, { stage, ms }]),
+    }),
+    [],
+  );
+  const preview = useQuery({ ...kitPreviewQueryOptions(settled, listener), placeholderData: keepPreviousData });
   const solveParams = {
     modelId: settled.modelId,
     sheetSizeId: settled.sheetSizeId,
@@ -330,8 +348,14 @@ function KitBuilderForm(props: KitBuilderProps) {
             <BuildStatus
               building={building}
               error={showError ?? props.initialError}
+              done={stagesDone}
               timings={data?.timingsMs ?? null}
-              onCancel={() => client.cancelQueries({ queryKey: ['kit-preview'] })}
+              cancelled={cancelled}
+              onCancel={() => {
+                setCancelled(true);
+                void client.cancelQueries({ queryKey: ['kit-preview'] });
+              }}
+              onRebuild={() => void preview.refetch()}
             />
           </div>
         </section>

@@ -25,23 +25,40 @@ export function errorResponse(
   return json({ error: body }, status, headers);
 }
 
-/** Maps any thrown value to a JSON error response; logs unexpected ones with the request id. */
-export function errorToResponse(err: unknown, requestId: string): Response {
+/** An error answer before it becomes a response: status, the shared body and any extra headers. */
+export interface ErrorAnswer {
+  status: number;
+  body: ErrorBody['error'];
+  headers: Record<string, string>;
+}
+
+/** Maps any thrown value to its error answer; logs unexpected ones with the request id. */
+export function errorAnswer(err: unknown, requestId: string): ErrorAnswer {
   if (err instanceof AppError) {
     const headers: Record<string, string> =
       err instanceof RateLimitError ? { 'retry-after': String(Math.max(1, Math.ceil(err.retryAfterSeconds))) } : {};
-    return errorResponse(
-      err.status,
-      { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
+    return {
+      status: err.status,
+      body: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
       headers,
-    );
+    };
   }
   console.error(`[${requestId}] unexpected error`, err);
-  return errorResponse(500, {
-    code: 'internal',
-    message: `Something went wrong on our side. Quote request id ${requestId} if you report it.`,
-    requestId,
-  });
+  return {
+    status: 500,
+    body: {
+      code: 'internal',
+      message: `Something went wrong on our side. Quote request id ${requestId} if you report it.`,
+      requestId,
+    },
+    headers: {},
+  };
+}
+
+/** Maps any thrown value to a JSON error response; logs unexpected ones with the request id. */
+export function errorToResponse(err: unknown, requestId: string): Response {
+  const { status, body, headers } = errorAnswer(err, requestId);
+  return errorResponse(status, body, headers);
 }
 
 /** Default cap for JSON request bodies, bytes. Endpoints that take more state their own limit. */

@@ -64,8 +64,8 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
   const outputs = new Set(options.outputs ?? ['pdf', 'svg', 'stl', 'json']);
   const step = async (stage: KitStage) => {
     options.onProgress?.(stage, 1);
-    // Yield so a UI can repaint and a cancel can land between stages.
-    await Promise.resolve();
+    // A macrotask, not a microtask: streamed progress reaches the socket and a cancel lands between stages.
+    await new Promise((resolve) => setTimeout(resolve, 0));
     options.signal?.throwIfAborted();
   };
   options.signal?.throwIfAborted();

@@ -12,6 +12,7 @@ import { contentHash } from './content-hash';
 import { kitFonts } from './fonts.server';
 import type { KitRequest } from './kit-request';
 import { KitCache } from './kit-cache.server';
+import type { StageReport } from '../http/progress-lines';
 
 /** Milliseconds spent in each stage the build went through, and in total. */
 export type KitTimingsMs = Partial<Record<'patterns' | 'layout' | KitOutput, number>> & { total: number };
@@ -55,30 +56,46 @@ const cache = new KitCache<KitOutputBuild>(({ build }) => {
   return files + (build.svgSheets ?? []).reduce((sum, s) => sum + s.length, 0) + 50_000;
 });
 
+export interface KitOutputBuildOptions {
+  /** Stops the build between stages when it fires (the client went away). */
+  signal?: AbortSignal;
+  /** Hears each stage as it ends, with its milliseconds; silent when the cache answers. */
+  onStage?: StageReport;
+}
+
+const isAbort = (err: unknown) => err instanceof Error && err.name === 'AbortError';
+
 /** One output of a kit, built (or taken from the cache) from a parsed request; InputError when impossible. */
 export async function kitOutputBuild(
   request: KitRequest,
   output: KitOutput,
-  signal?: AbortSignal,
+  options: KitOutputBuildOptions = {},
 ): Promise<KitOutputBuild> {
   const hash = await contentHash(request);
-  return cache.get(`${hash}:${output}`, async () => {
-    const fonts = await kitFonts();
-    const start = performance.now();
-    let last = start;
-    const timingsMs: KitTimingsMs = { total: 0 };
-    const build = await buildKit(request, fonts, {
-      engine: guardedEngine(request),
-      outputs: [output],
-      signal,
-      onProgress: (stage, fraction) => {
-        if (fraction < 1) return;
-        const now = performance.now();
-        timingsMs[stage] = Math.round((now - last) * 10) / 10;
-        last = now;
-      },
+  try {
+    return await cache.get(`${hash}:${output}`, async () => {
+      const fonts = await kitFonts();
+      const start = performance.now();
+      let last = start;
+      const timingsMs: KitTimingsMs = { total: 0 };
+      const build = await buildKit(request, fonts, {
+        engine: guardedEngine(request),
+        outputs: [output],
+        signal: options.signal,
+        onProgress: (stage, fraction) => {
+          if (fraction < 1) return;
+          const now = performance.now();
+          timingsMs[stage] = Math.round((now - last) * 10) / 10;
+          last = now;
+          options.onStage?.(stage, timingsMs[stage]);
+        },
+      });
+      timingsMs.total = Math.round((performance.now() - start) * 10) / 10;
+      return { build, timingsMs };
     });
-    timingsMs.total = Math.round((performance.now() - start) * 10) / 10;
-    return { build, timingsMs };
-  });
+  } catch (err) {
+    // This request joined a build whose own client cancelled it (the cache then forgets it): build anew.
+    if (isAbort(err) && !options.signal?.aborted) return kitOutputBuild(request, output, options);
+    throw err;
+  }
 }

@@ -48,6 +48,36 @@ export function kitSheetParam(value: string | null, sheetCount: number): number 
   return n;
 }
 
+/** One output of a built kit as a file: its bytes or text, name, content type and ETag. */
+export interface KitFile {
+  body: string | Uint8Array;
+  name: string;
+  type: string;
+  etag: string;
+}
+
+/** The file for one output of a built kit. */
+export function kitFile(
+  kitRequest: KitRequest,
+  build: KitBuild,
+  output: KitOutput,
+  options: Omit<KitFileOptions, 'disposition'> = {},
+): KitFile {
+  const stem = kitFileStem(build.layout.title, kitRequest);
+  const etag = `"${build.contentHash.slice(0, 32)}-${output}${options.sheet ?? ''}${options.stlFormat ?? ''}"`;
+  if (output === 'svg') {
+    const sheet = kitSheetParam(options.sheet ?? null, build.layout.sheets.length);
+    const name = `${stem}-sheet-${sheet}-of-${build.layout.sheets.length}.svg`;
+    return { body: build.svgSheets![sheet - 1]!, name, type: TYPES.svg, etag };
+  }
+  if (output === 'stl' && options.stlFormat === 'ascii') {
+    const body = stlAscii(GEOMETRY_KIT_ENGINE.mesh(kitRequest.model, kitRequest.scaleDenominator));
+    return { body, name: `${stem}-ascii.stl`, type: 'model/stl; charset=us-ascii', etag };
+  }
+  const body = output === 'json' ? build.json! : output === 'pdf' ? build.pdf! : build.stl!;
+  return { body, name: `${stem}.${output}`, type: TYPES[output], etag };
+}
+
 /** The download response for one output of a built kit; 304 when the browser already has this version. */
 export function kitFileResponse(
   request: Request,
@@ -56,22 +86,7 @@ export function kitFileResponse(
   output: KitOutput,
   options: KitFileOptions = {},
 ): Response {
-  const stem = kitFileStem(build.layout.title, kitRequest);
-  let body: string | Uint8Array;
-  let name = `${stem}.${output}`;
-  let type = TYPES[output];
-  if (output === 'svg') {
-    const sheet = kitSheetParam(options.sheet ?? null, build.layout.sheets.length);
-    body = build.svgSheets![sheet - 1]!;
-    name = `${stem}-sheet-${sheet}-of-${build.layout.sheets.length}.svg`;
-  } else if (output === 'stl' && options.stlFormat === 'ascii') {
-    body = stlAscii(GEOMETRY_KIT_ENGINE.mesh(kitRequest.model, kitRequest.scaleDenominator));
-    name = `${stem}-ascii.stl`;
-    type = 'model/stl; charset=us-ascii';
-  } else {
-    body = output === 'json' ? build.json! : output === 'pdf' ? build.pdf! : build.stl!;
-  }
-  const etag = `"${build.contentHash.slice(0, 32)}-${output}${options.sheet ?? ''}${options.stlFormat ?? ''}"`;
+  const { body, name, type, etag } = kitFile(kitRequest, build, output, options);
   const headers: Record<string, string> = {
     'content-type': type,
     'content-disposition': `${options.disposition ?? 'attachment'}; filename="${name}"`,

@@ -15,7 +15,7 @@ import {
   type PatternsRequestSchema,
   type ScaleSolveRequestSchema,
 } from './kit-inputs';
-import { kitOutputBuild, kitScaleGuard, type KitTimingsMs } from './kit-build.server';
+import { kitOutputBuild, kitScaleGuard, type KitOutputBuildOptions, type KitTimingsMs } from './kit-build.server';
 import { KitCache } from './kit-cache.server';
 import { kitSummary, type KitSummary } from './kit-summary';
 import type { KitOutput } from './build-kit';
@@ -33,11 +33,15 @@ export interface KitPreview {
 }
 
 /** Sheets and summary of an unsaved kit; the QR code points at the builder until the kit is saved. */
-export async function kitPreview(inputs: KitInputs, qrUrl: string): Promise<KitPreview> {
+export async function kitPreview(
+  inputs: KitInputs,
+  qrUrl: string,
+  options: KitOutputBuildOptions = {},
+): Promise<KitPreview> {
   const { model } = demoModelResolve(inputs);
   const request = kitRequestOf(inputs, model, qrUrl);
   const venue = kitVenue(inputs.venue);
-  const { build, timingsMs } = await kitOutputBuild(request, 'svg');
+  const { build, timingsMs } = await kitOutputBuild(request, 'svg', options);
   const size = sheetSize(request.sheetSizeId);
   return {
     contentHash: build.contentHash,
@@ -58,9 +62,14 @@ export async function kitPreview(inputs: KitInputs, qrUrl: string): Promise<KitP
 }
 
 /** One file of an unsaved kit (the builder's downloads before saving). */
-export async function kitPreviewFile(inputs: KitInputs, qrUrl: string, output: KitOutput) {
+export async function kitPreviewFile(
+  inputs: KitInputs,
+  qrUrl: string,
+  output: KitOutput,
+  options: KitOutputBuildOptions = {},
+) {
   const { model } = demoModelResolve(inputs);
-  return (await kitOutputBuild(kitRequestOf(inputs, model, qrUrl), output)).build;
+  return (await kitOutputBuild(kitRequestOf(inputs, model, qrUrl), output, options)).build;
 }
 
 /** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */

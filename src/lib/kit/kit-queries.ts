@@ -3,7 +3,8 @@
  * query key means the same data everywhere. Types of answers come from the server modules (type-only).
  */
 import { queryOptions, type QueryClient } from '@tanstack/react-query';
-import { api } from '../http/client';
+import { api, apiProgress } from '../http/client';
+import type { StageReport } from '../http/progress-lines';
 import type { KitPreview, ScaleSolution } from './kit-preview.server';
 import type { KitForm } from './kit-settings';
 import type { KitView } from './kit-view';
@@ -13,11 +14,24 @@ export type { KitPreview, ScaleSolution, KitView };
 /** What the solver needs: everything of the form but the scale, title, copies and activity. */
 export type ScaleSolveParams = Pick<KitForm, 'modelId' | 'sheetSizeId' | 'paperGsm' | 'units' | 'venue'>;
 
-/** Sheets and summary of unsaved settings; kept while newer settings build, never refetched by itself. */
-export function kitPreviewQueryOptions(form: KitForm) {
+/** Hears a build's progress: `begin` as a request starts, `stage` as the server finishes each stage. */
+export interface BuildListener {
+  begin(): void;
+  stage: StageReport;
+}
+
+/**
+ * Sheets and summary of unsaved settings; kept while newer settings build, never refetched by itself. With
+ * a listener the build streams its stages (the key does not depend on it, so the cache is shared).
+ */
+export function kitPreviewQueryOptions(form: KitForm, listener?: BuildListener) {
   return queryOptions({
     queryKey: ['kit-preview', form] as const,
-    queryFn: ({ signal }) => api<KitPreview>('/api/kits/preview', { body: form, signal }),
+    queryFn: ({ signal }) => {
+      if (!listener) return api<KitPreview>('/api/kits/preview', { body: form, signal });
+      listener.begin();
+      return apiProgress<KitPreview>('/api/kits/preview', { body: form, signal, onStage: listener.stage });
+    },
     staleTime: Infinity,
     gcTime: 5 * 60_000,
   });

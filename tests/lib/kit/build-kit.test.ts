@@ -9,6 +9,7 @@ import type { KitEngine, KitStage } from '../../../src/lib/kit/build-kit';
 import { contentHash, contentHashCanonicalJson } from '../../../src/lib/kit/content-hash';
 import { ENGINE_VERSION } from '../../../src/lib/kit/engine-version';
 import { KitRequestSchema } from '../../../src/lib/kit/kit-request';
+import { KIT_STAGE_LABELS, kitStagesOf } from '../../../src/lib/kit/kit-stages';
 import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
 import { boxMesh } from '../../fixtures/pieces/meshes';
 import { rectPiece, smallKitPieces } from '../../fixtures/pieces/pieces';
@@ -135,5 +136,18 @@ describe('KitRequestSchema', () => {
     const r = KitRequestSchema.safeParse({ ...request(), copies: 41 });
     expect(r.success).toBe(false);
     expect(JSON.stringify(r.error?.issues)).toContain('copies must be at most 40');
+  });
+});
+
+describe('kitStagesOf (the stages the builder shows while it waits)', () => {
+  test.each(['svg', 'pdf', 'stl', 'json'] as const)('lists what a %s build reports, in its order', async (output) => {
+    const reported: KitStage[] = [];
+    await buildKit(request(), fonts, {
+      engine: fixtureEngine,
+      outputs: [output],
+      onProgress: (stage, fraction) => fraction === 1 && reported.push(stage),
+    });
+    expect(kitStagesOf(output)).toEqual(reported);
+    expect(reported.map((s) => KIT_STAGE_LABELS[s]).every(Boolean)).toBe(true);
   });
 });

@@ -11,7 +11,7 @@ export function kitDownloadRoute(output: KitOutput) {
   return endpoint({ access: KIT_VIEWERS }, async (context: APIContext) => {
     const row = await kitVisible(context.locals.actor, context.params.id ?? '');
     const request = kitRequestForRow(row);
-    const { build } = await kitOutputBuild(request, output, context.request.signal);
+    const { build } = await kitOutputBuild(request, output, { signal: context.request.signal });
     const q = context.url.searchParams;
     return kitFileResponse(context.request, request, build, output, {
       ...(output === 'svg' ? { sheet: q.get('sheet') } : {}),

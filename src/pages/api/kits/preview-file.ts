@@ -4,9 +4,11 @@ import { siteUrl } from '../../../lib/auth/site-url';
 import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitRequestOf } from '../../../lib/kit/kit-inputs';
 import { demoModelResolve } from '../../../lib/kit/demo-models.server';
-import { kitFileResponse } from '../../../lib/kit/kit-files.server';
+import { kitFile, kitFileResponse } from '../../../lib/kit/kit-files.server';
 import { kitPreviewFile } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
+import { progressWanted, type StreamedFile } from '../../../lib/http/progress-lines';
+import { progressResponse } from '../../../lib/http/progress-stream';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
 
@@ -17,13 +19,20 @@ const PreviewFileSchema = z.object({
   sheet: z.number().int().min(1).optional(),
 });
 
-/** One file of an unsaved kit, for the builder's downloads before saving (its QR code points at the builder). */
+/**
+ * One file of an unsaved kit, for the builder's downloads before saving (its QR code points at the builder).
+ * With `Accept: application/x-ndjson` the build streams its stages and the file comes base64 in the last line.
+ */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
   const { inputs, output, sheet } = parseInput(PreviewFileSchema, await readJson(context.request, 200_000), 'download');
   const qrUrl = `${siteUrl(context.url).replace(/\/+$/, '')}/kits/new`;
-  const build = await kitPreviewFile(inputs, qrUrl, output);
   const request = kitRequestOf(inputs, demoModelResolve(inputs).model, qrUrl);
-  return kitFileResponse(context.request, request, build, output, {
-    sheet: sheet === undefined ? null : String(sheet),
+  const sheetParam = { sheet: sheet === undefined ? null : String(sheet) };
+  if (!progressWanted(context.request)) {
+    return kitFileResponse(context.request, request, await kitPreviewFile(inputs, qrUrl, output), output, sheetParam);
+  }
+  return progressResponse(context.request, context.locals.requestId, async (onStage, signal): Promise<StreamedFile> => {
+    const file = kitFile(request, await kitPreviewFile(inputs, qrUrl, output, { onStage, signal }), output, sheetParam);
+    return { name: file.name, type: file.type, base64: Buffer.from(file.body).toString('base64') };
   });
 });

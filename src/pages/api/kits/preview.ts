@@ -3,11 +3,20 @@ import { siteUrl } from '../../../lib/auth/site-url';
 import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitPreview } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
+import { progressWanted } from '../../../lib/http/progress-lines';
+import { progressResponse } from '../../../lib/http/progress-stream';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
 
-/** Every sheet of an unsaved kit as SVG, with the plain-words scale summary (nothing is saved). */
+/**
+ * Every sheet of an unsaved kit as SVG, with the plain-words scale summary (nothing is saved). With
+ * `Accept: application/x-ndjson` the build streams its stages first (src/lib/http/progress-lines.ts).
+ */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
   const inputs = parseInput(KitInputsSchema, await readJson(context.request, 200_000), 'kit');
-  return kitPreview(inputs, `${siteUrl(context.url).replace(/\/+$/, '')}/kits/new`);
+  const qrUrl = `${siteUrl(context.url).replace(/\/+$/, '')}/kits/new`;
+  if (!progressWanted(context.request)) return kitPreview(inputs, qrUrl);
+  return progressResponse(context.request, context.locals.requestId, (onStage, signal) =>
+    kitPreview(inputs, qrUrl, { onStage, signal }),
+  );
 });
