@@ -21,7 +21,14 @@ import {
 /** Row height limits, mm: 7 mm is about the smallest a student writes into (common practice, no source). */
 const ROW_MIN_MM = 7;
 const ROW_MAX_MM = 12;
-const HEADER_MM = 12;
+
+/** Column heading type: names in bold over at most three lines, the unit in a smaller line under them. */
+const NAME_PT = 9.5;
+const UNIT_PT = 8.5;
+const NAME_LINES_MAX = 3;
+const HEADER_PAD_MM = 1.8;
+/** jspdf's default line height is 1.15 × the font size; 1 pt = 25.4 / 72 mm (ISO 32000-1 §8.3.2.3). */
+const lineMm = (pt: number) => (pt * 1.15 * 25.4) / 72;
 
 /** Relative width of a column: free-text columns (no unit, no tool) get more room for words. */
 export function dataSheetColumnWeight(column: DataSheetColumn): number {
@@ -59,33 +66,40 @@ function dataSheetTable(flow: PdfFlow, columns: readonly DataSheetColumn[], rows
   const total = weights.reduce((a, b) => a + b, 0);
   const xs = [FLOW_MARGIN_MM];
   for (const w of weights) xs.push(xs.at(-1)! + (w / total) * widthMm);
-  const room = flow.heightMm - FLOW_MARGIN_MM - 4 - flow.y - HEADER_MM;
+  doc.setFont(PDF_FONT_FAMILY, 'bold');
+  doc.setFontSize(NAME_PT);
+  const names = columns.map((c, i): string[] =>
+    doc.splitTextToSize(c.name, xs[i + 1]! - xs[i]! - 2).slice(0, NAME_LINES_MAX),
+  );
+  const nameLines = Math.max(...names.map((n) => n.length));
+  const unitTopMm = HEADER_PAD_MM + nameLines * lineMm(NAME_PT);
+  const headerMm = unitTopMm + (columns.some((c) => c.unit) ? lineMm(UNIT_PT) : 0) + HEADER_PAD_MM;
+  const room = flow.heightMm - FLOW_MARGIN_MM - 4 - flow.y - headerMm;
   const rowMm = Math.max(ROW_MIN_MM, Math.min(ROW_MAX_MM, room / rows));
   const fitRows = Math.min(rows, Math.floor(room / rowMm));
   const top = flow.y;
-  const bottom = top + HEADER_MM + fitRows * rowMm;
+  const bottom = top + headerMm + fitRows * rowMm;
 
   doc.setFillColor('#e3e7f4');
-  doc.rect(FLOW_MARGIN_MM, top, widthMm, HEADER_MM, 'F');
+  doc.rect(FLOW_MARGIN_MM, top, widthMm, headerMm, 'F');
+  doc.setTextColor('#1b2330');
   columns.forEach((c, i) => {
     const cx = (xs[i]! + xs[i + 1]!) / 2;
-    const cw = xs[i + 1]! - xs[i]! - 2;
     doc.setFont(PDF_FONT_FAMILY, 'bold');
-    doc.setFontSize(9.5);
-    doc.setTextColor('#1b2330');
-    const name: string[] = doc.splitTextToSize(c.name, cw);
-    doc.text(name.slice(0, 2), cx, top + 2, { baseline: 'top', align: 'center' });
+    doc.setFontSize(NAME_PT);
+    doc.text(names[i]!, cx, top + HEADER_PAD_MM, { baseline: 'top', align: 'center' });
     if (c.unit) {
+      // Every unit on one line under the tallest name, so the units of a table line up.
       doc.setFont(PDF_FONT_FAMILY, 'normal');
-      doc.setFontSize(8.5);
-      doc.text(`(${c.unit})`, cx, top + HEADER_MM - 1.5, { baseline: 'bottom', align: 'center' });
+      doc.setFontSize(UNIT_PT);
+      doc.text(`(${c.unit})`, cx, top + unitTopMm, { baseline: 'top', align: 'center' });
     }
   });
   doc.setDrawColor('#46505f');
   doc.setLineWidth(0.25);
   doc.setLineDashPattern([], 0);
   for (let r = 0; r <= fitRows; r++) {
-    const y = top + HEADER_MM + r * rowMm;
+    const y = top + headerMm + r * rowMm;
     doc.line(FLOW_MARGIN_MM, y, FLOW_MARGIN_MM + widthMm, y);
   }
   doc.line(FLOW_MARGIN_MM, top, FLOW_MARGIN_MM + widthMm, top);

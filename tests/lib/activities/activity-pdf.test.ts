@@ -59,6 +59,31 @@ describe('dataSheetPdf', () => {
     }
   });
 
+  test('sets each column unit on its own line below every line of the column name', async () => {
+    for (const a of activities) {
+      const doc = await getDocument({ data: dataSheetPdf(a, fonts).slice(), disableFontFace: true }).promise;
+      const items = (await (await doc.getPage(1)).getTextContent()).items.flatMap((i) =>
+        'str' in i && i.str.trim()
+          ? [{ str: i.str.trim(), x: i.transform[4]!, w: i.width, y: i.transform[5]!, h: i.height }]
+          : [],
+      );
+      for (const c of a.record.columns.filter((col) => col.unit)) {
+        const centre = (i: (typeof items)[number]) => i.x + i.w / 2;
+        const names = items.filter((i) => squash(c.name).includes(squash(i.str)));
+        // The unit printed under this column's name (two columns may share a unit).
+        const unit = items.find(
+          (i) => squash(i.str) === squash(`(${c.unit})`) && names.some((n) => Math.abs(centre(n) - centre(i)) < 1),
+        )!;
+        expect(unit, `${a.slug}: ${c.name} (${c.unit})`).toBeDefined();
+        const nameLines = names.filter((n) => Math.abs(centre(n) - centre(unit)) < 1 && n.y > unit.y);
+        // PDF y grows upwards (ISO 32000-1 §8.3.2.3). Two lines do not overlap when their baselines are at least
+        // one font size apart (the em square holds ascender and descender; DejaVu's sit inside it).
+        const lowestName = Math.min(...nameLines.map((i) => i.y));
+        expect(lowestName - unit.y, `${a.slug}: ${c.name} over (${c.unit})`).toBeGreaterThanOrEqual(unit.h);
+      }
+    }
+  });
+
   test('agrees with pdf-lib on the page count and size', async () => {
     const lib = await PDFDocument.load(dataSheetPdf(activities[0]!, fonts, 'a4'));
     expect(lib.getPageCount()).toBe(1);
