@@ -336,7 +336,7 @@ function KitBuilderForm(props: KitBuilderProps) {
               ))}
               <li>
                 {data.sheetCount} {data.sheetCount === 1 ? 'sheet' : 'sheets'} of {data.sheetSizeLabel}
-                {settled.copies > 1 ? ` for ${settled.copies} teams` : ''}.
+                {data.copies > 1 ? ` for ${data.copies} teams` : ''}.
               </li>
             </ul>
           ) : (

@@ -26,6 +26,8 @@ export interface KitPreview {
   scaleDenominator: number;
   sheetSizeLabel: string;
   sheetCount: number;
+  /** Kits (one per team) the sheets are for. */
+  copies: number;
   /** One SVG document per sheet, in order. */
   sheets: string[];
   summary: KitSummary;
@@ -49,6 +51,7 @@ export async function kitPreview(
     scaleDenominator: request.scaleDenominator,
     sheetSizeLabel: size.label,
     sheetCount: build.layout.sheets.length,
+    copies: request.copies,
     sheets: build.svgSheets ?? [],
     summary: kitSummary({
       model,
