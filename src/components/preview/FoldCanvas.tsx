@@ -1,7 +1,7 @@
 import { useCallback, useMemo, useRef, type KeyboardEvent, type RefObject } from 'react';
-import { Canvas } from '@react-three/fiber';
 import type { Piece } from '../../lib/geometry/types';
 import FoldScene from './FoldScene';
+import SceneCanvas from './SceneCanvas';
 import { viewCommandRun, viewKeyCommand, type ViewActions } from '../../lib/preview/view-keys';
 import { VIEW_FOV_DEG, viewFrame } from './view-frame';
 
@@ -62,7 +62,7 @@ export default function FoldCanvas({
       data-testid="fold-canvas"
       className="h-full w-full cursor-grab rounded-lg active:cursor-grabbing"
     >
-      <Canvas
+      <SceneCanvas
         frameloop="demand"
         dpr={[1, 2]}
         camera={{
@@ -72,7 +72,6 @@ export default function FoldCanvas({
           near: frame.radiusMm / 100,
           far: frame.radiusMm * 100,
         }}
-        aria-hidden="true"
       >
         <FoldScene
           pieces={pieces}
@@ -83,7 +82,7 @@ export default function FoldCanvas({
           actionsRef={actionsRef}
           onRendered={onRendered}
         />
-      </Canvas>
+      </SceneCanvas>
     </div>
   );
 }
