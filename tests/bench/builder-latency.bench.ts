@@ -5,10 +5,10 @@
  * preview of the Skein probe in Debian's chromium: Enter in the 1:N field → the summary shows the new scale,
  * the build status is idle and a frame has been painted. Each change uses a
  * new scale (1:21, 1:22, …) so the query cache never answers; restart the server between runs so its cache
- * does not either. A script, not a timed test.
+ * does not either. (3) the JavaScript the 3D island adds once it scrolls into view. A script, not a timed test.
  */
 import { gzipSync } from 'node:zlib';
-import { chromium } from 'playwright-core';
+import { chromium, type BrowserContext } from 'playwright-core';
 import { CHROMIUM_FLAGS } from '../browser/browser';
 
 const BASE = process.env.KW_BENCH_BASE_URL ?? 'http://127.0.0.1:4321';
@@ -18,6 +18,7 @@ const CHANGES = Number(process.env.KW_BENCH_CHANGES ?? 15);
 const WARMUP = 2;
 const JS_TARGET_GZIP_KB = 60;
 const LATENCY_TARGET_MS = 300;
+const ISLAND_TARGET_GZIP_KB = 300;
 
 const kb = (bytes: number) => (bytes / 1024).toFixed(1);
 
@@ -84,7 +85,34 @@ async function main(): Promise<void> {
       `min ${times[0]!.toFixed(0)} ms, median ${median.toFixed(0)} ms, max ${times[times.length - 1]!.toFixed(0)} ms; ` +
       `target ≤ ${LATENCY_TARGET_MS} ms median: ${median <= LATENCY_TARGET_MS ? 'met' : 'NOT met'}`,
   );
+  await island3dReport(context);
   await browser.close();
+}
+
+/** The JavaScript the 3D island adds to a page: scripts loaded once it scrolls into view and draws. */
+async function island3dReport(context: BrowserContext): Promise<void> {
+  const page = await context.newPage();
+  // A short window keeps the island (client:visible) below the fold until we scroll to it.
+  await page.setViewportSize({ width: 1280, height: 150 });
+  const scripts = new Map<string, number>();
+  page.on('response', async (res) => {
+    if (res.request().resourceType() !== 'script') return;
+    const body = await res.body().catch(() => null);
+    if (body) scripts.set(new URL(res.url()).pathname, gzipSync(body, { level: 9 }).length);
+  });
+  await page.goto('/preview/skein-probe', { waitUntil: 'networkidle' });
+  const before = new Set(scripts.keys());
+  await page.getByTestId('fold-preview').scrollIntoViewIfNeeded();
+  await page.waitForSelector('[data-scene-ready="true"]', { timeout: 30_000 });
+  await page.waitForLoadState('networkidle');
+  const added = [...scripts.entries()].filter(([path]) => !before.has(path)).sort((a, b) => b[1] - a[1]);
+  const total = added.reduce((sum, [, n]) => sum + n, 0);
+  console.log(`JavaScript the 3D island loads (/preview/skein-probe): ${added.length} files`);
+  for (const [path, n] of added) console.log(`  ${kb(n).padStart(6)} kB gzip  ${path}`);
+  console.log(
+    `  total ${kb(total)} kB gzip; target ≤ ${ISLAND_TARGET_GZIP_KB} kB gzip: ${total / 1024 <= ISLAND_TARGET_GZIP_KB ? 'met' : 'NOT met'}`,
+  );
+  await page.close();
 }
 
 main().catch((err) => {
