@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { gzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
@@ -126,6 +127,28 @@ describe('fold preview', () => {
         .map((v) => v.id);
     });
     expect(violations).toEqual([]);
+  });
+
+  it('loads at most 300 kB of JavaScript (gzip) for the 3D island once it scrolls into view', async () => {
+    const { page } = await pageNew(browser);
+    // A short window keeps the island (client:visible) below the fold until the test scrolls to it.
+    await page.setViewportSize({ width: 1280, height: 150 });
+    const sizes = new Map<string, Promise<number>>();
+    page.on('response', (res) => {
+      if (res.request().resourceType() !== 'script') return;
+      sizes.set(
+        new URL(res.url()).pathname,
+        res.body().then((b) => gzipSync(b, { level: 9 }).length),
+      );
+    });
+    await page.goto('/preview/skein-probe', { waitUntil: 'networkidle' });
+    const before = new Set(sizes.keys());
+    await page.getByTestId('fold-preview').scrollIntoViewIfNeeded();
+    await page.waitForSelector('[data-testid="fold-canvas"][data-scene-ready="true"]', { timeout: 30_000 });
+    const island = [...sizes.entries()].filter(([path]) => !before.has(path)).map(([, size]) => size);
+    expect(island.length).toBeGreaterThan(0);
+    const total = (await Promise.all(island)).reduce((a, b) => a + b, 0);
+    expect(total / 1024).toBeLessThanOrEqual(300);
   });
 
   it('answers 404 with a readable message for an unknown model', async () => {
