@@ -17,6 +17,11 @@ export function activityHrefs(slug: string, paper: ActivityPaper = 'letter') {
   };
 }
 
+/** The paper for a kit's printouts: A4 for a kit on an ISO A sheet (A3, A4, A5), else Letter. */
+export function activityPaperForSheet(sheetSizeId: string): ActivityPaper {
+  return /^a\d$/.test(sheetSizeId) ? 'a4' : 'letter';
+}
+
 /** The paper a query string asks for; Letter unless it says a4. */
 export function activityPaperFromQuery(params: URLSearchParams): ActivityPaper {
   return params.get('paper') === 'a4' ? 'a4' : 'letter';

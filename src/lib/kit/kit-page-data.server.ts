@@ -2,6 +2,7 @@
  * Server adapter: what the kit page and its handout show for a saved kit, computed from its saved inputs:
  * the summary, the assembly steps, and the pieces and boom scale the 3D preview island folds.
  */
+import { activityPaperForSheet } from '../activities/activity-links';
 import { modelPatterns } from '../geometry/model-patterns';
 import { sheetSize } from '../layout/sheet-sizes';
 import { boomScale } from '../preview/boom-scale';
@@ -24,6 +25,7 @@ export function kitPageData(row: KitRow) {
   return {
     view,
     sheetLabel,
+    activityPaper: activityPaperForSheet(request.sheetSizeId),
     paperGsm: request.paperGsm,
     summary: kitSummary({
       model: request.model,
