@@ -5,13 +5,7 @@ import preact from '@astrojs/preact';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { COMPAT_LIBRARIES, PREACT_ISLANDS, REACT_ISLANDS, islandRuntimes } from './config/island-runtimes.mjs';
-
-/** Hosts the server answers for: loopback, plus SITE_URL's host in production. */
-function allowedDomains() {
-  const domains = [{ hostname: '127.0.0.1' }, { hostname: 'localhost' }];
-  if (process.env.SITE_URL) domains.push({ hostname: new URL(process.env.SITE_URL).hostname });
-  return domains;
-}
+import { originAllowedHostnames } from './src/lib/http/origin-check.ts';
 
 export default defineConfig({
   output: 'server',
@@ -25,9 +19,13 @@ export default defineConfig({
     host: process.env.HOST ?? '127.0.0.1',
     port: Number(process.env.PORT ?? 4321),
   },
-  // Astro's own origin check: every form post must come from this site. Without allowedDomains the node
-  // adapter sees every request as http://localhost and refuses same-site posts on 127.0.0.1.
-  security: { checkOrigin: true, allowedDomains: allowedDomains() },
+  // checkOrigin is off: src/middleware.ts refuses cross-site requests of every body type with the shared JSON
+  // error (src/lib/http/origin-check.ts). allowedDomains stays: the node adapter trusts a Host header only when
+  // it matches, and without it every request's URL is http://localhost (node_modules/astro/dist/core/app/node.js).
+  security: {
+    checkOrigin: false,
+    allowedDomains: originAllowedHostnames(process.env.SITE_URL).map((hostname) => ({ hostname })),
+  },
   vite: {
     plugins: [islandRuntimes(), tailwindcss()],
     // The dev server's pre-bundler would bind these to React before the alias sees them.
