@@ -189,4 +189,17 @@ describe('kit page', () => {
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Skein probe');
     expect(await page.getByTestId('kit-sheets').locator('img').count()).toBeGreaterThan(0);
   });
+
+  it('tells an anonymous visitor of the handout to open the class first, like the kit page', async () => {
+    const { page } = await pageNew(browser);
+    const handoutPath = `${kitPath}/handout`;
+    const refused = await page.goto(handoutPath);
+    expect(refused?.status()).toBe(401);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Open your class first');
+    const next = `?next=${encodeURIComponent(handoutPath)}`;
+    const notice = page.getByTestId('kit-unavailable');
+    expect(await notice.getByRole('link', { name: 'Enter the class code' }).getAttribute('href')).toBe(`/join${next}`);
+    expect(await notice.getByRole('link', { name: 'sign in' }).getAttribute('href')).toBe(`/sign-in${next}`);
+    expect(await page.getByTestId('handout-steps').count()).toBe(0);
+  });
 });
