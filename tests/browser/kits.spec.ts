@@ -12,6 +12,7 @@ import { PDFDocument } from 'pdf-lib';
 import { BASE_URL, browserLaunch, pageNew } from './browser';
 import { testKnex } from '../db/database';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
+import { SAFETY_GENERAL_NOTE } from '../../src/lib/activities/safety';
 
 let browser: Browser;
 let knex: Knex;
@@ -174,6 +175,38 @@ describe('kit page', () => {
     await page.getByTestId('fold-preview').scrollIntoViewIfNeeded();
     await hydrated(page);
     expect(await axeSerious(page)).toEqual([]);
+  });
+
+  it("shows the kit's activity with its steps, cautions and printouts", async () => {
+    const { page } = await signedIn();
+    const classes = await page.request.get('/api/classes');
+    const classId = ((await classes.json()) as { classes: { id: string }[] }).classes[0]!.id;
+    const saved = await page.request.post('/api/kits', {
+      data: {
+        classId,
+        inputs: {
+          modelId: 'skein-probe',
+          activitySlug: 'shake-test',
+          scaleDenominator: 25,
+          sheetSizeId: 'a4',
+          paperGsm: 160,
+          copies: 1,
+          units: 'metric',
+          venue: { kind: 'preset', id: 'classroom' },
+        },
+      },
+      headers: { origin: BASE_URL },
+    });
+    expect(saved.status()).toBe(201);
+    const { kit } = (await saved.json()) as { kit: { id: string } };
+    await page.goto(`/kits/${kit.id}`);
+    const section = page.getByTestId('kit-activity');
+    expect(await section.getByRole('heading', { name: 'The activity: Shake test' }).count()).toBe(1);
+    expect(await section.getByTestId('activity-safety').textContent()).toContain(SAFETY_GENERAL_NOTE);
+    // The kit is on A4, so its printouts are too.
+    expect(await section.getByRole('link', { name: 'Student data sheet (PDF)' }).getAttribute('href')).toBe(
+      '/activities/shake-test/data-sheet.pdf?paper=a4',
+    );
   });
 
   it('opens for a student through the class code and not before', async () => {
