@@ -17,12 +17,15 @@ import type { KitBuilderProps } from '../../components/kits/builder-props';
 /** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
 export const KIT_DEFAULT_PAPER_GSM = 160;
 
-/** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
+/**
+ * Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. The site URL
+ * is unused since unsaved previews carry no QR code; the parameter stays so the page's call is unchanged.
+ */
 export async function kitBuilderProps(
   actor: Actor,
   query: URLSearchParams,
   activities: KitBuilderProps['activities'],
-  siteUrl: string,
+  _siteUrl: string,
 ): Promise<KitBuilderProps> {
   const models = demoModels();
   const model = demoModelById(query.get('model') ?? '') ?? demoModelById('skein-probe') ?? models[0]!;
@@ -48,7 +51,7 @@ export async function kitBuilderProps(
     copies: 1,
     ...(activity ? { activitySlug: activity.slug } : {}),
   } satisfies KitForm & KitInputs;
-  const preview = await kitPreview(initial, `${siteUrl.replace(/\/+$/, '')}/kits/new`).catch((err: unknown) => {
+  const preview = await kitPreview(initial).catch((err: unknown) => {
     if (!(err instanceof AppError)) throw err;
     initialError = err.message;
     return null;

@@ -73,11 +73,11 @@ export function kitVenue(choice: KitInputs['venue']): Venue {
   return venueCustom(parseInput(CustomVenueSchema, { lengthM: choice.lengthM, widthM: choice.widthM }, 'venue'));
 }
 
-/** The engine request for parsed inputs, the resolved model and the URL the QR code points at. */
+/** The engine request for parsed inputs, the resolved model and the URL the QR code points at (null: no page yet). */
 export function kitRequestOf(
   inputs: Omit<KitInputs, 'modelId' | 'model' | 'venue'>,
   model: Model,
-  qrUrl: string,
+  qrUrl: string | null,
 ): KitRequest {
   return parseInput(
     KitRequestSchema,

@@ -34,14 +34,10 @@ export interface KitPreview {
   timingsMs: KitTimingsMs;
 }
 
-/** Sheets and summary of an unsaved kit; the QR code points at the builder until the kit is saved. */
-export async function kitPreview(
-  inputs: KitInputs,
-  qrUrl: string,
-  options: KitOutputBuildOptions = {},
-): Promise<KitPreview> {
+/** Sheets and summary of an unsaved kit; it has no page yet, so its sheets print a note where the QR code goes. */
+export async function kitPreview(inputs: KitInputs, options: KitOutputBuildOptions = {}): Promise<KitPreview> {
   const { model } = demoModelResolve(inputs);
-  const request = kitRequestOf(inputs, model, qrUrl);
+  const request = kitRequestOf(inputs, model, null);
   const venue = kitVenue(inputs.venue);
   const { build, timingsMs } = await kitOutputBuild(request, 'svg', options);
   const size = sheetSize(request.sheetSizeId);
@@ -64,25 +60,17 @@ export async function kitPreview(
   };
 }
 
-/** One file of an unsaved kit (the builder's downloads before saving). */
-export async function kitPreviewFile(
-  inputs: KitInputs,
-  qrUrl: string,
-  output: KitOutput,
-  options: KitOutputBuildOptions = {},
-) {
+/** One file of an unsaved kit (the builder's downloads before saving), with no QR code: the kit has no page yet. */
+export async function kitPreviewFile(inputs: KitInputs, output: KitOutput, options: KitOutputBuildOptions = {}) {
   const { model } = demoModelResolve(inputs);
-  return (await kitOutputBuild(kitRequestOf(inputs, model, qrUrl), output, options)).build;
+  return (await kitOutputBuild(kitRequestOf(inputs, model, null), output, options)).build;
 }
 
 /** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */
 export function kitPatterns(input: z.infer<typeof PatternsRequestSchema>) {
   const { model } = demoModelResolve(input);
   const result = modelPatterns(model, { scaleDenominator: input.scaleDenominator, paperGsm: input.paperGsm });
-  kitScaleGuard(
-    kitRequestOf({ ...input, copies: 1, units: 'metric' }, model, 'https://kitwright.invalid/kits/new'),
-    result.pieces,
-  );
+  kitScaleGuard(kitRequestOf({ ...input, copies: 1, units: 'metric' }, model, null), result.pieces);
   return result;
 }
 

@@ -1,6 +1,7 @@
 /**
  * What a teacher asks for when generating a kit: a model, a scale, a sheet, paper weight, copies, units and
- * the kit page the QR code points at. Validated once at the boundary (API route or island).
+ * the kit page the QR code points at (none before the kit is saved). Validated once at the boundary (API route
+ * or island).
  */
 import { z } from 'zod';
 import { ModelSchema } from '../geometry/model-schema';
@@ -39,8 +40,8 @@ export const KitRequestSchema = z.object({
     .default(1),
   /** Units for printed sizes and the check square. */
   units: z.enum(['metric', 'us']).default('metric'),
-  /** The kit page the first sheet's QR code links to. */
-  qrUrl: z.string().url('qrUrl must be an absolute URL').max(300),
+  /** The kit page the first sheet's QR code links to; null for an unsaved kit, whose sheets print a note instead. */
+  qrUrl: z.string().url('qrUrl must be an absolute URL').max(300).nullable(),
 });
 export type KitRequest = z.infer<typeof KitRequestSchema>;
 export type KitRequestInput = z.input<typeof KitRequestSchema>;

@@ -80,8 +80,8 @@ export interface KitLayout {
   sheets: LaidOutSheet[];
   threads: WireBoomThread[];
   cutList: CutListRow[];
-  /** The kit page the first sheet's QR code points at. */
-  qrUrl: string;
+  /** The kit page the first sheet's QR code points at; null for an unsaved kit (a note prints instead). */
+  qrUrl: string | null;
   /** Engine version that produced the layout, printed small on each sheet. */
   engineVersion: string;
 }

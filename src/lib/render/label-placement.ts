@@ -9,12 +9,6 @@ import type { Vec2Mm } from '../geometry/types';
 /** Width of a text in mm at a size (em height) mm, bold or not. */
 export type LabelMeasure = (text: string, sizeMm: number, bold: boolean) => number;
 
-/**
- * Width estimate when no font metrics are at hand: 0.6 em per character in bold, 0.55 em in regular
- * (from memory: the mean advance of DejaVu Sans Bold and Book over digits and lower-case letters).
- */
-export const labelWidthEstimateMm: LabelMeasure = (text, sizeMm, bold) => text.length * sizeMm * (bold ? 0.6 : 0.55);
-
 /** Height of a text box as a fraction of the font size (ascender to descender), from memory: about 1.1 em. */
 export const LABEL_BOX_HEIGHT_EM = 1.1;
 

@@ -1,7 +1,7 @@
 /**
  * Everything on a sheet except the piece lines, as renderer-neutral primitives in sheet mm (y down): piece
  * labels, tab and edge numbers, alignment marks, tile guides, and the furniture (footer, check square,
- * legend, QR code). The SVG and PDF renderers draw the same scene.
+ * legend, and the QR code or, for a kit with no page yet, a note in its place). The SVG and PDF renderers draw the same scene.
  */
 import type { Piece, Vec2Mm } from '../geometry/types';
 import { placementApply, placementApplyAngle } from '../layout/placement';
@@ -11,9 +11,9 @@ import {
   labelBoxesOverlap,
   labelCandidatePoints,
   labelPointInside,
-  labelWidthEstimateMm,
 } from './label-placement';
 import type { LabelMeasure } from './label-placement';
+import { textWidthMm } from './text-width';
 import { polygonArea } from '../geometry/vec';
 import { outlineOf } from '../geometry/piece-builder';
 import {
@@ -63,13 +63,10 @@ const FOOTER_SIZE_MM = 2.8;
 
 /**
  * The scene of one sheet of a kit; pieces missing from `kit.pieces` are skipped. Label texts are placed so
- * their boxes (measured by `measure`, the renderer's font metrics or the stated estimate) do not overlap.
+ * their boxes (measured by `measure`: the renderer's font metrics, KitwrightSans's advance widths by default)
+ * do not overlap.
  */
-export function sheetScene(
-  kit: KitLayout,
-  sheet: LaidOutSheet,
-  measure: LabelMeasure = labelWidthEstimateMm,
-): SheetScene {
+export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure = textWidthMm): SheetScene {
   const scene: SheetScene = { texts: [], strokes: [], fills: [] };
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
   const labels = new SceneLabels(scene, measure);
@@ -108,7 +105,7 @@ export function sheetScene(
       },
     );
   }
-  sceneFurniture(scene, kit, sheet);
+  sceneFurniture(scene, kit, sheet, measure);
   return scene;
 }
 
@@ -348,7 +345,7 @@ function sceneTileGuides(scene: SheetScene, placement: Placement) {
   scene.texts.push(text(where, [w.xMm, b + TILE_CAPTION_MM / 2], 2.2, 'furniture', { anchor: 'start' }));
 }
 
-function sceneFurniture(scene: SheetScene, kit: KitLayout, sheet: LaidOutSheet) {
+function sceneFurniture(scene: SheetScene, kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure) {
   const first = sheet.number === 1;
   const layout = sheetFurnitureLayout(sheet.printableMm, kit.units, first, kit.cutList.length);
   const { footer, checkSquare: sq } = layout;
@@ -378,17 +375,54 @@ function sceneFurniture(scene: SheetScene, kit: KitLayout, sheet: LaidOutSheet) 
   scene.texts.push(text(hint, [sq.xMm + sq.widthMm / 2, sq.yMm + sq.heightMm / 2 + 2.5], 2.3, 'furniture'));
   if (layout.legend) sceneLegend(scene, layout.legend);
   if (layout.cutList) sceneCutList(scene, kit, layout.cutList);
-  if (layout.qr) {
+  if (layout.qr && kit.qrUrl) {
     scene.fills.push({ rects: qrRects(kit.qrUrl, layout.qr), color: TEXT_COLOR, group: 'furniture' });
     scene.texts.push(
       text(
-        'Kit page',
+        QR_CAPTION,
         [layout.qr.xMm + layout.qr.widthMm / 2, layout.qr.yMm + layout.qr.heightMm + 2],
         2.4,
         'furniture',
       ),
     );
+  } else if (layout.qr) sceneQrPreviewNote(scene, layout.qr, measure);
+}
+
+/** Caption under the QR code of a saved kit. */
+export const QR_CAPTION = 'Kit page';
+/** Printed where the QR code goes while a kit has no page yet: a heading, then a line wrapped to the box. */
+export const QR_PREVIEW_NOTE = ['Preview only', 'Save the kit to give it a QR code.'] as const;
+const QR_NOTE_HEADING_MM = 2.8;
+const QR_NOTE_SIZE_MM = 2.4;
+/** Line pitch of the note, in em (common practice, no source: about 1.3 × the size for short captions). */
+const QR_NOTE_LEADING_EM = 1.3;
+
+/** The preview note centred in the QR code's square, its second line wrapped at words to the square's width. */
+function sceneQrPreviewNote(scene: SheetScene, box: RectMm, measure: LabelMeasure) {
+  const [heading, body] = QR_PREVIEW_NOTE;
+  const lines = sceneWrapWords(body, box.widthMm, QR_NOTE_SIZE_MM, measure);
+  const pitch = QR_NOTE_SIZE_MM * QR_NOTE_LEADING_EM;
+  const headingPitch = QR_NOTE_HEADING_MM * QR_NOTE_LEADING_EM;
+  const x = box.xMm + box.widthMm / 2;
+  let y = box.yMm + (box.heightMm - headingPitch - pitch * lines.length) / 2 + headingPitch / 2;
+  scene.texts.push(text(heading, [x, y], QR_NOTE_HEADING_MM, 'furniture', { bold: true }));
+  y += (headingPitch + pitch) / 2;
+  for (const line of lines) {
+    scene.texts.push(text(line, [x, y], QR_NOTE_SIZE_MM, 'furniture'));
+    y += pitch;
   }
+}
+
+/** Words packed greedily into lines no wider than widthMm (a word longer than that gets a line of its own). */
+export function sceneWrapWords(value: string, widthMm: number, sizeMm: number, measure: LabelMeasure): string[] {
+  const lines: string[] = [];
+  for (const word of value.split(/\s+/).filter(Boolean)) {
+    const last = lines[lines.length - 1];
+    const joined = last === undefined ? word : `${last} ${word}`;
+    if (last !== undefined && measure(joined, sizeMm, false) <= widthMm) lines[lines.length - 1] = joined;
+    else lines.push(word);
+  }
+  return lines;
 }
 
 /** Column offsets of the cut-list table from its left edge, mm: part, size, quantity, sheets. */

@@ -13,9 +13,19 @@ import { pieceLines } from './piece-lines';
 import type { PiecePointTransform } from './piece-lines';
 import { sheetScene } from './sheet-scene';
 import type { SceneStroke } from './sheet-scene';
+import { textWidthMm } from './text-width';
 
-/** Font family written into SVG text; KitwrightSans is the subset shipped in assets/fonts. */
+/**
+ * Font family written into SVG text: KitwrightSans (the subset shipped in assets/fonts, whose advance widths
+ * lay the labels out) first, then DejaVu Sans, its source with the same widths. The SVG embeds no font, so a
+ * viewer without either falls back to Arial or its own sans-serif, which are narrower than DejaVu Sans.
+ */
 export const SVG_FONT_FAMILY = 'KitwrightSans, DejaVu Sans, Arial, sans-serif';
+/**
+ * Extra width allowed per label over KitwrightSans's advances, for the viewer's kerning and rounding of
+ * font sizes (common practice, no source).
+ */
+export const SVG_TEXT_WIDTH_MARGIN = 0.04;
 const DIGITS = 3;
 
 /** The SVG document of one sheet of a kit. */
@@ -41,7 +51,11 @@ export function svgSheet(kit: KitLayout, sheet: LaidOutSheet): string {
     if (lines.mountain.length) groups.mountain.push(`<path d="${svgPathOf(lines.mountain, false)}"/>`);
     if (lines.valley.length) groups.valley.push(`<path d="${svgPathOf(lines.valley, false)}"/>`);
   }
-  const scene = sheetScene(kit, sheet);
+  const scene = sheetScene(
+    kit,
+    sheet,
+    (text, sizeMm, bold) => textWidthMm(text, sizeMm, bold) * (1 + SVG_TEXT_WIDTH_MARGIN),
+  );
   for (const fill of scene.fills) {
     const d = svgPathOf(
       fill.rects.map((r) => [

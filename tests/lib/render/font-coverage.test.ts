@@ -1,56 +1,20 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, test } from 'vitest';
+import { cmapGlyphs, tableOffsets } from '../../../scripts/font-widths';
 import { LINE_STYLES } from '../../../src/lib/render/line-styles';
 import { sheetScene } from '../../../src/lib/render/sheet-scene';
 import { fixtureKit } from '../../fixtures/pieces/kit-layout';
 
 /**
- * Code points in a TrueType font's cmap, read by our own parser of the OpenType spec (Microsoft OpenType
- * 1.9, "cmap — Character to Glyph Index Mapping Table", formats 4 and 12), independent of fontTools.
+ * Code points in a TrueType font's cmap, read by the parser of the OpenType spec (Microsoft OpenType 1.9,
+ * "cmap", formats 4 and 12) that scripts/font-widths.ts uses, independent of fontTools.
  */
 function cmapCodePoints(bytes: Uint8Array): Set<number> {
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-  const numTables = view.getUint16(4);
-  let cmap = -1;
-  for (let i = 0; i < numTables; i++) {
-    const rec = 12 + 16 * i;
-    if (String.fromCharCode(...bytes.subarray(rec, rec + 4)) === 'cmap') cmap = view.getUint32(rec + 8);
-  }
-  if (cmap < 0) throw new Error('no cmap');
-  const points = new Set<number>();
-  const subtables = view.getUint16(cmap + 2);
-  for (let i = 0; i < subtables; i++) {
-    const platform = view.getUint16(cmap + 4 + 8 * i);
-    const offset = cmap + view.getUint32(cmap + 4 + 8 * i + 4);
-    const format = view.getUint16(offset);
-    if (platform !== 3 && platform !== 0) continue;
-    if (format === 4) {
-      const segX2 = view.getUint16(offset + 6);
-      const ends = offset + 14;
-      const starts = ends + segX2 + 2;
-      const deltas = starts + segX2;
-      const rangeOffsets = deltas + segX2;
-      for (let s = 0; s < segX2 / 2; s++) {
-        const end = view.getUint16(ends + 2 * s);
-        const start = view.getUint16(starts + 2 * s);
-        const delta = view.getInt16(deltas + 2 * s);
-        const ro = view.getUint16(rangeOffsets + 2 * s);
-        for (let c = start; c <= end && c !== 0xffff; c++) {
-          const glyph = ro === 0 ? (c + delta) & 0xffff : view.getUint16(rangeOffsets + 2 * s + ro + 2 * (c - start));
-          if (glyph !== 0) points.add(c);
-        }
-      }
-    } else if (format === 12) {
-      const groups = view.getUint32(offset + 12);
-      for (let g = 0; g < groups; g++) {
-        const start = view.getUint32(offset + 16 + 12 * g);
-        const end = view.getUint32(offset + 20 + 12 * g);
-        for (let c = start; c <= end; c++) points.add(c);
-      }
-    }
-  }
-  return points;
+  const cmap = tableOffsets(view).get('cmap');
+  if (cmap === undefined) throw new Error('no cmap');
+  return new Set(cmapGlyphs(view, cmap).keys());
 }
 
 /** Windows-platform (3, 1) strings of the OpenType 'name' table by name ID (OpenType 1.9, "name"). */
@@ -81,12 +45,13 @@ describe('KitwrightSans subset', () => {
   const regular = cmapCodePoints(font('KitwrightSans-Regular.ttf'));
   const bold = cmapCodePoints(font('KitwrightSans-Bold.ttf'));
 
-  test('maps every character the kit renderer prints on any sheet (metric and US, tiles, legend, QR caption)', () => {
+  test('maps every character the kit renderer prints on any sheet (metric and US, tiles, legend, QR caption, preview note)', () => {
     const printed = new Set<string>();
     for (const units of ['metric', 'us'] as const) {
-      const kit = fixtureKit('letter', units);
-      for (const sheet of kit.sheets)
-        for (const t of sheetScene(kit, sheet).texts) for (const ch of t.text) printed.add(ch);
+      const saved = fixtureKit('letter', units);
+      for (const kit of [saved, { ...saved, qrUrl: null }])
+        for (const sheet of kit.sheets)
+          for (const t of sheetScene(kit, sheet).texts) for (const ch of t.text) printed.add(ch);
     }
     for (const style of Object.values(LINE_STYLES)) for (const ch of style.label + style.action) printed.add(ch);
     const missing = [...printed].filter((ch) => !regular.has(ch.codePointAt(0)!) || !bold.has(ch.codePointAt(0)!));

@@ -4,8 +4,15 @@ import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
 import { sheetPack } from '../../../src/lib/layout/sheet-packer';
 import { SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
 import type { KitLayout } from '../../../src/lib/layout/types';
-import { LABEL_BOX_HEIGHT_EM, labelBox, labelWidthEstimateMm } from '../../../src/lib/render/label-placement';
-import { sceneLabelAbbreviations, sheetScene } from '../../../src/lib/render/sheet-scene';
+import { LABEL_BOX_HEIGHT_EM, labelBox } from '../../../src/lib/render/label-placement';
+import {
+  QR_CAPTION,
+  QR_PREVIEW_NOTE,
+  sceneLabelAbbreviations,
+  sceneWrapWords,
+  sheetScene,
+} from '../../../src/lib/render/sheet-scene';
+import { textWidthMm } from '../../../src/lib/render/text-width';
 import { demoModel } from '../geometry/fixtures';
 import { multiPolygonArea } from '../layout/polygon-area';
 
@@ -42,7 +49,7 @@ describe('sheetScene', () => {
           labelBox(
             t.atMm,
             t.angleRad,
-            labelWidthEstimateMm(t.text, t.sizeMm, t.bold),
+            textWidthMm(t.text, t.sizeMm, t.bold),
             t.sizeMm * LABEL_BOX_HEIGHT_EM,
             t.anchor,
           ).map(([x, y]) => [x, y] as [number, number]),
@@ -64,5 +71,30 @@ describe('sheetScene', () => {
       '+X anchor',
     ]);
     expect(sceneLabelAbbreviations('Body')).toEqual(['Body']);
+  });
+});
+
+describe('sheetScene furniture', () => {
+  test('prints the QR code for a saved kit and, with no kit page, a wrapped note inside the QR square instead', () => {
+    const saved = kitOf('skein-probe', 20);
+    const unsaved = { ...saved, qrUrl: null };
+    const first = saved.sheets[0]!;
+    const furnitureRects = (k: KitLayout) =>
+      sheetScene(k, first)
+        .fills.filter((f) => f.group === 'furniture')
+        .flatMap((f) => f.rects);
+    expect(furnitureRects(saved).length).toBeGreaterThan(20);
+    expect(furnitureRects(unsaved)).toEqual([]);
+    const texts = sheetScene(unsaved, first).texts.map((t) => t.text);
+    expect(texts).toContain(QR_PREVIEW_NOTE[0]);
+    expect(texts).not.toContain(QR_CAPTION);
+    expect(sheetScene(saved, first).texts.map((t) => t.text)).not.toContain(QR_PREVIEW_NOTE[0]);
+  });
+
+  test('wraps words to a width by the measure it is given', () => {
+    const lines = sceneWrapWords(QR_PREVIEW_NOTE[1], 30, 2.4, textWidthMm);
+    expect(lines.join(' ')).toBe(QR_PREVIEW_NOTE[1]);
+    expect(lines.length).toBeGreaterThan(1);
+    for (const l of lines) expect(textWidthMm(l, 2.4, false)).toBeLessThanOrEqual(30);
   });
 });

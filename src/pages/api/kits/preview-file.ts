@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { ANY_ACCOUNT } from '../../../lib/auth/actor';
-import { siteUrl } from '../../../lib/auth/site-url';
 import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitRequestOf } from '../../../lib/kit/kit-inputs';
 import { demoModelResolve } from '../../../lib/kit/demo-models.server';
@@ -20,19 +19,18 @@ const PreviewFileSchema = z.object({
 });
 
 /**
- * One file of an unsaved kit, for the builder's downloads before saving (its QR code points at the builder).
+ * One file of an unsaved kit, for the builder's downloads before saving (no QR code: the kit has no page yet).
  * With `Accept: application/x-ndjson` the build streams its stages and the file comes base64 in the last line.
  */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
   const { inputs, output, sheet } = parseInput(PreviewFileSchema, await readJson(context.request, 200_000), 'download');
-  const qrUrl = `${siteUrl(context.url).replace(/\/+$/, '')}/kits/new`;
-  const request = kitRequestOf(inputs, demoModelResolve(inputs).model, qrUrl);
+  const request = kitRequestOf(inputs, demoModelResolve(inputs).model, null);
   const sheetParam = { sheet: sheet === undefined ? null : String(sheet) };
   if (!progressWanted(context.request)) {
-    return kitFileResponse(context.request, request, await kitPreviewFile(inputs, qrUrl, output), output, sheetParam);
+    return kitFileResponse(context.request, request, await kitPreviewFile(inputs, output), output, sheetParam);
   }
   return progressResponse(context.request, context.locals.requestId, async (onStage, signal): Promise<StreamedFile> => {
-    const file = kitFile(request, await kitPreviewFile(inputs, qrUrl, output, { onStage, signal }), output, sheetParam);
+    const file = kitFile(request, await kitPreviewFile(inputs, output, { onStage, signal }), output, sheetParam);
     return { name: file.name, type: file.type, base64: Buffer.from(file.body).toString('base64') };
   });
 });

@@ -1,5 +1,4 @@
 import { ANY_ACCOUNT } from '../../../lib/auth/actor';
-import { siteUrl } from '../../../lib/auth/site-url';
 import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitPreview } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
@@ -14,9 +13,8 @@ import { parseInput } from '../../../lib/validation';
  */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
   const inputs = parseInput(KitInputsSchema, await readJson(context.request, 200_000), 'kit');
-  const qrUrl = `${siteUrl(context.url).replace(/\/+$/, '')}/kits/new`;
-  if (!progressWanted(context.request)) return kitPreview(inputs, qrUrl);
+  if (!progressWanted(context.request)) return kitPreview(inputs);
   return progressResponse(context.request, context.locals.requestId, (onStage, signal) =>
-    kitPreview(inputs, qrUrl, { onStage, signal }),
+    kitPreview(inputs, { onStage, signal }),
   );
 });
