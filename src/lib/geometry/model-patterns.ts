@@ -36,11 +36,6 @@ export type PatternOptions = z.infer<typeof PatternOptionsSchema>;
 export interface ModelPatterns {
   pieces: Piece[];
   threads: WireBoomThread[];
-  /**
-   * Wall facets of the body as its pieces unfold it: a cylinder's may be fewer than model.body.facets
-   * (bodyPatternFacets keeps glue-ring teeth TOOTH_BASE_MIN_MM wide); the mesh keeps the model's count.
-   */
-  bodyFacets: number;
 }
 
 /** Every piece and thread of a parsed model at options.scaleDenominator on options.paperGsm paper. */
@@ -53,7 +48,7 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
   const pieces: Piece[] = [...body.pieces];
   // Marks for parts glued onto a body face go on whichever body piece holds that face.
   const markFace = (ref: string, pointMm: Vec3Mm, num: number) => {
-    const spot = body.faceSpotAt(ref, pointMm);
+    const spot = body.faceSpots.get(ref)!;
     spot.piece.edgeLabels.push(panelBodyLabel(spot.frame, pointMm, num));
   };
   const threads: WireBoomThread[] = [];
@@ -156,5 +151,5 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
       }
     }
   });
-  return { pieces, threads, bodyFacets: body.facets };
+  return { pieces, threads };
 }

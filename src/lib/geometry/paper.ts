@@ -11,13 +11,6 @@ export const TAB_DEPTH_MIN_MM = 3;
 /** Smallest piece the solver accepts, mm across (common practice, no source: scissors can cut it). */
 export const PIECE_SIZE_MIN_MM = 5;
 /**
- * Narrowest base a glue-ring tooth (or a facet's wall tab) may have on paper, mm; a cylinder's pattern drops
- * facets until its walls are at least this wide (bodyPatternFacets). 5 mm, the same as PIECE_SIZE_MIN_MM:
- * each tooth is cut free by two snips and pressed by a fingertip, and at 5 mm its tip keeps 1.5 mm
- * (BODY_RING_TIP_FRACTION), still a flap rather than a sliver. Common practice, no source.
- */
-export const TOOTH_BASE_MIN_MM = 5;
-/**
  * Largest gap between a true arc and its polyline, mm: half a typical 0.1 mm printed line, so the
  * polyline cannot be told from the arc on paper (common practice, no source).
  */
