@@ -17,15 +17,11 @@ import type { KitBuilderProps } from '../../components/kits/builder-props';
 /** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
 export const KIT_DEFAULT_PAPER_GSM = 160;
 
-/**
- * Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. The site URL
- * is unused since unsaved previews carry no QR code; the parameter stays so the page's call is unchanged.
- */
+/** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
 export async function kitBuilderProps(
   actor: Actor,
   query: URLSearchParams,
   activities: KitBuilderProps['activities'],
-  _siteUrl: string,
 ): Promise<KitBuilderProps> {
   const models = demoModels();
   const model = demoModelById(query.get('model') ?? '') ?? demoModelById('skein-probe') ?? models[0]!;

@@ -60,10 +60,14 @@ export async function kitPreview(inputs: KitInputs, options: KitOutputBuildOptio
   };
 }
 
-/** One file of an unsaved kit (the builder's downloads before saving), with no QR code: the kit has no page yet. */
+/**
+ * One file of an unsaved kit (the builder's downloads before saving), with no QR code: the kit has no page yet.
+ * Returns the request it was built from too, which names the file.
+ */
 export async function kitPreviewFile(inputs: KitInputs, output: KitOutput, options: KitOutputBuildOptions = {}) {
   const { model } = demoModelResolve(inputs);
-  return (await kitOutputBuild(kitRequestOf(inputs, model, null), output, options)).build;
+  const request = kitRequestOf(inputs, model, null);
+  return { request, build: (await kitOutputBuild(request, output, options)).build };
 }
 
 /** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */

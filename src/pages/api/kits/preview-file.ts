@@ -1,8 +1,6 @@
 import { z } from 'zod';
 import { ANY_ACCOUNT } from '../../../lib/auth/actor';
 import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
-import { kitRequestOf } from '../../../lib/kit/kit-inputs';
-import { demoModelResolve } from '../../../lib/kit/demo-models.server';
 import { kitFile, kitFileResponse } from '../../../lib/kit/kit-files.server';
 import { kitPreviewFile } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
@@ -24,13 +22,14 @@ const PreviewFileSchema = z.object({
  */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
   const { inputs, output, sheet } = parseInput(PreviewFileSchema, await readJson(context.request, 200_000), 'download');
-  const request = kitRequestOf(inputs, demoModelResolve(inputs).model, null);
   const sheetParam = { sheet: sheet === undefined ? null : String(sheet) };
   if (!progressWanted(context.request)) {
-    return kitFileResponse(context.request, request, await kitPreviewFile(inputs, output), output, sheetParam);
+    const { request, build } = await kitPreviewFile(inputs, output);
+    return kitFileResponse(context.request, request, build, output, sheetParam);
   }
   return progressResponse(context.request, context.locals.requestId, async (onStage, signal): Promise<StreamedFile> => {
-    const file = kitFile(request, await kitPreviewFile(inputs, output, { onStage, signal }), output, sheetParam);
+    const { request, build } = await kitPreviewFile(inputs, output, { onStage, signal });
+    const file = kitFile(request, build, output, sheetParam);
     return { name: file.name, type: file.type, base64: Buffer.from(file.body).toString('base64') };
   });
 });
