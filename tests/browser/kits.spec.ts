@@ -101,18 +101,28 @@ describe('kit builder', () => {
     const { page, errors } = await signedIn();
     await page.goto('/kits/new?model=skein-probe');
     await hydrated(page);
+    const idle = () =>
+      page.waitForFunction(
+        () => document.querySelector('[data-testid="build-status"]')?.getAttribute('data-building') === 'false',
+      );
+    // Thirty teams take the server several hundred milliseconds a build, long enough to watch and cancel. A
+    // title of its own (it is printed, so it is in the content hash) keeps the server's cache from answering.
+    await page.getByLabel('Title on the sheets (optional)').fill(`Cancel check ${Date.now()}`);
+    await page.getByLabel('Copies (one per team)').fill('30');
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="kit-summary"]')?.textContent?.includes('for 30 teams'),
+    );
+    await idle();
     const before = await sheetsText(page);
-    // Twelve teams at 1:19 take the server several hundred milliseconds, long enough to watch and cancel.
+    // One change, built at once (Enter), so exactly one build runs while the test watches it.
     await page.getByLabel('Any scale 1 :').fill('19');
-    await page.getByLabel('Copies (one per team)').fill('12');
+    await page.getByLabel('Any scale 1 :').press('Enter');
     await page.locator('[data-testid="build-progress"] [data-stage="patterns"][data-state="done"]').waitFor();
     expect(await page.getByRole('progressbar', { name: 'Building the sheets' }).getAttribute('aria-valuenow')).not.toBe(
       '0',
     );
     await page.getByRole('button', { name: 'Cancel' }).click();
-    await page.waitForFunction(
-      () => document.querySelector('[data-testid="build-status"]')?.getAttribute('data-building') === 'false',
-    );
+    await idle();
     expect(await sheetsText(page)).toBe(before);
     expect(await page.getByTestId('build-status').getByRole('alert').count()).toBe(0);
     expect(await page.getByTestId('build-status').textContent()).toContain('Cancelled.');
@@ -120,7 +130,7 @@ describe('kit builder', () => {
     await page.waitForFunction(
       () => document.querySelector('[data-testid="kit-summary"]')?.getAttribute('data-scale') === '19',
     );
-    expect(await page.getByTestId('kit-summary').textContent()).toContain('for 12 teams');
+    expect(await page.getByTestId('kit-summary').textContent()).toContain('for 30 teams');
     expect(errors).toEqual([]);
   });
 
