@@ -23,6 +23,8 @@ interface Counts {
 }
 const total: Counts = { passed: 0, failed: 0, skipped: 0 };
 const reportDir = join(PROJECT_ROOT, '.data', `test-reports-${process.env.KW_TEST_PORT ?? 4322}`);
+/** `npm test -- tests/api/kits.test.ts …`: run only these vitest files (lint and type checks skipped). */
+const only = process.argv.slice(2);
 
 function step(name: string, command: string, args: string[], env: NodeJS.ProcessEnv = process.env): boolean {
   console.log(`\n=== ${name} ===`);
@@ -43,7 +45,16 @@ async function vitest(name: string, config: string, env: NodeJS.ProcessEnv): Pro
   rmSync(out, { force: true });
   const child = spawn(
     'npx',
-    ['vitest', 'run', '--config', config, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`],
+    [
+      'vitest',
+      'run',
+      '--config',
+      config,
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${out}`,
+      ...(only.length > 0 ? ['--passWithNoTests', ...only] : []),
+    ],
     {
       cwd: PROJECT_ROOT,
       stdio: 'inherit',
@@ -82,8 +93,11 @@ async function main(): Promise<void> {
   const smtpPort = Number(process.env.KW_TEST_SMTP_PORT ?? 2526);
   const mailHttpPort = Number(process.env.KW_TEST_MAIL_HTTP_PORT ?? 2581);
 
-  step('lint (eslint + prettier)', 'npm', ['run', '--silent', 'lint']);
-  step('types (astro check)', 'npm', ['run', '--silent', 'check']);
+  if (only.length > 0) console.log(`[test] only ${only.join(' ')}: lint and type checks skipped`);
+  else {
+    step('lint (eslint + prettier)', 'npm', ['run', '--silent', 'lint']);
+    step('types (astro check)', 'npm', ['run', '--silent', 'check']);
+  }
 
   await databaseUp();
   const dbUrl = databaseUrl(TEST_DATABASE);
