@@ -1,4 +1,4 @@
-import type { ZodError, ZodType, ZodTypeDef } from 'zod';
+import { z, type RefinementCtx, type ZodError, type ZodType, type ZodTypeAny, type ZodTypeDef } from 'zod';
 import { InputError, type FieldErrors } from './errors';
 
 /** Turns zod issues into field errors keyed by dotted path ("" for the whole input). */
@@ -25,4 +25,17 @@ export function parseInput<Out, In>(schema: ZodType<Out, ZodTypeDef, In>, input:
     `The ${what} has ${result.error.issues.length === 1 ? 'a problem' : `${result.error.issues.length} problems`}. ${where}${first?.message ?? ''}`.trim(),
     fields,
   );
+}
+
+/**
+ * `schema` followed by a cross-field check that runs only once every check of `schema` passed. zod 3 runs a
+ * `.superRefine` on data whose bounds already failed (a "dirty" result: `facets: 1e308` fails `.max(256)` and
+ * still reaches the refinement), so a refinement that loops over a count would do the very work the bound was
+ * there to stop. `.pipe()` stops at the first failed bound; use this wherever a refinement iterates.
+ */
+export function refineValid<T extends ZodTypeAny>(
+  schema: T,
+  check: (value: z.output<T>, ctx: RefinementCtx) => void,
+): z.ZodPipeline<T, z.ZodEffects<z.ZodType<z.output<T>>, z.output<T>>> {
+  return schema.pipe(z.custom<z.output<T>>(() => true).superRefine(check));
 }

@@ -6,6 +6,7 @@
  * over locations was dropped in 2015 (from memory: ISO 14644-1:2015, A.5–A.6).
  */
 import { z } from 'zod';
+import { refineValid } from '../validation';
 import {
   ISO_14644_CLASSES,
   ISO_14644_SIZES_UM,
@@ -39,28 +40,29 @@ export const CleanroomSampleSchema = z
   })
   .strict();
 
-export const CleanroomInputSchema = z
-  .object({
-    /** Floor area of the room or clean box, m². */
-    floorAreaM2: z.number().finite().positive().max(CLEANROOM_MAX_AREA_M2),
-    /** Particle sizes the counter reports, µm, from the ISO 14644-1 list, increasing. */
-    sizesUm: z.array(size).min(1).max(ISO_14644_SIZES_UM.length),
-    /** 'cumulative': each count is of particles ≥ that size (ISO's way); 'differential': between this size and the next. */
-    countsAre: z.enum(['cumulative', 'differential']).default('cumulative'),
-    locations: z
-      .array(
-        z
-          .object({
-            label: z.string().trim().min(1).max(60),
-            samples: z.array(CleanroomSampleSchema).min(1).max(CLEANROOM_MAX_SAMPLES_PER_LOCATION),
-          })
-          .strict(),
-      )
-      .min(1)
-      .max(CLEANROOM_MAX_LOCATIONS),
-  })
-  .strict()
-  .superRefine((v, ctx) => {
+export const CleanroomInputSchema = refineValid(
+  z
+    .object({
+      /** Floor area of the room or clean box, m². */
+      floorAreaM2: z.number().finite().positive().max(CLEANROOM_MAX_AREA_M2),
+      /** Particle sizes the counter reports, µm, from the ISO 14644-1 list, increasing. */
+      sizesUm: z.array(size).min(1).max(ISO_14644_SIZES_UM.length),
+      /** 'cumulative': each count is of particles ≥ that size (ISO's way); 'differential': between this size and the next. */
+      countsAre: z.enum(['cumulative', 'differential']).default('cumulative'),
+      locations: z
+        .array(
+          z
+            .object({
+              label: z.string().trim().min(1).max(60),
+              samples: z.array(CleanroomSampleSchema).min(1).max(CLEANROOM_MAX_SAMPLES_PER_LOCATION),
+            })
+            .strict(),
+        )
+        .min(1)
+        .max(CLEANROOM_MAX_LOCATIONS),
+    })
+    .strict(),
+  (v, ctx) => {
     if (v.sizesUm.some((s, i) => i > 0 && !(s > v.sizesUm[i - 1]!))) {
       ctx.addIssue({ code: 'custom', path: ['sizesUm'], message: 'list each size once, smallest first' });
     }
@@ -75,7 +77,8 @@ export const CleanroomInputSchema = z
         }
       }),
     );
-  });
+  },
+);
 export type CleanroomInput = z.infer<typeof CleanroomInputSchema>;
 
 export interface CleanroomResult {

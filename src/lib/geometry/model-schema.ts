@@ -3,6 +3,7 @@
  * keep working when the schema grows. Types come from the schema (z.infer) so they cannot drift.
  */
 import { z } from 'zod';
+import { refineValid } from '../validation';
 import { bodyFaceSizesM } from './body-shape';
 
 export const MODEL_SCHEMA_VERSION = 1;
@@ -70,9 +71,9 @@ const CylinderBodySchema = z.object({
     .max(CYLINDER_FACETS_MAX, `a cylinder has at most ${CYLINDER_FACETS_MAX} facets`),
 });
 
-export const BodySchema = z
-  .discriminatedUnion('kind', [PrismBodySchema, BoxBodySchema, CylinderBodySchema])
-  .superRefine((b, ctx) => {
+export const BodySchema = refineValid(
+  z.discriminatedUnion('kind', [PrismBodySchema, BoxBodySchema, CylinderBodySchema]),
+  (b, ctx) => {
     if (b.kind !== 'box') return;
     const dims = [b.widthM, b.depthM, b.heightM].filter((d) => d !== undefined).length;
     if ((b.smallsat !== undefined) === dims > 0 || (b.smallsat === undefined && dims < 3)) {
@@ -81,7 +82,8 @@ export const BodySchema = z
         message: 'a box needs either a smallsat size (e.g. "3U") or all of widthM, depthM and heightM, not both',
       });
     }
-  });
+  },
+);
 
 /** A body face: the top, the bottom, or side wall i (0-based, side 0 faces +x). */
 export const FaceRefSchema = z
@@ -150,8 +152,9 @@ const AppendageSchema = z.discriminatedUnion('kind', [
   }),
 ]);
 
-export const ModelSchema = z
-  .object({
+/** The cross-field checks walk every face (a count bounded above) and appendage: they run only on a bounded model. */
+export const ModelSchema = refineValid(
+  z.object({
     schemaVersion: z.literal(MODEL_SCHEMA_VERSION, {
       errorMap: () => ({ message: `schemaVersion must be ${MODEL_SCHEMA_VERSION}` }),
     }),
@@ -161,8 +164,8 @@ export const ModelSchema = z
       .array(AppendageSchema)
       .max(APPENDAGES_MAX, `a model has at most ${APPENDAGES_MAX} appendages`)
       .default([]),
-  })
-  .superRefine((model, ctx) => {
+  }),
+  (model, ctx) => {
     const faces = bodyFaceSizesM(model.body);
     const seen = new Set<string>();
     model.appendages.forEach((a, i) => {
@@ -217,7 +220,8 @@ export const ModelSchema = z
         });
       }
     });
-  });
+  },
+);
 
 export type Model = z.infer<typeof ModelSchema>;
 export type ModelInput = z.input<typeof ModelSchema>;

@@ -94,3 +94,22 @@ describe('ModelSchema', () => {
     );
   });
 });
+
+describe('ModelSchema bounds stop the work before it starts', () => {
+  const twin = { kind: 'wire-boom', id: 'a', label: 'A', face: 'top', lengthM: 1 };
+  test('a facet count above the bound is the only issue: the per-face checks never ran', () => {
+    // Before: the refinement walked 1000 faces and also reported the duplicate id.
+    const m = messages({
+      ...base,
+      body: { kind: 'cylinder', diameterM: 1, heightM: 1, facets: 1000 },
+      appendages: [twin, twin],
+    });
+    expect(m).toEqual(['a cylinder has at most 256 facets']);
+  });
+
+  test('facets: 1e308 (a whole number zod accepts as int) answers the bound instead of looping', () => {
+    expect(messages({ ...base, body: { kind: 'cylinder', diameterM: 1, heightM: 1, facets: 1e308 } })).toEqual([
+      'a cylinder has at most 256 facets',
+    ]);
+  });
+});
