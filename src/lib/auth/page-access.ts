@@ -17,12 +17,6 @@ export function pageAccess(actor: Actor, audiences: readonly Audience[], url: UR
   return { allowed: false, status: 403 };
 }
 
-/** A same-site path to go to after sign-in, or null for anything else (no open redirects). */
-export function nextPathSafe(value: string | null): string | null {
-  if (!value || !value.startsWith('/') || value.startsWith('//') || value.includes('\\')) return null;
-  return value;
-}
-
 /** Where an account lands after signing in when no next page was asked for. */
 export function roleHome(role: Role): string {
   return role === 'teacher' ? '/classes' : role === 'admin' ? '/admin/accounts' : '/account';
