@@ -1,18 +1,19 @@
 /**
  * A placed piece as the lines a renderer draws, in sheet mm (y down): the cut outline, the mountain and
- * valley folds and the glue-tab tints, clipped to the tile window when the piece is tiled. The renderer
+ * valley folds and the glue-tab tints, clipped to the tile window when the piece is tiled (the cut outline
+ * then closes along the window edge, so every tile is a piece a cutting machine frees). The renderer
  * supplies the point transform (the SVG renderer's goes through svg-path-commander, the PDF's through
  * placementApply), so both draw the same lines.
  */
 import type { Piece, Vec2Mm } from '../geometry/types';
 import type { Placement } from '../layout/types';
-import { segmentClipPolyline } from './segment-clip';
+import { segmentClipOutline, segmentClipPolyline } from './segment-clip';
 
 /** Maps flat points (mm, y up) of one piece to sheet points (mm, y down), order kept. */
 export type PiecePointTransform = (polylines: readonly (readonly Vec2Mm[])[]) => Vec2Mm[][];
 
 export interface PieceLines {
-  /** Open polylines (closed outlines repeat their first point). */
+  /** Closed outlines, each repeating its first point: the piece's, or each part of it inside its tile. */
   cut: Vec2Mm[][];
   mountain: Vec2Mm[][];
   valley: Vec2Mm[][];
@@ -31,7 +32,7 @@ export function pieceLines(piece: Piece, placement: Placement, transform: PieceP
   const placed = transform(input);
   const window = placement.tile?.windowMm;
   const lines: PieceLines = {
-    cut: segmentClipPolyline(placed[0] ?? [], true, window),
+    cut: segmentClipOutline(placed[0] ?? [], window),
     mountain: [],
     valley: [],
     tabs: [],

@@ -1,8 +1,10 @@
 /**
- * Cutting lines down to a tile's window: Liang–Barsky parametric clipping (Liang & Barsky, "A new concept
- * and method for line clipping", ACM TOG 3(1), 1984). Only the parts of the original lines inside the window
- * are kept, so a tile's cut group never gains a cut along the window edge.
+ * Lines and outlines down to a tile's window. Fold lines: Liang–Barsky parametric clipping (Liang & Barsky,
+ * "A new concept and method for line clipping", ACM TOG 3(1), 1984), keeping only the parts inside the window.
+ * Cut outlines: the piece's area intersected with the window by polygon-clipping, so each tile's cut contour
+ * is closed (it runs along the window edge where the tile ends) and a cutting machine frees the tile.
  */
+import polygonClipping from 'polygon-clipping';
 import type { Vec2Mm } from '../geometry/types';
 import type { RectMm } from '../layout/types';
 
@@ -56,4 +58,23 @@ export function segmentClipPolyline(points: readonly Vec2Mm[], closed: boolean, 
   }
   if (current.length > 1) out.push(current);
   return out;
+}
+
+/**
+ * The closed outlines of a closed polygon's area inside the rectangle (several when the window cuts a
+ * concave piece in parts), each repeating its first point at the end; no window returns the outline itself.
+ */
+export function segmentClipOutline(points: readonly Vec2Mm[], rect?: RectMm): Vec2Mm[][] {
+  if (!rect) return segmentClipPolyline(points, true);
+  if (points.length < 3) return [];
+  const { xMm: x, yMm: y, widthMm: w, heightMm: h } = rect;
+  const window: [number, number][] = [
+    [x, y],
+    [x + w, y],
+    [x + w, y + h],
+    [x, y + h],
+  ];
+  const area = polygonClipping.intersection([points.map((p): [number, number] => [p[0], p[1]])], [window]);
+  // Outer rings and holes alike are cut lines; polygon-clipping closes each ring by repeating its first point.
+  return area.flatMap((polygon) => polygon.map((ring) => ring.map((p): Vec2Mm => [p[0], p[1]])));
 }

@@ -39,18 +39,16 @@ export function svgSheet(kit: KitLayout, sheet: LaidOutSheet): string {
     labels: [] as string[],
     furniture: [] as string[],
   };
-  for (const placement of sheet.placements) {
+  sheet.placements.forEach((placement, index) => {
     const piece = byId.get(placement.pieceId);
-    if (!piece) continue;
+    if (!piece) return;
     const lines = pieceLines(piece, placement, svgPlacementTransform(placement));
-    const clip = placement.tile
-      ? ` clip-path="url(#w${sheet.number}-${placement.tile.row}-${placement.tile.col})"`
-      : '';
+    const clip = placement.tile ? ` clip-path="url(#${svgTileClipId(sheet, index)})"` : '';
     if (lines.tabs.length) groups.artwork.push(`<path d="${svgPathOf(lines.tabs, true)}"${clip}/>`);
     if (lines.cut.length) groups.cut.push(`<path d="${svgPathOf(lines.cut, false)}"/>`);
     if (lines.mountain.length) groups.mountain.push(`<path d="${svgPathOf(lines.mountain, false)}"/>`);
     if (lines.valley.length) groups.valley.push(`<path d="${svgPathOf(lines.valley, false)}"/>`);
-  }
+  });
   const scene = sheetScene(
     kit,
     sheet,
@@ -77,12 +75,11 @@ export function svgSheet(kit: KitLayout, sheet: LaidOutSheet): string {
       `<text x="${x}" y="${y}" font-size="${svgNumber(t.sizeMm)}" text-anchor="${t.anchor}"${weight}${rotate}>${svgEscape(t.text)}</text>`,
     );
   }
-  const clips = sheet.placements
-    .filter((p): p is Placement & { tile: NonNullable<Placement['tile']> } => Boolean(p.tile))
-    .map((p) => {
-      const w = p.tile.windowMm;
-      return `<clipPath id="w${sheet.number}-${p.tile.row}-${p.tile.col}"><rect x="${svgNumber(w.xMm)}" y="${svgNumber(w.yMm)}" width="${svgNumber(w.widthMm)}" height="${svgNumber(w.heightMm)}"/></clipPath>`;
-    });
+  const clips = sheet.placements.flatMap((p, index) => {
+    const w = p.tile?.windowMm;
+    if (!w) return [];
+    return `<clipPath id="${svgTileClipId(sheet, index)}"><rect x="${svgNumber(w.xMm)}" y="${svgNumber(w.yMm)}" width="${svgNumber(w.widthMm)}" height="${svgNumber(w.heightMm)}"/></clipPath>`;
+  });
   const stroke = (kind: keyof typeof LINE_STYLES) => {
     const s = LINE_STYLES[kind];
     const dash = s.dashMm.length ? ` stroke-dasharray="${s.dashMm.join(' ')}"` : '';
@@ -103,6 +100,14 @@ export function svgSheet(kit: KitLayout, sheet: LaidOutSheet): string {
     `<g id="furniture" fill="${TEXT_COLOR}" font-family="${SVG_FONT_FAMILY}" dominant-baseline="central">${groups.furniture.join('')}</g>`,
     `</svg>`,
   ].join('\n');
+}
+
+/**
+ * The id of a tiled placement's clip path: unique within the sheet's document because it names the placement
+ * by its index (two pieces, or two copies of one, can show the same tile row and column on a sheet).
+ */
+function svgTileClipId(sheet: LaidOutSheet, placementIndex: number): string {
+  return `tile-window-${sheet.number}-${placementIndex + 1}`;
 }
 
 /** The point transform of a placement, evaluated by svg-path-commander's transformPath (one call per piece). */
