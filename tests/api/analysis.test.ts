@@ -266,3 +266,56 @@ describe('POST /api/analysis/psd-profile, orbit-eclipse, equilibrium-temperature
     expectError(await postJson('orbit-eclipse', { altitudeKm: 400, padding: 'x'.repeat(20_000) }), 413, 'too_large');
   });
 });
+
+describe('POST /api/analysis/deployment', () => {
+  const trials = (full: number, n: number) =>
+    Array.from({ length: n }, (_, i) => ({ outcome: i < full ? 'full' : 'none', timeS: 1.5, finalLengthCm: 30 }));
+
+  it('answers the rate, both intervals, the plain-words sentence and a saved result', async () => {
+    const a = await postJson('deployment', { designs: [{ label: 'Spring boom', trials: trials(17, 20) }] });
+    expect(a.status).toBe(200);
+    const d = a.body.result.designs[0];
+    // Newcombe 1998a method 3 (Wilson) for 17/20, by its closed form: 0.6396–0.9476.
+    expect(d.wilson.lower).toBeCloseTo(0.6396, 4);
+    expect(d.wilson.upper).toBeCloseTo(0.9476, 4);
+    expect(d.clopperPearson.lower).toBeLessThan(d.wilson.lower);
+    expect(d.summary).toMatch(/^17 of 20 deployed fully: 85 %, .* between 64 % and 95 %\.$/);
+    expect(a.body.savedResult.tool).toBe('deployment');
+    expect(a.body.savedResult.plot.series[0].points).toHaveLength(20);
+  });
+
+  it('compares two designs (Newcombe 1998b, Table II (a): 56/70 − 48/80 → 0.0524 to 0.3339)', async () => {
+    const a = await postJson('deployment', {
+      designs: [
+        { label: 'A', counts: { trials: 70, fullyDeployed: 56 } },
+        { label: 'B', counts: { trials: 80, fullyDeployed: 48 } },
+      ],
+    });
+    expect(a.status).toBe(200);
+    expect(a.body.result.comparison.lower).toBeCloseTo(0.0524, 4);
+    expect(a.body.result.comparison.upper).toBeCloseTo(0.3339, 4);
+  });
+
+  it('answers 400 for fewer than 2 trials, more successes than trials and NaN, naming the field', async () => {
+    const one = await postJson('deployment', { designs: [{ label: 'A', trials: trials(1, 1) }] });
+    expectError(one, 400, 'invalid_input', /at least 2/);
+    expect(one.body.error.fields['designs.0.trials']).toBeTruthy();
+    const over = await postJson('deployment', { designs: [{ label: 'A', counts: { trials: 15, fullyDeployed: 17 } }] });
+    expectError(over, 400, 'invalid_input', /more than the 15 trials/);
+    expect(over.body.error.fields['designs.0.counts.fullyDeployed']).toBeTruthy();
+    const nan = await post(
+      'deployment',
+      '{"designs":[{"label":"A","trials":[{"outcome":"full","timeS":NaN},{"outcome":"full"}]}]}',
+      'application/json',
+    );
+    expectError(nan, 400, 'invalid_input', /not valid JSON/);
+  });
+
+  it('answers 413 for a body over its cap', async () => {
+    const a = await postJson('deployment', {
+      designs: [{ label: 'A', trials: trials(2, 2) }],
+      padding: 'x'.repeat(250_000),
+    });
+    expectError(a, 413, 'too_large');
+  });
+});

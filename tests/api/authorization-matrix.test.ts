@@ -121,9 +121,16 @@ const ROWS: Row[] = [
     expect: { anonymous: 401, classSession: 200, teacher: 403, otherTeacher: 403, coordinator: 403, admin: 403 },
   },
   // Data tools (analysis): open to anyone; an empty body is invalid input
-  ...['cleanroom', 'equilibrium-temperature', 'magnetic', 'orbit-eclipse', 'psd-profile', 'thermal', 'vibration'].map(
-    (tool): Row => ({ route: `/api/analysis/${tool}`, method: 'POST', body: {}, expect: all(400) }),
-  ),
+  ...[
+    'cleanroom',
+    'deployment',
+    'equilibrium-temperature',
+    'magnetic',
+    'orbit-eclipse',
+    'psd-profile',
+    'thermal',
+    'vibration',
+  ].map((tool): Row => ({ route: `/api/analysis/${tool}`, method: 'POST', body: {}, expect: all(400) })),
   // Models, patterns and the scale solver
   { route: '/api/models', method: 'GET', expect: all(200) },
   { route: '/api/models/patterns', method: 'POST', body: {}, expect: { ...all(400), anonymous: 401 } },

@@ -2,9 +2,12 @@
  * Benchmark (a script, not a test): Welch PSD of a one-hour, 100 Hz, three-axis record (360 000 samples per
  * axis) with the vibration tool's default segment length, and the whole vibration analysis of the same
  * record. Prints min/median/max ms over the runs after warm-up and the peak resident set size.
- * Target: PSD median ≤ 300 ms on the 2-core reference machine.
+ * Target: PSD median ≤ 300 ms on the 2-core reference machine. Then the deploy-test and interference tools at
+ * their largest accepted inputs (target: median ≤ 20 ms each).
  */
 import { performance } from 'node:perf_hooks';
+import { DEPLOYMENT_MAX_TRIALS, DeploymentInputSchema, deploymentAnalyse } from '../../src/lib/analysis/deployment';
+import { deploymentSavedResult } from '../../src/lib/analysis/saved-result-tools';
 import { VibrationInputSchema, vibrationAnalyse } from '../../src/lib/analysis/vibration';
 import { vibrationInputFromCsv } from '../../src/lib/analysis/vibration-csv';
 import { welchDefaultSegmentLength, welchPsd } from '../../src/lib/analysis/welch-psd';
@@ -78,3 +81,20 @@ measure(
 );
 const peak = Math.max(peakRss, process.resourceUsage().maxRSS * 1024);
 console.log(`peak RSS overall (CSV text and parsed rows included): ${(peak / 1_048_576).toFixed(0)} MiB`);
+
+// Deploy test, its largest accepted input: two designs of DEPLOYMENT_MAX_TRIALS trials each, every trial
+// with a time and a length. Target: median ≤ 20 ms for parse + analysis + saved result.
+const deploymentBody = {
+  designs: ['Spring boom', 'Rubber-band boom'].map((label, k) => ({
+    label,
+    trials: Array.from({ length: DEPLOYMENT_MAX_TRIALS }, (_, i) => ({
+      outcome: (i * 7 + k) % 10 < 8 ? 'full' : (i + k) % 2 ? 'partial' : 'none',
+      timeS: 0.5 + ((i * 13) % 40) / 10,
+      finalLengthCm: 20 + ((i * 17) % 150) / 10,
+    })),
+  })),
+};
+console.log(`deployment: ${JSON.stringify(deploymentBody).length.toLocaleString('en-US')} bytes of JSON`);
+measure('deployment: parse, analyse, saved result (2 × 1000 trials)', () => {
+  deploymentSavedResult(deploymentAnalyse(DeploymentInputSchema.parse(deploymentBody)));
+});

@@ -3,6 +3,7 @@
  * plot that tells the tool's story and downsamples it to the saved bounds.
  */
 import type { CleanroomResult } from './cleanroom';
+import type { DeploymentResult } from './deployment';
 import type { EquilibriumTemperatureInput, EquilibriumTemperatureResult } from './equilibrium-temperature';
 import type { MagneticResult } from './magnetic';
 import type { OrbitEclipseInput, OrbitEclipseResult } from './orbit-eclipse';
@@ -165,6 +166,54 @@ export function equilibriumTemperatureSavedResult(
       xLabel: 'Distance from the Sun (AU)',
       yLabel: 'Temperature (°C)',
       series: [series('equilibrium', [[input.distanceAu, r.temperatureC]])],
+    },
+  );
+}
+
+/** Most points per series of the deployment plot: a running rate needs no more to be drawn. */
+export const DEPLOYMENT_PLOT_MAX_POINTS = 200;
+
+/** Every k-th point of a running series, the last one always kept, at most DEPLOYMENT_PLOT_MAX_POINTS. */
+function seriesThin<T>(points: T[]): T[] {
+  const step = Math.ceil(points.length / DEPLOYMENT_PLOT_MAX_POINTS);
+  return points.filter((_, i) => i % step === 0 || i === points.length - 1).slice(-DEPLOYMENT_PLOT_MAX_POINTS);
+}
+
+/**
+ * Saved form of deployment trials: each design's running success rate (%) trial by trial with its Wilson
+ * interval as two bounding lines (thinned to DEPLOYMENT_PLOT_MAX_POINTS); a design given as counts only is
+ * one point at its last trial. The running series live in the plot only, not again in the result.
+ */
+export function deploymentSavedResult(r: DeploymentResult): SavedResult {
+  const lines = r.designs.flatMap((d) => {
+    if (d.runningRatePct.length === 0) return [series(d.label, [[d.trials, 100 * d.successRate]])];
+    const band = seriesThin(d.runningWilsonPct);
+    return [
+      series(d.label, seriesThin(d.runningRatePct)),
+      series(
+        `${d.label}: 95 % low`,
+        band.map(([t, lo]) => [t, lo]),
+      ),
+      series(
+        `${d.label}: 95 % high`,
+        band.map(([t, , hi]) => [t, hi]),
+      ),
+    ];
+  });
+  const designs = r.designs.map(({ runningRatePct: _rate, runningWilsonPct: _band, ...rest }) => rest);
+  return savedResultBuild(
+    'deployment',
+    r.designs
+      .map((d) => `${d.label}: ${d.fullyDeployed} of ${d.trials} fully`)
+      .join('; ')
+      .slice(0, 300),
+    { ...r, designs },
+    {
+      kind: 'line',
+      title: 'Success rate over the trials',
+      xLabel: 'Trial',
+      yLabel: 'Deployed fully so far (%)',
+      series: lines,
     },
   );
 }

@@ -21,6 +21,7 @@ export const SAVED_RESULT_TOOLS = [
   'magnetic',
   'orbit-eclipse',
   'equilibrium-temperature',
+  'deployment',
 ] as const;
 
 const text = (max: number) => z.string().trim().max(max);
