@@ -319,3 +319,46 @@ describe('POST /api/analysis/deployment', () => {
     expectError(a, 413, 'too_large');
   });
 });
+
+describe('POST /api/analysis/interference', () => {
+  it('ranks devices by keep-out distance', async () => {
+    // Griffiths §5.4.3: dipole readings B ∝ 1/r³; the stronger source must be kept farther away.
+    const readings = (k: number) => [5, 10, 20, 40].map((d) => ({ distanceCm: d, fieldUT: k / d ** 3 }));
+    const a = await postJson('interference', {
+      receiver: 'magnetometer',
+      thresholdUT: 1,
+      devices: [
+        { label: 'Fan', readings: readings(2_000) },
+        { label: 'Charger', readings: readings(20_000) },
+      ],
+    });
+    expect(a.status).toBe(200);
+    expect(a.body.result.ranking.map((d: { label: string }) => d.label)).toEqual(['Charger', 'Fan']);
+    // r* = (k/B*)^(1/3): 27.14 cm for k = 20 000 µT·cm³, B* = 1 µT.
+    expect(a.body.result.ranking[0].fit.thresholdDistanceCm).toBeCloseTo(20_000 ** (1 / 3), 6);
+    expect(a.body.savedResult.tool).toBe('interference');
+  });
+
+  it('answers 400 naming the device whose readings cannot be fitted, and for NaN', async () => {
+    const a = await postJson('interference', {
+      receiver: 'magnetometer',
+      devices: [{ label: 'Lamp', readings: [{ distanceCm: 5, fieldUT: 9 }] }],
+    });
+    expectError(a, 400, 'invalid_input', /^Lamp: /);
+    expect(a.body.error.fields['devices.0.readings']).toBeTruthy();
+    expectError(
+      await post(
+        'interference',
+        '{"receiver":"am-radio","devices":[{"label":"A","noiseGoneCm":[NaN]}]}',
+        'application/json',
+      ),
+      400,
+      'invalid_input',
+    );
+  });
+
+  it('answers 413 for a body over its cap', async () => {
+    const a = await postJson('interference', { receiver: 'am-radio', devices: [], padding: 'x'.repeat(250_000) });
+    expectError(a, 413, 'too_large');
+  });
+});

@@ -125,6 +125,7 @@ const ROWS: Row[] = [
     'cleanroom',
     'deployment',
     'equilibrium-temperature',
+    'interference',
     'magnetic',
     'orbit-eclipse',
     'psd-profile',

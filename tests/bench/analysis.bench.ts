@@ -7,7 +7,13 @@
  */
 import { performance } from 'node:perf_hooks';
 import { DEPLOYMENT_MAX_TRIALS, DeploymentInputSchema, deploymentAnalyse } from '../../src/lib/analysis/deployment';
-import { deploymentSavedResult } from '../../src/lib/analysis/saved-result-tools';
+import {
+  INTERFERENCE_MAX_DEVICES,
+  INTERFERENCE_MAX_READINGS_PER_DEVICE,
+  InterferenceInputSchema,
+  interferenceRank,
+} from '../../src/lib/analysis/interference';
+import { deploymentSavedResult, interferenceSavedResult } from '../../src/lib/analysis/saved-result-tools';
 import { VibrationInputSchema, vibrationAnalyse } from '../../src/lib/analysis/vibration';
 import { vibrationInputFromCsv } from '../../src/lib/analysis/vibration-csv';
 import { welchDefaultSegmentLength, welchPsd } from '../../src/lib/analysis/welch-psd';
@@ -97,4 +103,21 @@ const deploymentBody = {
 console.log(`deployment: ${JSON.stringify(deploymentBody).length.toLocaleString('en-US')} bytes of JSON`);
 measure('deployment: parse, analyse, saved result (2 × 1000 trials)', () => {
   deploymentSavedResult(deploymentAnalyse(DeploymentInputSchema.parse(deploymentBody)));
+});
+
+// Interference hunt, its largest accepted input: 12 devices × 100 field readings, each fitted.
+const interferenceBody = {
+  receiver: 'magnetometer',
+  backgroundUT: 48,
+  devices: Array.from({ length: INTERFERENCE_MAX_DEVICES }, (_, i) => ({
+    label: `Device ${i + 1}`,
+    readings: Array.from({ length: INTERFERENCE_MAX_READINGS_PER_DEVICE }, (_, k) => ({
+      distanceCm: 3 + k,
+      fieldUT: 48 + (500 * (i + 1)) / (3 + k) ** 3 + 0.05 * noise(),
+    })),
+  })),
+};
+console.log(`interference: ${JSON.stringify(interferenceBody).length.toLocaleString('en-US')} bytes of JSON`);
+measure('interference: parse, rank, saved result (12 devices × 100 readings)', () => {
+  interferenceSavedResult(interferenceRank(InterferenceInputSchema.parse(interferenceBody)));
 });

@@ -19,20 +19,20 @@ export const MAGNETIC_DEFAULT_THRESHOLD_UT = EARTH_FIELD_TYPICAL_UT / 100;
 export const MAGNETIC_MAX_READINGS = 1_000;
 export const MAGNETIC_MIN_READINGS = 3;
 
+/** One field reading at a distance from the source. */
+export const MagneticReadingSchema = z
+  .object({
+    /** Distance from the magnet's centre, cm. */
+    distanceCm: z.number().finite().positive(),
+    /** Field magnitude read there, µT. */
+    fieldUT: z.number().finite(),
+  })
+  .strict();
+export type MagneticReading = z.infer<typeof MagneticReadingSchema>;
+
 export const MagneticInputSchema = z
   .object({
-    readings: z
-      .array(
-        z
-          .object({
-            /** Distance from the magnet's centre, cm. */
-            distanceCm: z.number().finite().positive(),
-            /** Field magnitude read there, µT. */
-            fieldUT: z.number().finite(),
-          })
-          .strict(),
-      )
-      .max(MAGNETIC_MAX_READINGS),
+    readings: z.array(MagneticReadingSchema).max(MAGNETIC_MAX_READINGS),
     /** Field read with the magnet far away (Earth and room), µT, subtracted from every reading. */
     backgroundUT: z.number().finite().min(0).default(0),
     /** Field level to stay below, µT; default 1 % of a typical Earth field. */

@@ -4,6 +4,7 @@
  */
 import type { CleanroomResult } from './cleanroom';
 import type { DeploymentResult } from './deployment';
+import type { InterferenceResult } from './interference';
 import type { EquilibriumTemperatureInput, EquilibriumTemperatureResult } from './equilibrium-temperature';
 import type { MagneticResult } from './magnetic';
 import type { OrbitEclipseInput, OrbitEclipseResult } from './orbit-eclipse';
@@ -214,6 +215,23 @@ export function deploymentSavedResult(r: DeploymentResult): SavedResult {
       xLabel: 'Trial',
       yLabel: 'Deployed fully so far (%)',
       series: lines,
+    },
+  );
+}
+
+/** Saved form of an interference hunt: each device's keep-out distance as one bar, most room first. */
+export function interferenceSavedResult(r: InterferenceResult): SavedResult {
+  const bars = r.ranking.flatMap((d) => (d.keepOutCm === null ? [] : [series(d.label, [[d.rank, d.keepOutCm]])]));
+  return savedResultBuild(
+    'interference',
+    `${r.ranking.length} device(s), ${r.receiver === 'am-radio' ? 'AM radio' : `magnetometer, below ${r.thresholdUT} µT`}`,
+    r,
+    {
+      kind: 'bar',
+      title: 'Keep-out distance per device',
+      xLabel: 'Rank (1 needs the most room)',
+      yLabel: 'Keep-out distance (cm)',
+      series: bars,
     },
   );
 }

@@ -22,6 +22,7 @@ export const SAVED_RESULT_TOOLS = [
   'orbit-eclipse',
   'equilibrium-temperature',
   'deployment',
+  'interference',
 ] as const;
 
 const text = (max: number) => z.string().trim().max(max);
