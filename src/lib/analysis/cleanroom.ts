@@ -6,6 +6,7 @@
  * over locations was dropped in 2015 (from memory: ISO 14644-1:2015, A.5–A.6).
  */
 import { z } from 'zod';
+import { TextSchema } from '../text-schema';
 import { refineValid } from '../validation';
 import {
   ISO_14644_CLASSES,
@@ -53,7 +54,7 @@ export const CleanroomInputSchema = refineValid(
         .array(
           z
             .object({
-              label: z.string().trim().min(1).max(60),
+              label: TextSchema.trim().min(1).max(60),
               samples: z.array(CleanroomSampleSchema).min(1).max(CLEANROOM_MAX_SAMPLES_PER_LOCATION),
             })
             .strict(),

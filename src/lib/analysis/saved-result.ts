@@ -4,6 +4,7 @@
  * saved-result-tools.ts.
  */
 import { z } from 'zod';
+import { TextSchema } from '../text-schema';
 
 /** Most points a saved plot series may hold; longer series are downsampled. */
 export const SAVED_RESULT_MAX_POINTS = 2_000;
@@ -25,7 +26,7 @@ export const SAVED_RESULT_TOOLS = [
   'interference',
 ] as const;
 
-const text = (max: number) => z.string().trim().max(max);
+const text = (max: number) => TextSchema.trim().max(max);
 const point = z.tuple([z.number().finite(), z.number().finite()]);
 
 export const SavedPlotSchema = z

@@ -4,6 +4,7 @@
  * the time constant τ and final temperature T∞ with standard uncertainties.
  */
 import { z } from 'zod';
+import { TextSchema } from '../text-schema';
 import { InputError } from '../errors';
 import { linearFit } from './least-squares';
 import { newtonCoolingFit, type NewtonCoolingFit } from './newton-cooling';
@@ -24,7 +25,7 @@ const finite = z.number().finite('must be a finite number');
 export const ThermalRunSchema = z
   .object({
     /** Name shown in the legend, e.g. "with blanket". */
-    label: z.string().trim().min(1).max(60),
+    label: TextSchema.trim().min(1).max(60),
     /** Reading times, s. */
     timeS: z.array(finite).max(THERMAL_MAX_POINTS_PER_RUN),
     /** Temperatures, °C. */

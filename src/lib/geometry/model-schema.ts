@@ -3,6 +3,7 @@
  * keep working when the schema grows. Types come from the schema (z.infer) so they cannot drift.
  */
 import { z } from 'zod';
+import { TextSchema } from '../text-schema';
 import { refineValid } from '../validation';
 import { bodyFaceSizesM } from './body-shape';
 
@@ -92,7 +93,7 @@ export const FaceRefSchema = z
 
 const AppendageBase = {
   id: z.string().regex(/^[a-z0-9][a-z0-9-]{0,39}$/, 'id must be 1–40 lower-case letters, digits or dashes'),
-  label: z.string().trim().min(1, 'label is missing').max(60, 'label must be at most 60 characters'),
+  label: TextSchema.trim().min(1, 'label is missing').max(60, 'label must be at most 60 characters'),
   face: FaceRefSchema,
   /** Offset from the face centre in the face's own axes (u along the face, v up or across), metres. */
   position: z.object({ uM: z.number().finite(), vM: z.number().finite() }).default({ uM: 0, vM: 0 }),
@@ -158,7 +159,7 @@ export const ModelSchema = refineValid(
     schemaVersion: z.literal(MODEL_SCHEMA_VERSION, {
       errorMap: () => ({ message: `schemaVersion must be ${MODEL_SCHEMA_VERSION}` }),
     }),
-    name: z.string().trim().min(1, 'name is missing').max(80, 'name must be at most 80 characters'),
+    name: TextSchema.trim().min(1, 'name is missing').max(80, 'name must be at most 80 characters'),
     body: BodySchema,
     appendages: z
       .array(AppendageSchema)

@@ -4,6 +4,7 @@
  * or island).
  */
 import { z } from 'zod';
+import { KitTitleSchema } from './kit-settings';
 import { ModelSchema } from '../geometry/model-schema';
 import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
@@ -16,7 +17,7 @@ export const KitRequestSchema = z.object({
   /** The spacecraft, in real metres. */
   model: ModelSchema,
   /** Title printed on every sheet; the model's name when left out. */
-  title: z.string().trim().min(1).max(80).optional(),
+  title: KitTitleSchema.optional(),
   /** The kit is 1:N of the real spacecraft; N ≥ 1. */
   scaleDenominator: z
     .number({ invalid_type_error: 'scale must be a number N of 1:N' })

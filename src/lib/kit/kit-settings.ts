@@ -4,6 +4,7 @@
  * passes KIT_SETTINGS_LIMITS (src/lib/kit/kit-inputs.ts) to the island as plain props.
  */
 import { z } from 'zod';
+import { TextSchema } from '../text-schema';
 
 /** The engine limits the settings schema is built from (numbers and id lists only, so they serialise). */
 export interface KitSettingsLimits<S extends string = string, V extends string = string> {
@@ -16,6 +17,12 @@ export interface KitSettingsLimits<S extends string = string, V extends string =
 }
 
 const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
+export const KIT_TITLE_MAX_LENGTH = 80;
+
+/** A kit's title, as sent on build, rename and duplicate. */
+export const KitTitleSchema = TextSchema.trim()
+  .min(1, 'the title must not be empty')
+  .max(KIT_TITLE_MAX_LENGTH, `keep the title under ${KIT_TITLE_MAX_LENGTH} characters`);
 
 /** Where the booms are laid out: a preset venue by id, or a custom floor in metres. */
 function venueChoiceSchema<V extends string>(venueIds: readonly [V, ...V[]]) {
@@ -39,12 +46,7 @@ function venueChoiceSchema<V extends string>(venueIds: readonly [V, ...V[]]) {
 export function kitSettingsSchema<S extends string, V extends string>(limits: KitSettingsLimits<S, V>) {
   return z.object({
     /** Title printed on every sheet; the model's name when left out. */
-    title: z
-      .string()
-      .trim()
-      .min(1, 'the title must not be empty')
-      .max(80, 'keep the title under 80 characters')
-      .optional(),
+    title: KitTitleSchema.optional(),
     /** The activity the kit is for (its slug), if any. */
     activitySlug: z.string().regex(SLUG, 'an activity is named by its slug, like "shake-test"').max(80).optional(),
     /** The kit is 1:N of the real spacecraft. */

@@ -4,6 +4,7 @@
  * the page without a query shows a worked example.
  */
 import { z } from 'zod';
+import { TextSchema } from '../text-schema';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { CustomVenueSchema, VENUES, type VenueId } from '../layout/venues';
@@ -17,7 +18,7 @@ const num = (schema: z.ZodNumber) =>
 /** The form's fields; defaults give the Skein probe on Letter in a classroom. */
 export const ScaleQuerySchema = z
   .object({
-    model: z.preprocess(blankToUndefined, z.string().max(60).default('skein-probe')),
+    model: z.preprocess(blankToUndefined, TextSchema.max(60).default('skein-probe')),
     sheet: z.preprocess(blankToUndefined, z.enum(SHEET_SIZE_IDS).default('letter')),
     gsm: z.preprocess(
       (v) => (blankToUndefined(v) === undefined ? undefined : Number(v)),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { KitTitleSchema } from '../../../lib/kit/kit-settings';
 import { kitDelete } from '../../../lib/db/kits';
 import { kitOwnedOrThrow, kitRenameOwned, kitView, kitVisible } from '../../../lib/kit/saved-kit.server';
 import { endpoint } from '../../../lib/http/endpoint';
@@ -6,9 +7,7 @@ import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
 import { KIT_VIEWERS } from './_access';
 
-const KitRenameSchema = z.object({
-  title: z.string().trim().min(1, 'the title must not be empty').max(80, 'keep the title under 80 characters'),
-});
+const KitRenameSchema = z.object({ title: KitTitleSchema });
 
 /** A saved kit's metadata and download links. */
 export const GET = endpoint({ access: KIT_VIEWERS }, async ({ locals, params }) => ({

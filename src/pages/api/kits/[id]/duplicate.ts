@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { KitTitleSchema } from '../../../../lib/kit/kit-settings';
 import { siteUrl } from '../../../../lib/auth/site-url';
 import { readJson, json } from '../../../../lib/http/respond';
 import { kitDuplicate, kitOwnedOrThrow, kitView, kitVisible } from '../../../../lib/kit/saved-kit.server';
@@ -8,7 +9,7 @@ import { parseInput } from '../../../../lib/validation';
 const KitDuplicateSchema = z.object({
   /** Another of the teacher's classes; the same class when left out. */
   classId: z.string().uuid('classId must be the id of one of your classes').optional(),
-  title: z.string().trim().min(1).max(80).optional(),
+  title: KitTitleSchema.optional(),
 });
 
 /** Copies a kit (its teacher only), with its own id and QR code. The body is optional. */
