@@ -7,8 +7,9 @@
  * 1. GET, HEAD, OPTIONS and TRACE change nothing and pass.
  * 2. An Origin header decides alone: its host must be the request's own host (host and port; the scheme is not
  *    compared, so a proxy that ends TLS in front of the server does not break same-site posts) or its hostname one
- *    of the allowed hostnames (loopback and SITE_URL's host, any port, as Astro's `allowedDomains` matches
- *    hosts). `Origin: null` (sandboxed frames, file pages, some redirects) is refused.
+ *    of the allowed hostnames (SITE_URL's host, any port, as Astro's `allowedDomains` matches hosts; loopback
+ *    names too, on any port, but only on a local run — see originAllowedHostnames). `Origin: null` (sandboxed
+ *    frames, file pages, some redirects) is refused.
  * 3. Without Origin, `Sec-Fetch-Site` decides: `same-origin` and `none` (typed or bookmarked by the user) pass,
  *    `same-site`, `cross-site` and anything unknown are refused.
  * 4. With neither header the sender is a script or a browser older than both headers. Forgery rides on the
@@ -33,17 +34,19 @@ export interface OriginRequest {
 export type OriginVerdict = { allowed: true } | { allowed: false; received: string };
 
 /**
- * The hostnames other than the request's own that may post here: loopback plus SITE_URL's hostname (an empty or
- * missing SITE_URL adds nothing, as src/lib/auth/site-url.ts treats it); throws on a SITE_URL that is not a URL.
+ * The hostnames other than the request's own that may post here, decided by SITE_URL, the deployment's declared
+ * public address (README.md). A local run (npm start, dev and test set SITE_URL to a loopback URL; an empty or
+ * missing SITE_URL is treated as local, as src/lib/auth/site-url.ts does) trusts the loopback names on any port,
+ * so a page served on one local port may post to another. A deployment (SITE_URL with any other hostname) trusts
+ * that hostname alone: a page on some other local port of the server's machine is another site there.
+ * Throws on a SITE_URL that is not a URL.
  */
 export function originAllowedHostnames(siteUrl: string | undefined): string[] {
-  const hostnames = [...ORIGIN_LOOPBACK_HOSTNAMES];
-  if (!siteUrl) return hostnames;
+  if (!siteUrl) return [...ORIGIN_LOOPBACK_HOSTNAMES];
   if (!URL.canParse(siteUrl))
     throw new Error(`SITE_URL "${siteUrl}" is not an absolute URL such as https://kits.example.org.`);
   const { hostname } = new URL(siteUrl);
-  if (!hostnames.includes(hostname)) hostnames.push(hostname);
-  return hostnames;
+  return ORIGIN_LOOPBACK_HOSTNAMES.includes(hostname) ? [...ORIGIN_LOOPBACK_HOSTNAMES] : [hostname];
 }
 
 /**

@@ -20,12 +20,12 @@ function req(method: string, headers: Record<string, string> = {}, url = OWN) {
 }
 
 describe('originAllowedHostnames', () => {
-  it('lists loopback and adds the hostname of SITE_URL', () => {
-    expect(originAllowedHostnames('https://kits.example.org:8443/base')).toEqual([
-      '127.0.0.1',
-      'localhost',
-      'kits.example.org',
-    ]);
+  it('trusts only the hostname of a deployment’s SITE_URL, not loopback', () => {
+    expect(originAllowedHostnames('https://kits.example.org:8443/base')).toEqual(['kits.example.org']);
+  });
+
+  it('trusts the loopback names on a local run (loopback SITE_URL)', () => {
+    expect(originAllowedHostnames('http://localhost:4321')).toEqual([...ORIGIN_LOOPBACK_HOSTNAMES]);
   });
 
   it('adds nothing for a missing or empty SITE_URL, as site-url.ts ignores an empty one', () => {
@@ -66,11 +66,20 @@ describe('originVerdict', () => {
     expect(originAllowed(req('POST', { origin: 'http://app.internal.example:8081' }, own), [])).toBe(false);
   });
 
-  it('allows an Origin whose hostname is loopback or SITE_URL’s host, on any port', () => {
+  it('allows an Origin whose hostname is SITE_URL’s host, on any port', () => {
     const own = new URL('http://127.0.0.1:4321/api/x');
-    expect(originAllowed(req('POST', { origin: 'http://localhost:4321' }, own), HOSTNAMES)).toBe(true);
     expect(originAllowed(req('POST', { origin: 'https://kits.example.org' }, own), HOSTNAMES)).toBe(true);
-    expect(originAllowed(req('POST', { origin: 'https://KITS.example.org' }, own), HOSTNAMES)).toBe(true);
+    expect(originAllowed(req('POST', { origin: 'https://KITS.example.org:8443' }, own), HOSTNAMES)).toBe(true);
+  });
+
+  it('allows loopback Origins on any port on a local run only', () => {
+    const own = new URL('http://127.0.0.1:4321/api/x');
+    const local = originAllowedHostnames('http://127.0.0.1:4321');
+    expect(originAllowed(req('POST', { origin: 'http://localhost:4321' }, own), local)).toBe(true);
+    expect(originAllowed(req('POST', { origin: 'http://127.0.0.1:5173' }, own), local)).toBe(true);
+    // A deployment: another local port of the server's machine is another site.
+    expect(originAllowed(req('POST', { origin: 'http://localhost:4321' }, own), HOSTNAMES)).toBe(false);
+    expect(originAllowed(req('POST', { origin: 'http://127.0.0.1:5173' }, own), HOSTNAMES)).toBe(false);
   });
 
   it('refuses a foreign Origin even when Sec-Fetch-Site claims same-origin', () => {
