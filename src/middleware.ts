@@ -1,13 +1,19 @@
 /**
  * Puts the request id and the actor (account with role, class session, or anonymous) on Astro.locals, refuses
  * cross-site state-changing requests (src/lib/http/origin-check.ts) before any route runs, and turns anything an
- * API route failed to catch into the JSON 500 with that request id. Nothing else.
+ * API route failed to catch into the JSON 500 with that request id, and a method an API route does not answer into
+ * a JSON 405 with Allow. Nothing else.
  */
 import { defineMiddleware } from 'astro:middleware';
 import { actorResolve } from './lib/auth/actor-resolve.server';
 import { originAllowedHostnames, originVerdict } from './lib/http/origin-check';
 import { errorResponse, errorToResponse } from './lib/http/respond';
 import { requestIdNew } from './lib/http/request-id';
+import { routeMethodsAllowed, routeModulePaths, routeUrlMalformed } from './lib/http/route-methods';
+import { InputError, MethodNotAllowedError, NotFoundError } from './lib/errors';
+
+/** The API route modules, loaded only to name a route's methods in a 405 (the route itself is loaded already). */
+const API_MODULES = import.meta.glob<Record<string, unknown>>('./pages/api/**/*.ts');
 
 // Read once, as astro.config.mjs does for the adapter's host handling: a bad SITE_URL fails at start, not per request.
 const ALLOWED_HOSTNAMES = originAllowedHostnames(process.env.SITE_URL);
@@ -16,6 +22,8 @@ export const onRequest = defineMiddleware(async (context, next) => {
   const requestId = requestIdNew();
   context.locals.requestId = requestId;
   const isApi = context.url.pathname.startsWith('/api/');
+  const unrouted = isApi ? apiUnrouted(context.url, context.request.method, context.routePattern) : null;
+  if (unrouted) return withRequestId(errorToResponse(unrouted, requestId), requestId);
   const verdict = originVerdict(
     { method: context.request.method, url: context.url, headers: context.request.headers },
     ALLOWED_HOSTNAMES,
@@ -24,9 +32,11 @@ export const onRequest = defineMiddleware(async (context, next) => {
     return crossSiteResponse(context.request.method, context.url, verdict.received, isApi, requestId);
   try {
     context.locals.actor = await actorResolve(context);
-    const response = await next();
-    response.headers.set('x-request-id', requestId);
-    return response;
+    let response = await next();
+    // Astro answers a method the route does not export with an empty 404 and then renders the HTML 404 page.
+    if (isApi && response.status === 404 && response.body === null)
+      response = errorToResponse(await methodNotAllowed(context.request.method, context.routePattern), requestId);
+    return withRequestId(response, requestId);
   } catch (err) {
     if (isApi) return errorToResponse(err, requestId);
     console.error(`[${requestId}] unexpected error on ${context.url.pathname}`, err);
@@ -36,6 +46,35 @@ export const onRequest = defineMiddleware(async (context, next) => {
     });
   }
 });
+
+function withRequestId(response: Response, requestId: string): Response {
+  response.headers.set('x-request-id', requestId);
+  return response;
+}
+
+/**
+ * The error for an /api/ URL no API route took: malformed percent-encoding (400), or a path Astro refused to
+ * match (an encoded dot segment such as /api/%2e%2e/health) and handed to the HTML 404 page (404). Null when an
+ * API route took the request.
+ */
+function apiUnrouted(url: URL, method: string, routePattern: string): InputError | NotFoundError | null {
+  if (routeUrlMalformed(url))
+    return new InputError(
+      `The URL ${url.pathname}${url.search} has a % that does not start an escape such as %20; encode % itself as %25.`,
+    );
+  if (routePattern.startsWith('/api/')) return null;
+  return new NotFoundError(`No API route answers ${method} ${url.pathname}. See README.md for the API map.`);
+}
+
+/** The 405 for a method an existing API route does not export, naming the methods it does (for Allow). */
+async function methodNotAllowed(method: string, routePattern: string): Promise<MethodNotAllowedError> {
+  const path = routeModulePaths(routePattern).find((p) => p in API_MODULES);
+  const allowed = path ? routeMethodsAllowed(Object.keys(await API_MODULES[path]!())) : [];
+  return new MethodNotAllowedError(
+    `${routePattern} does not answer ${method}; it answers ${allowed.join(', ') || 'no method'}.`,
+    allowed,
+  );
+}
 
 /** 403 for a refused cross-site request: the shared JSON error for the API, a short plain page otherwise. */
 function crossSiteResponse(method: string, url: URL, received: string, isApi: boolean, requestId: string): Response {

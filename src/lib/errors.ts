@@ -43,6 +43,18 @@ export class NotFoundError extends AppError {
   readonly code = 'not_found';
 }
 
+/** 405: the route exists but does not answer this method; `allowed` lists the ones it does. */
+export class MethodNotAllowedError extends AppError {
+  readonly status = 405;
+  readonly code = 'method_not_allowed';
+  constructor(
+    message: string,
+    readonly allowed: readonly string[],
+  ) {
+    super(message);
+  }
+}
+
 /** 409: the request conflicts with the current state (a taken e-mail, an entry already reviewed). */
 export class ConflictError extends AppError {
   readonly status = 409;
