@@ -86,12 +86,14 @@ describe('POST /api/kits/preview', () => {
     expect(data.summary.spanFitsVenue).toBe(true);
   });
 
-  it('refuses a scale at which a piece is under 5 mm, naming the ratio that works', async () => {
+  it('refuses a scale at which a piece is under the 5 mm floor, naming the ratio that works', async () => {
     const res = await postJson('/api/kits/preview', { ...INPUTS, scaleDenominator: 500 }, as(teacherCookie));
     expect(res.status).toBe(400);
     const data = await body(res);
     expect(data.error.code).toBe('invalid_input');
-    expect(data.error.message).toMatch(/At 1:500 .* is \d+(\.\d)? mm across; 1:\d+ is the smallest ratio/);
+    expect(data.error.message).toMatch(
+      /At 1:500 the .* would be \d+(\.\d)? mm across \(adults need 5\.0 mm\); 1:\d+ is the smallest ratio/,
+    );
     expect(data.error.fields.scaleDenominator).toBeDefined();
   });
 

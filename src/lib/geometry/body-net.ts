@@ -2,7 +2,7 @@
  * The flat pattern of a body. Bodies of up to BODY_HINGED_CAP_SIDES_MAX sides are one piece: the side walls
  * as a strip (wall i left to right, printed side out), the top and bottom caps hinged to the wall nearest
  * the strip's middle, a tab on one edge of every glued pair. Many-sided bodies (and any body whose hinged
- * caps would crowd a tab under TAB_DEPTH_MIN_MM, or whose one-piece net exceeds BODY_ONE_PIECE_MAX_MM) are
+ * caps would crowd a tab under the buildability floor's tab, or whose one-piece net exceeds BODY_ONE_PIECE_MAX_MM) are
  * three pieces: the wall strip with a toothed glue ring
  * along its top and bottom edges, and two separate caps glued onto the rings. Flat mm, y up; model mm at
  * kit scale.
@@ -11,7 +11,8 @@ import type { Body } from './model-schema';
 import { bodyFaces, type BodyFace } from './body-shape';
 import { faceFrame, pieceFromNet, type NetFace, type NetTab } from './piece-builder';
 import { netGluePair, tabFoldAngle, type NetEdge } from './net-glue';
-import { paperTabDepthMm, TAB_DEPTH_MIN_MM } from './paper';
+import { paperTabDepthMm } from './paper';
+import { BUILD_GRADE_BAND_FLOOR, BUILDABILITY_MINIMUMS } from './buildability';
 import { bodyRingTeeth } from './body-ring';
 import type { EdgeLabel, Piece, PlaneFrame, Vec2Mm } from './types';
 import { pointsBounds, vec2Length, vec2Sub, vec3Dot, vec3Sub } from './vec';
@@ -68,7 +69,7 @@ interface BuiltNet {
   pieces: Piece[];
   /** Per body face (sides, top, bottom): index into pieces and the face's frame. */
   spots: { piece: number; frame: PlaneFrame }[];
-  /** Whether a neighbour trimmed some tab below both TAB_DEPTH_MIN_MM and the depth its edge allows. */
+  /** Whether a neighbour trimmed some tab below both the buildability floor's tab and the depth its edge allows. */
   crowded: boolean;
 }
 
@@ -144,7 +145,8 @@ function bodyNetHinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
     );
     const want = paperTabDepthMm(gsm, edgeMm);
     const { tab, label } = netGluePair(net, first, second, k + 1, want, obstacles);
-    if ((tab.depthMm ?? 0) < 0.999 * Math.min(want, TAB_DEPTH_MIN_MM)) crowded = true;
+    if ((tab.depthMm ?? 0) < 0.999 * Math.min(want, BUILDABILITY_MINIMUMS[BUILD_GRADE_BAND_FLOOR].tabMm))
+      crowded = true;
     tabs.push(tab);
     edgeLabels.push(label);
     obstacles.push(tab.polygonMm);

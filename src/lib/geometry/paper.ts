@@ -6,10 +6,6 @@ export const PAPER_GSM_MIN = 80;
 export const PAPER_GSM_MAX = 300;
 /** From memory: office paper and card are roughly 0.7–0.9 g/cm³; 0.8 g/cm³ is assumed throughout. */
 export const PAPER_DENSITY_G_PER_CM3 = 0.8;
-/** Smallest tab the solver accepts, mm. Common practice, no source: a fingertip can press a 3 mm flap. */
-export const TAB_DEPTH_MIN_MM = 3;
-/** Smallest piece the solver accepts, mm across (common practice, no source: scissors can cut it). */
-export const PIECE_SIZE_MIN_MM = 5;
 /**
  * Largest gap between a true arc and its polyline, mm: half a typical 0.1 mm printed line, so the
  * polyline cannot be told from the arc on paper (common practice, no source).

@@ -1,11 +1,11 @@
 /**
  * Server adapter: builds one output of a kit (SVG sheets, PDF, STL or JSON) through buildKit, refusing scales
- * at which a piece or tab is too small to cut (with the solver's message of what would work), timing each
+ * at which a piece falls below the buildability floor (with the solver's message of what would work), timing each
  * stage, and caching the result by content hash.
  */
-import { PIECE_SIZE_MIN_MM, TAB_DEPTH_MIN_MM } from '../geometry/paper';
+import { BUILD_GRADE_BAND_FLOOR, buildabilityShortfalls, buildabilityShortfallWords } from '../geometry/buildability';
 import { InputError } from '../errors';
-import { pieceAcrossMm, pieceTabDepthMm, solvePaperScale } from '../layout/scale-solver';
+import { solvePaperScale } from '../layout/scale-solver';
 import type { Piece } from '../geometry/types';
 import { buildKit, GEOMETRY_KIT_ENGINE, type KitBuild, type KitEngine, type KitOutput } from './build-kit';
 import { contentHash } from './content-hash';
@@ -22,12 +22,10 @@ export interface KitOutputBuild {
   timingsMs: KitTimingsMs;
 }
 
-/** Throws the solver's InputError when a piece is under PIECE_SIZE_MIN_MM across or a tab under TAB_DEPTH_MIN_MM. */
+/** Throws the solver's InputError when a piece falls below the buildability floor (what nobody can cut). */
 export function kitScaleGuard(request: KitRequest, pieces: readonly Piece[]): void {
-  const small = pieces.some(
-    (p) => pieceAcrossMm(p) < PIECE_SIZE_MIN_MM || pieceTabDepthMm(p, request.paperGsm) < TAB_DEPTH_MIN_MM,
-  );
-  if (!small) return;
+  const worst = buildabilityShortfalls(pieces, BUILD_GRADE_BAND_FLOOR)[0];
+  if (!worst) return;
   // The slow path (the solver searches for the smallest workable scale) runs only for a refused request.
   solvePaperScale(request.model, {
     sheetId: request.sheetSizeId,
@@ -35,7 +33,7 @@ export function kitScaleGuard(request: KitRequest, pieces: readonly Piece[]): vo
     scaleDenominator: request.scaleDenominator,
   });
   throw new InputError(
-    `At 1:${request.scaleDenominator} some pieces are under ${PIECE_SIZE_MIN_MM} mm or have tabs under ${TAB_DEPTH_MIN_MM} mm; choose a larger scale (a smaller N).`,
+    `At 1:${request.scaleDenominator} ${buildabilityShortfallWords(worst, BUILD_GRADE_BAND_FLOOR)}; choose a larger scale (a smaller N).`,
     { scaleDenominator: ['too small to cut and glue'] },
   );
 }

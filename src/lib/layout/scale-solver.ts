@@ -1,15 +1,28 @@
 /**
- * Choosing a kit's scale: the largest scale at which every piece fits a sheet inside its printable margin
- * (90° turns allowed) while no piece is under PIECE_SIZE_MIN_MM across and no tab under TAB_DEPTH_MIN_MM,
- * and the same choice made together with a venue. Scales are 1:N; explanations are for teachers.
+ * Choosing a kit's scale for a class. Buildability first, sheet count second: of the scales at which every
+ * piece meets the grade band's minimums (buildability.ts), the one on the fewest sheets, and of those the
+ * largest model. A bigger model over several sheets beats a tiny one on a single sheet. Scales at which a
+ * piece falls below the floor (what nobody can cut) are refused. The same choice is also made together with
+ * a venue. Scales are 1:N; explanations are for teachers.
  */
 import { InputError } from '../errors';
 import type { Model } from '../geometry/model-schema';
 import type { Piece } from '../geometry/types';
 import { modelPatterns, SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
-import { PIECE_SIZE_MIN_MM, TAB_DEPTH_MIN_MM } from '../geometry/paper';
+import {
+  BUILD_GRADE_BAND_DEFAULT,
+  BUILD_GRADE_BAND_FLOOR,
+  BUILD_GRADE_BAND_WORDS,
+  buildabilityMm,
+  buildabilityShortfalls,
+  buildabilityShortfallWords,
+  pieceAcrossMm,
+  type BuildabilityShortfall,
+  type BuildGradeBand,
+} from '../geometry/buildability';
 import { pointsBounds } from '../geometry/vec';
 import { SHEET_MARGIN_MM, sheetSize, type SheetSizeId } from './sheet-sizes';
+import { sheetPack } from './sheet-packer';
 import { USUAL_SCALE_DENOMINATORS } from './scale-ratios';
 import { solveVenueScale, type Venue, type VenueScale } from './venues';
 import type { UnitSystem } from './units';
@@ -21,135 +34,168 @@ export interface PaperScaleRequest {
   scaleDenominator?: number;
   /** Pick from the usual ratios (default) or any whole 1:N. */
   ratios?: 'usual' | 'any';
+  /** The class the kit is for; BUILD_GRADE_BAND_DEFAULT when left out. */
+  gradeBand?: BuildGradeBand;
+  /** Units of the printed furniture (the check square's size), which takes room on the first sheet. */
+  units?: UnitSystem;
 }
 
 export interface PaperScale {
   scaleDenominator: number;
+  gradeBand: BuildGradeBand;
+  /** Sheets one kit takes at this scale. */
+  sheetCount: number;
   /** Pieces larger than the printable area at this scale: they are split across sheets. */
   tiledPieceIds: string[];
-  /** The smallest scale (largest N) that keeps every piece and tab above the limits. */
+  /** Where a piece falls short of the band's minimums at this scale (empty: the class can build it all). */
+  shortfalls: BuildabilityShortfall[];
+  /** The smallest scale (largest N) at which the band can build every piece; null when none can. */
+  buildableDenominator: number | null;
+  /** The smallest scale (largest N) that keeps every piece above the floor: what anyone can cut. */
   smallestValidDenominator: number;
   explanation: string;
 }
 
 interface ScaleCheck {
-  tooSmall: { label: string; acrossMm: number; what: 'piece' | 'tab' } | null;
+  pieces: Piece[];
+  /** Shortfalls against the floor: any makes the scale impossible. */
+  floor: BuildabilityShortfall[];
+  /** Shortfalls against the class's band. */
+  band: BuildabilityShortfall[];
   tiled: string[];
 }
 
-/** Pieces' size problems and which pieces overflow the sheet at 1:N. */
-function scaleCheck(model: Model, n: number, gsm: number, sheetId: SheetSizeId): ScaleCheck {
+/** Pieces' buildability and which pieces overflow the sheet at 1:N. */
+function scaleCheck(model: Model, n: number, gsm: number, sheetId: SheetSizeId, band: BuildGradeBand): ScaleCheck {
   const { pieces } = modelPatterns(model, { scaleDenominator: n, paperGsm: gsm });
   const sheet = sheetSize(sheetId);
   const [pw, ph] = [sheet.widthMm - 2 * SHEET_MARGIN_MM, sheet.heightMm - 2 * SHEET_MARGIN_MM];
-  let tooSmall: ScaleCheck['tooSmall'] = null;
   const tiled: string[] = [];
   for (const p of pieces) {
-    const across = pieceAcrossMm(p);
-    if (across < PIECE_SIZE_MIN_MM && (!tooSmall || across < tooSmall.acrossMm))
-      tooSmall = { label: p.label, acrossMm: across, what: 'piece' };
-    const tab = pieceTabDepthMm(p);
-    if (tab < TAB_DEPTH_MIN_MM && !tooSmall) tooSmall = { label: p.label, acrossMm: tab, what: 'tab' };
     const b = pointsBounds(p.outlineMm);
     const [w, h] = [b.maxX - b.minX, b.maxY - b.minY];
     if (!((w <= pw && h <= ph) || (h <= pw && w <= ph))) tiled.push(p.id);
   }
-  return { tooSmall, tiled };
-}
-
-/** The smaller side of a piece's faces' bounding box, mm (tabs left out: they are not the part). */
-export function pieceAcrossMm(piece: Piece): number {
-  const b = pointsBounds(piece.hinge.faces.flatMap((f) => f.polygonMm));
-  return Math.min(b.maxX - b.minX, b.maxY - b.minY);
-}
-
-/**
- * The shallowest tab of a piece as cut, mm: each tab's own depth after neighbours trimmed it (GlueTab.depthMm),
- * or, for a tab that does not state it, the farthest reach of its polygon from the edge it starts on.
- * Infinity when the piece has no tabs. The paper weight is already in the tabs; older callers may still pass it.
- */
-export function pieceTabDepthMm(piece: Piece, _paperGsm?: number): number {
-  let min = Infinity;
-  for (const t of piece.tabs) min = Math.min(min, t.depthMm ?? tabReachMm(t.polygonMm));
-  return min;
-}
-
-function tabReachMm(polygonMm: readonly (readonly [number, number])[]): number {
-  const [b, a] = [polygonMm[0], polygonMm[1]];
-  if (!a || !b) return 0;
-  const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-  return Math.max(
-    ...polygonMm.map((p) => Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / len),
-  );
+  return {
+    pieces,
+    floor: buildabilityShortfalls(pieces, BUILD_GRADE_BAND_FLOOR),
+    band: buildabilityShortfalls(pieces, band),
+    tiled,
+  };
 }
 
 /** The paper scale for a parsed model; throws InputError for a requested scale that makes parts too small. */
 export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScale {
-  const memo = new Map<number, ScaleCheck>();
+  const band = req.gradeBand ?? BUILD_GRADE_BAND_DEFAULT;
+  const size = sheetSize(req.sheetId);
+  const checks = new Map<number, ScaleCheck>();
   const check = (n: number): ScaleCheck =>
-    memo.get(n) ?? memo.set(n, scaleCheck(model, n, req.paperGsm, req.sheetId)).get(n)!;
-  const sheet = sheetSize(req.sheetId).label;
-  const smallestValid = largestDenominator((n) => check(n).tooSmall === null);
+    checks.get(n) ?? checks.set(n, scaleCheck(model, n, req.paperGsm, req.sheetId, band)).get(n)!;
+  const counts = new Map<number, number>();
+  const sheetCount = (n: number): number =>
+    counts.get(n) ??
+    counts
+      .set(n, sheetPack(check(n).pieces, { sheetSize: size, units: req.units ?? 'metric', copies: 1 }).length)
+      .get(n)!;
+  const smallestValid = largestDenominator((n) => check(n).floor.length === 0);
   if (smallestValid === null) {
-    const worst = check(1).tooSmall!;
+    const worst = check(1).floor[0]!;
     throw new InputError(
-      `Even at 1:1 the ${worst.label} ${worst.what === 'tab' ? 'has a tab of' : 'is'} ${mm(worst.acrossMm)} across, under the ${worst.what === 'tab' ? TAB_DEPTH_MIN_MM : PIECE_SIZE_MIN_MM} mm that can be cut and glued; make that part larger.`,
+      `Even at 1:1 ${buildabilityShortfallWords(worst, BUILD_GRADE_BAND_FLOOR)}; make that part larger.`,
     );
   }
-  const usualValid = [...USUAL_SCALE_DENOMINATORS].reverse().find((n) => n <= smallestValid) ?? 1;
+  // The band asks at least as much as the floor, so its limit lies at or below the floor's.
+  const buildable = largestDenominator((n) => check(n).band.length === 0, smallestValid);
+  const answer = (n: number, explanation: string): PaperScale => ({
+    scaleDenominator: n,
+    gradeBand: band,
+    sheetCount: sheetCount(n),
+    tiledPieceIds: check(n).tiled,
+    shortfalls: check(n).band,
+    buildableDenominator: buildable,
+    smallestValidDenominator: smallestValid,
+    explanation,
+  });
+  const usualValid = [...USUAL_SCALE_DENOMINATORS].reverse().find((k) => k <= smallestValid) ?? 1;
   if (req.scaleDenominator !== undefined) {
     const n = req.scaleDenominator;
-    const c = check(n);
-    if (c.tooSmall) {
-      const { label, acrossMm, what } = c.tooSmall;
+    const worst = check(n).floor[0];
+    if (worst) {
       throw new InputError(
-        `At 1:${n} the ${label} ${what === 'tab' ? 'has tabs only' : 'is'} ${mm(acrossMm)} across; 1:${usualValid} is the smallest ratio that keeps every piece above ${PIECE_SIZE_MIN_MM} mm and every tab above ${TAB_DEPTH_MIN_MM} mm.`,
+        `At 1:${n} ${buildabilityShortfallWords(worst, BUILD_GRADE_BAND_FLOOR)}; 1:${usualValid} is the smallest ratio at which every piece can be cut and glued.`,
         { scaleDenominator: [`1:${usualValid} or larger`] },
       );
     }
-    return {
-      scaleDenominator: n,
-      tiledPieceIds: c.tiled,
-      smallestValidDenominator: smallestValid,
-      explanation: tiledWords(n, c.tiled, model, sheet),
-    };
+    return answer(n, scaleWords(n, sheetCount(n), check(n), size.label, band));
   }
-  const fits = (n: number) => n <= smallestValid && check(n).tiled.length === 0;
-  let n: number | null;
-  if (req.ratios === 'any') {
-    const first = smallestDenominator((k) => check(k).tiled.length === 0);
-    n = first !== null && first <= smallestValid ? first : null;
-  } else {
-    n = USUAL_SCALE_DENOMINATORS.find((k) => fits(k)) ?? null;
-  }
-  if (n !== null) {
-    return {
-      scaleDenominator: n,
-      tiledPieceIds: [],
-      smallestValidDenominator: smallestValid,
-      explanation: `At 1:${n} every piece of ${model.name} fits on ${sheet} inside the ${SHEET_MARGIN_MM} mm margin. A larger scale would not fit without splitting pieces across sheets.`,
-    };
-  }
-  const tiledAt = req.ratios === 'any' ? smallestValid : usualValid;
-  const tiled = check(tiledAt).tiled;
-  return {
-    scaleDenominator: tiledAt,
-    tiledPieceIds: tiled,
-    smallestValidDenominator: smallestValid,
-    explanation: `No scale fits every piece of ${model.name} on ${sheet} and keeps the smallest parts big enough to cut. ${tiledWords(tiledAt, tiled, model, sheet)}`,
-  };
+  const n = bestDenominator(req.ratios ?? 'usual', buildable, smallestValid, sheetCount);
+  const words = scaleWords(n, sheetCount(n), check(n), size.label, band);
+  // The next smaller scale, to say what the sheets saved there would cost.
+  const smaller = req.ratios === 'any' ? n + 1 : USUAL_SCALE_DENOMINATORS.find((k) => k > n && k <= smallestValid);
+  if (smaller === undefined || smaller > smallestValid || check(smaller).band.length === 0) return answer(n, words);
+  const fewer = sheetCount(smaller);
+  const worse = check(smaller).band[0]!;
+  return answer(
+    n,
+    `${words} 1:${smaller} ${fewer < sheetCount(n) ? `fits ${sheetsWords(fewer, size.label)}` : 'is smaller still'}, but ${buildabilityShortfallWords(worse, band)}.`,
+  );
 }
 
-function tiledWords(n: number, tiled: string[], model: Model, sheet: string): string {
-  if (tiled.length === 0) return `At 1:${n} every piece of ${model.name} fits on ${sheet}.`;
-  return `At 1:${n}, ${tiled.length === 1 ? 'one piece is' : `${tiled.length} pieces are`} larger than ${sheet} (${tiled.join(', ')}) and will be split across sheets with overlap strips and alignment marks.`;
+/**
+ * The scale to suggest: buildable by the band first, fewest sheets second, largest model third. Sheet counts
+ * grow with the model, so the smallest buildable scale has the fewest sheets; larger scales are taken while
+ * they need no more sheets. With no buildable scale, the smallest scale anyone can cut (the class needs help).
+ */
+function bestDenominator(
+  ratios: 'usual' | 'any',
+  buildable: number | null,
+  smallestValid: number,
+  sheetCount: (n: number) => number,
+): number {
+  if (ratios === 'any') {
+    const top = buildable ?? smallestValid;
+    const least = sheetCount(top);
+    return smallestDenominator((k) => sheetCount(k) <= least, top) ?? top;
+  }
+  const top = buildable ?? smallestValid;
+  const candidates = USUAL_SCALE_DENOMINATORS.filter((k) => k <= top).reverse();
+  if (candidates.length === 0) return Math.min(top, USUAL_SCALE_DENOMINATORS[0]);
+  let best = candidates[0]!;
+  const least = sheetCount(best);
+  for (const k of candidates.slice(1)) {
+    if (sheetCount(k) > least) break;
+    best = k;
+  }
+  return best;
 }
 
-/** The largest N in 1…SCALE_DENOMINATOR_MAX with ok(N), assuming ok holds for all smaller N; null if none. */
-function largestDenominator(ok: (n: number) => boolean): number | null {
+function sheetsWords(count: number, sheet: string): string {
+  return count === 1 ? `one ${sheet} sheet` : `${count} ${sheet} sheets`;
+}
+
+/** "1:20 on 3 US Letter sheets: the smallest piece is 18 mm, right for grades 6–8." and what falls short. */
+function scaleWords(n: number, sheets: number, c: ScaleCheck, sheet: string, band: BuildGradeBand): string {
+  const smallest = c.pieces.reduce<Piece | null>(
+    (a, p) => (a === null || pieceAcrossMm(p) < pieceAcrossMm(a) ? p : a),
+    null,
+  );
+  const who = BUILD_GRADE_BAND_WORDS[band];
+  const head = `1:${n} on ${sheetsWords(sheets, sheet)}`;
+  const tiled =
+    c.tiled.length === 0
+      ? ''
+      : ` ${c.tiled.length === 1 ? 'One piece is' : `${c.tiled.length} pieces are`} larger than ${sheet} (${c.tiled.join(', ')}) and ${c.tiled.length === 1 ? 'is' : 'are'} split across sheets.`;
+  if (c.band.length > 0)
+    return `${head}: too small for ${who}, since ${buildabilityShortfallWords(c.band[0]!, band)}; choose a larger scale (a smaller N) or help the class with the smallest parts.${tiled}`;
+  const size = smallest ? `the smallest piece is ${buildabilityMm(pieceAcrossMm(smallest))}` : 'it has no pieces';
+  return `${head}: ${size}, right for ${who}.${tiled}`;
+}
+
+/** The largest N in 1…max with ok(N), assuming ok holds for all smaller N; null if none. */
+function largestDenominator(ok: (n: number) => boolean, max = SCALE_DENOMINATOR_MAX): number | null {
   if (!ok(1)) return null;
   let lo = 1,
-    hi = SCALE_DENOMINATOR_MAX;
+    hi = max;
   if (ok(hi)) return hi;
   while (hi - lo > 1) {
     const mid = Math.floor((lo + hi) / 2);
@@ -159,11 +205,11 @@ function largestDenominator(ok: (n: number) => boolean): number | null {
   return lo;
 }
 
-/** The smallest N with ok(N), assuming ok holds for all larger N; null if none. */
-function smallestDenominator(ok: (n: number) => boolean): number | null {
+/** The smallest N in 1…max with ok(N), assuming ok holds for all larger N up to max; null if none. */
+function smallestDenominator(ok: (n: number) => boolean, max = SCALE_DENOMINATOR_MAX): number | null {
   if (ok(1)) return 1;
   let lo = 1,
-    hi = SCALE_DENOMINATOR_MAX;
+    hi = max;
   if (!ok(hi)) return null;
   while (hi - lo > 1) {
     const mid = Math.floor((lo + hi) / 2);
@@ -172,8 +218,6 @@ function smallestDenominator(ok: (n: number) => boolean): number | null {
   }
   return hi;
 }
-
-const mm = (v: number) => `${v < 10 ? v.toFixed(1) : Math.round(v)} mm`;
 
 export interface KitScale {
   /** One scale for the paper model and the venue layout, or null when none does both. */
@@ -196,7 +240,10 @@ export function solveKitScale(
   const room = solveVenueScale(model, venue, units);
   const n = Math.max(paper.scaleDenominator, room.usualScaleDenominator);
   const alternatives: KitScale['alternatives'] = [];
-  if (n <= paper.smallestValidDenominator) {
+  // The class's band decides how small the model may get; with no buildable scale, the floor does.
+  const limit = paper.buildableDenominator ?? paper.smallestValidDenominator;
+  const who = BUILD_GRADE_BAND_WORDS[paper.gradeBand];
+  if (n <= limit) {
     if (n > 2 * room.scaleDenominator) {
       alternatives.push({
         label: `Separate boom layout at 1:${room.scaleDenominator} (not the kit's scale)`,
@@ -209,7 +256,10 @@ export function solveKitScale(
       paper,
       venue: room,
       alternatives,
-      explanation: `At 1:${n} the paper model fits ${sheetSize(req.sheetId).label}${paper.tiledPieceIds.length ? ' (some pieces split across sheets)' : ''} and its deployed span fits the ${venue.label}.`,
+      explanation:
+        n === paper.scaleDenominator
+          ? `${paper.explanation} Its deployed span fits the ${venue.label}.`
+          : `At 1:${n} the deployed span fits the ${venue.label}, and the paper model is still large enough for ${who}.`,
     };
   }
   alternatives.push(
@@ -229,6 +279,6 @@ export function solveKitScale(
     paper,
     venue: room,
     alternatives,
-    explanation: `No one scale does both: to fit the ${venue.label} the model must be at 1:${room.scaleDenominator} or smaller, but below 1:${paper.smallestValidDenominator} its smallest pieces or tabs are too small to cut and glue. Build the paper model at 1:${paper.scaleDenominator} and lay the booms out separately at 1:${room.scaleDenominator}, clearly labelled as a different scale.`,
+    explanation: `No one scale does both: to fit the ${venue.label} the model must be at 1:${room.scaleDenominator} or smaller, but below 1:${limit} its smallest pieces or tabs are too small for ${who} to cut and glue. Build the paper model at 1:${paper.scaleDenominator} and lay the booms out separately at 1:${room.scaleDenominator}, clearly labelled as a different scale.`,
   };
 }

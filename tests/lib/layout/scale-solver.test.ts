@@ -1,10 +1,11 @@
 import { describe, expect, test } from 'vitest';
-import { solveKitScale, solvePaperScale, pieceAcrossMm, pieceTabDepthMm } from '../../../src/lib/layout/scale-solver';
+import { solveKitScale, solvePaperScale } from '../../../src/lib/layout/scale-solver';
+import { buildabilityShortfalls, pieceAcrossMm, pieceTabDepthMm } from '../../../src/lib/geometry/buildability';
+import { sheetPack } from '../../../src/lib/layout/sheet-packer';
 import { VENUES, venueCustom } from '../../../src/lib/layout/venues';
 import { SHEET_MARGIN_MM, SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
 import { InputError } from '../../../src/lib/errors';
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
-import { pointsBounds } from '../../../src/lib/geometry/vec';
 import { demoModel } from '../geometry/fixtures';
 import { ModelSchema } from '../../../src/lib/geometry/model-schema';
 import type { Piece } from '../../../src/lib/geometry/types';
@@ -13,10 +14,11 @@ import type { Piece } from '../../../src/lib/geometry/types';
 const letter = [8.5 * 25.4 - 2 * SHEET_MARGIN_MM, 11 * 25.4 - 2 * SHEET_MARGIN_MM] as const;
 
 describe('solvePaperScale', () => {
-  test('puts the Skein probe at 1:50 on US Letter, the body net deciding', () => {
+  test('puts the Skein probe at 1:50 on US Letter for adults, the body net deciding', () => {
     const m = demoModel('skein-probe');
-    const r = solvePaperScale(m, { sheetId: 'letter', paperGsm: 160 });
+    const r = solvePaperScale(m, { sheetId: 'letter', paperGsm: 160, gradeBand: 'adult' });
     expect(r.scaleDenominator).toBe(50);
+    expect(r.sheetCount).toBe(1);
     expect(r.tiledPieceIds).toEqual([]);
     // By hand (CRC: side of a regular hexagon with apothem 1.2 m is 2·1.2·tan 30° = 1.3856 m): at 1:25 the
     // six-wall strip alone is 6 · 1385.6 / 25 = 332.6 mm, longer than Letter's printable 259.4 mm.
@@ -26,28 +28,49 @@ describe('solvePaperScale', () => {
     );
   });
 
-  test('fits every piece of the chosen scale inside the printable area, turned if need be', () => {
-    for (const id of ['skein-probe', 'wren-3u', 'thermal-puck']) {
-      for (const sheetId of ['a4', 'letter', 'a3'] as const) {
-        const r = solvePaperScale(demoModel(id), { sheetId, paperGsm: 160, ratios: 'any' });
-        const [pw, ph] = [
-          SHEET_SIZES[sheetId].widthMm - 2 * SHEET_MARGIN_MM,
-          SHEET_SIZES[sheetId].heightMm - 2 * SHEET_MARGIN_MM,
-        ];
-        const fits = (n: number) =>
-          modelPatterns(demoModel(id), { scaleDenominator: n, paperGsm: 160 }).pieces.every((p) => {
-            const b = pointsBounds(p.outlineMm);
-            const [w, h] = [b.maxX - b.minX, b.maxY - b.minY];
-            return (w <= pw && h <= ph) || (h <= pw && w <= ph);
-          });
-        expect(fits(r.scaleDenominator), `${id} on ${sheetId}`).toBe(true);
-        if (r.scaleDenominator > 1)
-          expect(fits(r.scaleDenominator - 1), `${id} on ${sheetId} one step larger`).toBe(false);
-      }
-    }
+  test('ranks buildability first: grades 6–8 get the Wren at 1:5, not the one-sheet 1:10 with 10 mm panels', () => {
+    const r = solvePaperScale(demoModel('wren-3u'), { sheetId: 'letter', paperGsm: 160, gradeBand: '6-8' });
+    expect(r.scaleDenominator).toBe(5);
+    expect(r.shortfalls).toEqual([]);
+    // Wren's panels are 0.1 m wide (its model file): 100 / 5 = 20 mm and 100 / 10 = 10 mm.
+    expect(r.explanation).toMatch(/^1:5 on one US Letter sheet: the smallest piece is 20 mm, right for grades 6–8\./);
+    expect(r.explanation).toMatch(/1:10 .*Solar panel .* would be 10 mm across \(grades 6–8 need 15 mm\)/);
   });
 
-  test('refuses a scale that makes a piece smaller than 5 mm and says which ratio works', () => {
+  test('ranks sheet count second: a larger model on more sheets when the smaller one is not buildable', () => {
+    // K–2 need 40 mm pieces: Wren's 0.1 m panels pass at 1:2 (50 mm) only, over more than one sheet.
+    const r = solvePaperScale(demoModel('wren-3u'), { sheetId: 'letter', paperGsm: 160, gradeBand: 'K-2' });
+    expect(r.scaleDenominator).toBe(2);
+    expect(r.sheetCount).toBeGreaterThan(1);
+    expect(r.explanation).toMatch(
+      /^1:2 on \d+ US Letter sheets: .* right for grades K–2\. 1:5 fits one US Letter sheet, but/,
+    );
+  });
+
+  test.each([
+    ['wren-3u', '6-8'],
+    ['thermal-puck', '6-8'],
+    ['wren-3u', '9-12'],
+    ['thermal-puck', 'adult'],
+  ] as const)(
+    'with any ratio, gives the %s for %s the largest model among the buildable scales on fewest sheets',
+    (id, band) => {
+      const m = demoModel(id);
+      const r = solvePaperScale(m, { sheetId: 'a4', paperGsm: 160, ratios: 'any', gradeBand: band });
+      const pieces = (n: number) => modelPatterns(m, { scaleDenominator: n, paperGsm: 160 }).pieces;
+      const sheets = (n: number) =>
+        sheetPack(pieces(n), { sheetSize: SHEET_SIZES.a4, units: 'metric', copies: 1 }).length;
+      // Measured independently of the solver: the chosen scale is buildable, the next smaller one is not, and
+      // the next larger one needs more sheets.
+      expect(buildabilityShortfalls(pieces(r.scaleDenominator), band)).toEqual([]);
+      expect(buildabilityShortfalls(pieces(r.buildableDenominator! + 1), band).length).toBeGreaterThan(0);
+      expect(r.sheetCount).toBe(sheets(r.scaleDenominator));
+      expect(r.sheetCount).toBe(sheets(r.buildableDenominator!));
+      if (r.scaleDenominator > 1) expect(sheets(r.scaleDenominator - 1)).toBeGreaterThan(r.sheetCount);
+    },
+  );
+
+  test('refuses a scale that makes a piece smaller than the 5 mm floor and says which ratio works', () => {
     const m = demoModel('skein-probe');
     let error: unknown;
     try {
@@ -58,7 +81,7 @@ describe('solvePaperScale', () => {
     expect(error).toBeInstanceOf(InputError);
     const message = (error as InputError).message;
     expect(message).toMatch(
-      /^At 1:500 the .* is \d+(\.\d)? mm across; 1:\d+ is the smallest ratio that keeps every piece above 5 mm/,
+      /^At 1:500 the .* would be \d+(\.\d)? mm across \(adults need 5\.0 mm\); 1:\d+ is the smallest ratio at which every piece can be cut and glued/,
     );
     // The ratio it names works, and every piece there is at least 5 mm across.
     const named = Number(/; 1:(\d+)/.exec(message)![1]);
@@ -105,7 +128,7 @@ describe('pieceTabDepthMm', () => {
     for (const sheetId of ['letter', 'a4'] as const) {
       const { scaleDenominator } = solvePaperScale(m, { sheetId, paperGsm: 160 });
       for (const piece of modelPatterns(m, { scaleDenominator, paperGsm: 160 }).pieces) {
-        // TAB_DEPTH_MIN_MM, common practice (paper.ts): a fingertip can press a 3 mm flap.
+        // The buildability floor's tab (buildability.ts, common practice): a fingertip can press a 3 mm flap.
         expect(pieceTabDepthMm(piece), `${name} 1:${scaleDenominator} ${piece.id}`).toBeGreaterThanOrEqual(3);
         for (const t of piece.tabs) {
           const reach = foldedTabReachMm(piece, t.number);
@@ -127,7 +150,11 @@ describe('pieceTabDepthMm', () => {
 
 describe('solveKitScale', () => {
   test('finds one scale for paper and football field, and offers a bigger separate boom layout', () => {
-    const r = solveKitScale(demoModel('skein-probe'), { sheetId: 'letter', paperGsm: 160 }, VENUES['football-field']);
+    const r = solveKitScale(
+      demoModel('skein-probe'),
+      { sheetId: 'letter', paperGsm: 160, gradeBand: 'adult' },
+      VENUES['football-field'],
+    );
     expect(r.scaleDenominator).toBe(50);
     expect(r.alternatives[0]!.label).toMatch(/Separate boom layout at 1:2 \(not the kit's scale\)/);
   });
@@ -135,7 +162,7 @@ describe('solveKitScale', () => {
   test('explains why no one scale does both when the venue is too small', () => {
     const r = solveKitScale(
       demoModel('skein-probe'),
-      { sheetId: 'letter', paperGsm: 160 },
+      { sheetId: 'letter', paperGsm: 160, gradeBand: 'adult' },
       venueCustom({ lengthM: 0.2, widthM: 0.2 }),
     );
     expect(r.scaleDenominator).toBeNull();
