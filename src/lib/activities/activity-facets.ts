@@ -8,7 +8,15 @@ export const GRADE_BANDS = ['K-2', '3-5', '6-8', '9-12'] as const;
 export type GradeBand = (typeof GRADE_BANDS)[number];
 
 /** Kinds of test an activity runs; each has a data tool of the same name. */
-export const TEST_KINDS = ['vibration', 'thermal', 'cleanroom', 'magnetic', 'scale'] as const;
+export const TEST_KINDS = [
+  'vibration',
+  'thermal',
+  'cleanroom',
+  'magnetic',
+  'scale',
+  'deployment',
+  'interference',
+] as const;
 export type TestKind = (typeof TEST_KINDS)[number];
 
 /** Data tools a data-sheet column can feed (one per test kind). */
@@ -21,6 +29,8 @@ export const TEST_KIND_LABELS: Record<TestKind, string> = {
   cleanroom: 'Clean room (particles)',
   magnetic: 'Magnetic fields',
   scale: 'Scale and size',
+  deployment: 'Deployment (booms and panels)',
+  interference: 'Interference (noisy devices)',
 };
 
 export const GRADE_BAND_LABELS: Record<GradeBand, string> = {

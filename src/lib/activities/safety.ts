@@ -17,6 +17,8 @@ export const HAZARDS = [
   'strong-magnet',
   'power-tools',
   'ladder',
+  'spring-elastic',
+  'mains-power',
 ] as const;
 
 export const HazardSchema = z.enum(HAZARDS, {
@@ -104,6 +106,16 @@ export const HAZARD_CAUTIONS: Record<Hazard, HazardCaution> = {
     caution:
       "Only adults climb ladders, one person at a time, on firm level ground with a second adult holding the foot. Follow your school's rules for working at height.",
   },
+  'spring-elastic': {
+    label: 'Springs and stretched elastic',
+    caution:
+      'A loaded spring or stretched elastic can snap or fling a part at eye level. Everyone within reach wears safety glasses while a boom is wound, loaded or released. Load and release at table height, pointing the boom away from faces, and never stretch elastic towards anyone. Replace elastic that is cracked or nicked.',
+  },
+  'mains-power': {
+    label: 'Mains-powered devices',
+    caution:
+      "Only the teacher plugs in, switches and moves devices that run from a wall socket (chargers, lamps, fans, motors). Never open a device's case, and do not use one with a damaged cord or plug. Keep drinks and water away; students move the receiver, not the device.",
+  },
 };
 
 /** A hazard's caution; every hazard has one (checked by the tests). */
@@ -127,6 +139,11 @@ export const HAZARD_KEYWORDS: ReadonlyArray<{ hazard: Hazard; pattern: RegExp }>
   { hazard: 'strong-magnet', pattern: /\bmagnets?\b/i },
   { hazard: 'power-tools', pattern: /\bdrill\b|\bjigsaw\b|\bpower tools?\b|\bsanders?\b/i },
   { hazard: 'ladder', pattern: /\bladders?\b|\bstep[ -]?stools?\b/i },
+  { hazard: 'spring-elastic', pattern: /\bsprings?\b|\belastic\b|\bbungee/i },
+  {
+    hazard: 'mains-power',
+    pattern: /\bmains\b|\bwall socket|\bplug[- ]in\b|\bchargers?\b|\bfluorescent\b|\bextension (cord|lead)/i,
+  },
 ];
 
 /** Hazards implied by one line of text (a material's name), in HAZARDS order; [] for harmless text. */

@@ -14,14 +14,33 @@ describe('content/activities', () => {
     expect(result.success ? [] : result.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`)).toEqual([]);
   });
 
-  test('holds the five starting activities, one per test kind', () => {
+  test('holds the starting activities and the later ones, one per test kind', () => {
     const activities = activitiesParsed();
     expect(activities.map((a) => a.slug)).toEqual(
-      expect.arrayContaining(['shake-test', 'thermal-cycling', 'clean-room-build', 'keep-it-non-magnetic', 'scale-it']),
+      expect.arrayContaining([
+        'shake-test',
+        'thermal-cycling',
+        'clean-room-build',
+        'keep-it-non-magnetic',
+        'scale-it',
+        'deployment-trials',
+        'interference-hunt',
+      ]),
     );
     expect(new Set(activities.map((a) => a.testKind))).toEqual(
-      new Set(['vibration', 'thermal', 'cleanroom', 'magnetic', 'scale']),
+      new Set(['vibration', 'thermal', 'cleanroom', 'magnetic', 'scale', 'deployment', 'interference']),
     );
+  });
+
+  test('puts safety glasses on for springs and elastic, the teacher in charge of mains devices, and asks about pacemakers', () => {
+    const bySlug = new Map(activitiesParsed().map((a) => [a.slug, a]));
+    const deploy = bySlug.get('deployment-trials')!;
+    expect(deploy.safety?.hazards).toContain('spring-elastic');
+    expect(deploy.safety?.notes.join(' ')).toMatch(/safety glasses/);
+    const hunt = bySlug.get('interference-hunt')!;
+    expect(hunt.safety?.hazards).toEqual(expect.arrayContaining(['mains-power', 'strong-magnet']));
+    expect(hunt.safety?.notes.join(' ')).toMatch(/Only the teacher/);
+    expect(hunt.safety?.notes.join(' ')).toMatch(/pacemaker/);
   });
 
   test('names each file after its slug', () => {

@@ -89,7 +89,7 @@ describe('ActivitySchema', () => {
     const p = problems(activityFixture({ safety: { hazards: ['lasers' as never] } }));
     expect(p).toHaveLength(1);
     expect(p[0]).toMatch(
-      /^safety\.hazards\.0: "lasers" is not a hazard Kitwright knows; use one of craft-knife, .*ladder$/,
+      /^safety\.hazards\.0: "lasers" is not a hazard Kitwright knows; use one of craft-knife, .*ladder, spring-elastic, mains-power$/,
     );
   });
 
@@ -117,7 +117,7 @@ describe('ActivitySchema', () => {
     const base = activityFixture();
     const bad = { ...base.record.columns[0]!, tool: 'sound' as never };
     expect(problems({ ...base, record: { ...base.record, columns: [bad] } })).toEqual([
-      'record.columns.0.tool: "sound" is not a data tool; use one of vibration, thermal, cleanroom, magnetic, scale',
+      'record.columns.0.tool: "sound" is not a data tool; use one of vibration, thermal, cleanroom, magnetic, scale, deployment, interference',
     ]);
     expect(problems({ ...base, slug: 'Shake_Test' })).toEqual([
       'slug: slug must be lower-case words joined by hyphens, like "shake-test"',

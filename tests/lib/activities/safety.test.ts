@@ -40,6 +40,14 @@ describe('HAZARD_CAUTIONS', () => {
     expect(HAZARD_CAUTIONS['strong-magnet'].caution).toMatch(/pinch/);
   });
 
+  test('puts safety glasses on for springs and elastic, and mains devices in the teacher’s hands', () => {
+    // common practice, no source: eye protection around stored elastic energy; mains devices teacher-operated.
+    expect(HAZARD_CAUTIONS['spring-elastic'].caution).toMatch(/safety glasses/);
+    expect(HAZARD_CAUTIONS['spring-elastic'].caution).toMatch(/eye level/);
+    expect(HAZARD_CAUTIONS['mains-power'].caution).toMatch(/Only the teacher/);
+    expect(HAZARD_CAUTIONS['mains-power'].caution).toMatch(/Never open a device's case/);
+  });
+
   test('sends readers to their school rules and local codes', () => {
     expect(SAFETY_GENERAL_NOTE).toMatch(/school's safety rules and local codes/);
   });
@@ -64,6 +72,10 @@ describe('hazardsInText', () => {
     ['Step stool', ['ladder']],
     ['Cordless drill', ['power-tools']],
     ['Price list', []],
+    ['Small spring or elastic cord to drive the boom', ['spring-elastic']],
+    ['Rubber bands', []],
+    ['Phone charger that plugs into a wall socket', ['mains-power']],
+    ['Small USB or battery desk fan with a finger guard', []],
   ])('finds the hazards in "%s"', (text, expected) => {
     expect(hazardsInText(text)).toEqual(expected);
   });
