@@ -7,7 +7,7 @@ import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { api, BASE_URL, postJson } from './harness';
-import { accountCreate, classCreateDirect, userSessionCookie } from './auth-helpers';
+import { accountCreate, classCreateDirect, linkIn, mailWait, TEST_PASSWORD, userSessionCookie } from './auth-helpers';
 
 let knex: Knex;
 let cookie = '';
@@ -121,6 +121,30 @@ describe('finding 2: /sign-in?next= never leaves the site', () => {
     }
     const ok = await api('/sign-in?next=/kits', { headers: { cookie } });
     expect(ok.headers.get('location')).toBe('/kits');
+  });
+});
+
+describe('finding 5: a password change voids the reset links mailed before it', () => {
+  it('a reset link mailed before a change on the account page no longer sets a password', async () => {
+    const teacher = await accountCreate(knex, { role: 'teacher', label: 'hardening-reset' });
+    const mine = await userSessionCookie(knex, teacher.id);
+    expect((await postJson('/api/auth/forgot-password', { email: teacher.email })).status).toBe(202);
+    const token = linkIn(await mailWait(teacher.email, /new Kitwright password/), '/reset-password').searchParams.get(
+      'token',
+    );
+    const changed = await postJson(
+      '/api/auth/password',
+      { currentPassword: TEST_PASSWORD, newPassword: 'the password I chose today' },
+      { cookie: mine },
+    );
+    expect(changed.status).toBe(200);
+    const e = await jsonError(await postJson('/api/auth/reset-password', { token, password: 'an attacker password' }));
+    expect(e.status).toBe(400);
+    const signIn = await postJson('/api/auth/sign-in', {
+      email: teacher.email,
+      password: 'the password I chose today',
+    });
+    expect(signIn.status).toBe(200);
   });
 });
 

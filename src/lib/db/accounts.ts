@@ -2,6 +2,7 @@
 import type { Knex } from 'knex';
 import type { Role } from '../auth/actor';
 import { db } from './knex';
+import { accountTokensVoid } from './tokens';
 
 export interface AccountRow {
   id: string;
@@ -71,9 +72,14 @@ export async function accountEmailVerify(id: string, trx: Knex = db()): Promise<
   await trx('users').where({ id }).whereNull('email_verified_at').update({ email_verified_at: trx.fn.now() });
 }
 
-/** Replaces the password hash. */
+/** Replaces the password hash and voids every unused password-reset link of the account. */
 export async function accountPasswordSet(id: string, passwordHash: string, trx: Knex = db()): Promise<void> {
-  await trx('users').where({ id }).update({ password_hash: passwordHash, updated_at: trx.fn.now() });
+  await trx.transaction(async (t) => {
+    await t('users').where({ id }).update({ password_hash: passwordHash, updated_at: t.fn.now() });
+    // A reset link mailed before the change must not undo it (OWASP Forgot Password Cheat Sheet: tokens are
+    // single use and expire; a changed password ends what was pending).
+    await accountTokensVoid(id, 'reset_password', t);
+  });
 }
 
 /** Sets the role of an account. */
