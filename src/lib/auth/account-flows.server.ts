@@ -22,6 +22,7 @@ import { resetPasswordMessage, siteLink, signUpExistingMessage, verifyEmailMessa
 import { mailSendLater } from '../mail/transport.server';
 import { passwordHash } from './password';
 import type { InvitationAcceptSchema, SignUp } from './schemas';
+import { signInLockEnd } from './sign-in-lockout.server';
 import { tokenHash, tokenNew } from './tokens.server';
 
 /** A verification link works for 48 hours (common practice, no source). */
@@ -147,8 +148,9 @@ export async function passwordResetRequest(email: string, ctx: FlowContext): Pro
 }
 
 /**
- * Uses a reset token: sets the new password, marks the address verified (the mail reached it) and returns
- * the account; the caller ends every session and opens a new one.
+ * Uses a reset token: sets the new password, marks the address verified (the mail reached it), ends any
+ * sign-in lock (the mail proved the owner) and returns the account; the caller ends every session and opens a
+ * new one.
  */
 export async function passwordResetComplete(token: string, password: string): Promise<AccountRow> {
   const hash = await passwordHash(password);
@@ -157,6 +159,7 @@ export async function passwordResetComplete(token: string, password: string): Pr
   if (!account || account.deactivated_at) throw new InputError(USED_LINK, { token: [USED_LINK] });
   await accountPasswordSet(account.id, hash);
   await accountEmailVerify(account.id);
+  await signInLockEnd(account.email);
   await auditRecord({
     actorId: account.id,
     action: 'account.password_reset',

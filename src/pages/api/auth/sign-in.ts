@@ -5,6 +5,7 @@ import { housekeepingMaybe } from '../../../lib/auth/housekeeping.server';
 import { RATE_LIMITS } from '../../../lib/auth/rate-limit-rules';
 import { rateLimitEnforce, rateLimitReset } from '../../../lib/auth/rate-limit.server';
 import { SignInSchema } from '../../../lib/auth/schemas';
+import { signInFailureCount, signInLockEnd, signInLockEnforce } from '../../../lib/auth/sign-in-lockout.server';
 import { userSessionStart } from '../../../lib/auth/session.server';
 import { signInCheck, signInWarm } from '../../../lib/auth/sign-in.server';
 import { siteUrl } from '../../../lib/auth/site-url';
@@ -17,14 +18,21 @@ signInWarm();
 
 const WRONG = 'That e-mail and password do not match an account. Check both, or reset your password.';
 
-/** Signs in with e-mail and password; unknown e-mail and wrong password get the same 401 in about the same time. */
+/**
+ * Signs in with e-mail and password; unknown e-mail and wrong password get the same 401 in about the same time.
+ * Wrong passwords in a row lock the address for longer each time (src/lib/auth/sign-in-lockout.ts): 429.
+ */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
   const input = parseInput(SignInSchema, await readJson(context.request, 16_000), 'sign-in');
   await rateLimitEnforce(RATE_LIMITS.signInIp, clientIp(context));
   await rateLimitEnforce(RATE_LIMITS.signInAccount, input.email);
+  await signInLockEnforce(input.email);
   const check = await signInCheck(input.email, input.password);
   if (!check.ok) {
-    if (check.reason === 'credentials') throw new AuthenticationError(WRONG);
+    if (check.reason === 'credentials') {
+      await signInFailureCount(input.email);
+      throw new AuthenticationError(WRONG);
+    }
     if (check.reason === 'deactivated') {
       throw new ForbiddenError('This account has been deactivated. Ask an admin of your outreach office.');
     }
@@ -32,6 +40,7 @@ export const POST = endpoint({ access: ['anyone'] }, async (context) => {
     throw new ForbiddenError(`Confirm your e-mail address first: we have sent a new link to ${check.account.email}.`);
   }
   await rateLimitReset(RATE_LIMITS.signInAccount, input.email);
+  await signInLockEnd(input.email);
   housekeepingMaybe(context.locals.requestId);
   await userSessionStart(context, check.account.id);
   return {
