@@ -4,7 +4,7 @@
  * and the sheet's number of blank rows sized to fill the page.
  */
 import type { PdfFonts } from '../render/pdf-kit';
-import { PDF_FONT_FAMILY } from '../render/pdf-kit';
+import { pdfFontUse } from '../render/pdf-fonts';
 import { TEST_KIND_LABELS } from './activity-facets';
 import type { ActivityPaper } from './activity-links';
 import type { Activity, DataSheetColumn } from './activity-schema';
@@ -66,7 +66,7 @@ function dataSheetTable(flow: PdfFlow, columns: readonly DataSheetColumn[], rows
   const total = weights.reduce((a, b) => a + b, 0);
   const xs = [FLOW_MARGIN_MM];
   for (const w of weights) xs.push(xs.at(-1)! + (w / total) * widthMm);
-  doc.setFont(PDF_FONT_FAMILY, 'bold');
+  pdfFontUse(doc, true);
   doc.setFontSize(NAME_PT);
   const names = columns.map((c, i): string[] =>
     doc.splitTextToSize(c.name, xs[i + 1]! - xs[i]! - 2).slice(0, NAME_LINES_MAX),
@@ -85,12 +85,12 @@ function dataSheetTable(flow: PdfFlow, columns: readonly DataSheetColumn[], rows
   doc.setTextColor('#1b2330');
   columns.forEach((c, i) => {
     const cx = (xs[i]! + xs[i + 1]!) / 2;
-    doc.setFont(PDF_FONT_FAMILY, 'bold');
+    pdfFontUse(doc, true);
     doc.setFontSize(NAME_PT);
     doc.text(names[i]!, cx, top + HEADER_PAD_MM, { baseline: 'top', align: 'center' });
     if (c.unit) {
       // Every unit on one line under the tallest name, so the units of a table line up.
-      doc.setFont(PDF_FONT_FAMILY, 'normal');
+      pdfFontUse(doc, false);
       doc.setFontSize(UNIT_PT);
       doc.text(`(${c.unit})`, cx, top + unitTopMm, { baseline: 'top', align: 'center' });
     }

@@ -5,7 +5,7 @@
  * in points, 1 pt = 1/72 in, ISO 32000-1:2008 §8.3.2.3). Pure: the caller passes the font bytes.
  */
 import { jsPDF } from 'jspdf';
-import { PDF_FONT_FAMILY, pdfBase64, type PdfFonts } from '../render/pdf-kit';
+import { pdfFontsAdd, pdfFontUse, type PdfFonts } from '../render/pdf-fonts';
 import type { ActivityPaper } from './activity-links';
 
 const PT_PER_MM = 72 / 25.4;
@@ -26,11 +26,7 @@ export interface PdfFlow {
 /** A new document on Letter or A4 with KitwrightSans registered and the cursor at the top margin. */
 export function pdfFlowNew(paper: ActivityPaper, fonts: PdfFonts, title: string, subject: string): PdfFlow {
   const doc = new jsPDF({ unit: 'mm', format: paper, orientation: 'portrait', compress: true, putOnlyUsedFonts: true });
-  doc.addFileToVFS('KitwrightSans-Regular.ttf', pdfBase64(fonts.fontRegular));
-  doc.addFont('KitwrightSans-Regular.ttf', PDF_FONT_FAMILY, 'normal');
-  doc.addFileToVFS('KitwrightSans-Bold.ttf', pdfBase64(fonts.fontBold));
-  doc.addFont('KitwrightSans-Bold.ttf', PDF_FONT_FAMILY, 'bold');
-  doc.setFont(PDF_FONT_FAMILY, 'normal');
+  pdfFontsAdd(doc, fonts);
   doc.setProperties({ title, subject, creator: 'Kitwright' });
   return {
     doc,
@@ -73,7 +69,7 @@ interface TextOptions {
 export function pdfFlowText(flow: PdfFlow, text: string, opts: TextOptions = {}): void {
   const { sizePt = 10.5, bold = false, color = INK, indentMm = 0, rightMm = 0, afterMm = 2 } = opts;
   const { doc } = flow;
-  doc.setFont(PDF_FONT_FAMILY, bold ? 'bold' : 'normal');
+  pdfFontUse(doc, bold);
   doc.setFontSize(sizePt);
   doc.setTextColor(color);
   const lines: string[] = text ? doc.splitTextToSize(text, pdfFlowTextWidth(flow) - indentMm - rightMm) : [];
@@ -99,7 +95,7 @@ export function pdfFlowList(flow: PdfFlow, items: readonly string[], numbered = 
   const indentMm = 7;
   items.forEach((item, i) => {
     pdfFlowEnsure(flow, pdfFlowLineMm(10.5));
-    doc.setFont(PDF_FONT_FAMILY, numbered ? 'bold' : 'normal');
+    pdfFontUse(doc, numbered);
     doc.setFontSize(10.5);
     doc.setTextColor(numbered ? INK : SOFT);
     doc.text(numbered ? `${i + 1}.` : '•', FLOW_MARGIN_MM + 1, flow.y, { baseline: 'top' });
@@ -116,7 +112,7 @@ export interface PdfFlowBlock extends TextOptions {
 /** Height a paragraph will take, mm, spacing after included. */
 export function pdfFlowMeasure(flow: PdfFlow, block: PdfFlowBlock): number {
   const { sizePt = 10.5, bold = false, indentMm = 0, rightMm = 0, afterMm = 2 } = block;
-  flow.doc.setFont(PDF_FONT_FAMILY, bold ? 'bold' : 'normal');
+  pdfFontUse(flow.doc, bold);
   flow.doc.setFontSize(sizePt);
   const lines: string[] = block.text
     ? flow.doc.splitTextToSize(block.text, pdfFlowTextWidth(flow) - indentMm - rightMm)
@@ -152,7 +148,7 @@ export function pdfFlowFooters(flow: PdfFlow, left: string): void {
   const pages = doc.getNumberOfPages();
   for (let n = 1; n <= pages; n++) {
     doc.setPage(n);
-    doc.setFont(PDF_FONT_FAMILY, 'normal');
+    pdfFontUse(doc, false);
     doc.setFontSize(8);
     doc.setTextColor(SOFT);
     const y = flow.heightMm - FLOW_MARGIN_MM / 2;

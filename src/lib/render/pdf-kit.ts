@@ -1,7 +1,8 @@
 /**
  * The kit as one PDF, one page per sheet at the sheet's exact size (jspdf writes the MediaBox in points,
- * 1 pt = 1/72 in, ISO 32000-1:2008 §8.3.2.3), drawn as vector paths with the shipped KitwrightSans font
- * embedded. Pure: the caller passes the font bytes (the server reads them with fonts.server.ts).
+ * 1 pt = 1/72 in, ISO 32000-1:2008 §8.3.2.3), drawn as vector paths with subsets of the shipped KitwrightSans
+ * faces embedded (pdf-fonts.ts). Pure: the caller passes the font bytes (the server reads them with
+ * fonts.server.ts).
  */
 import { jsPDF } from 'jspdf';
 import type { Vec2Mm } from '../geometry/types';
@@ -9,17 +10,11 @@ import { placementApply } from '../layout/placement';
 import type { KitLayout, LaidOutSheet } from '../layout/types';
 import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { pieceLines } from './piece-lines';
+import { pdfFontsAdd, pdfFontUse } from './pdf-fonts';
+import type { PdfFonts } from './pdf-fonts';
 import { sheetScene } from './sheet-scene';
 
-export interface PdfFonts {
-  /** KitwrightSans-Regular.ttf, the whole file. */
-  fontRegular: Uint8Array;
-  /** KitwrightSans-Bold.ttf, the whole file. */
-  fontBold: Uint8Array;
-}
-
-/** Family name under which the fonts are registered in the PDF. */
-export const PDF_FONT_FAMILY = 'KitwrightSans';
+export type { PdfFonts } from './pdf-fonts';
 const PT_PER_MM = 72 / 25.4;
 
 /** The PDF bytes of a kit; a kit without sheets gives a PDF of its single empty first page layout. */
@@ -33,10 +28,7 @@ export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
     compress: true,
     putOnlyUsedFonts: true,
   });
-  doc.addFileToVFS('KitwrightSans-Regular.ttf', pdfBase64(fonts.fontRegular));
-  doc.addFont('KitwrightSans-Regular.ttf', PDF_FONT_FAMILY, 'normal');
-  doc.addFileToVFS('KitwrightSans-Bold.ttf', pdfBase64(fonts.fontBold));
-  doc.addFont('KitwrightSans-Bold.ttf', PDF_FONT_FAMILY, 'bold');
+  pdfFontsAdd(doc, fonts);
   doc.setProperties({
     title: kit.title,
     subject: `Paper model kit, scale 1:${kit.scaleDenominator}`,
@@ -53,7 +45,7 @@ function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
   // Labels are laid out with the embedded font's own advance widths (jspdf's getTextWidth, in mm).
   const scene = sheetScene(kit, sheet, (text, sizeMm, bold) => {
-    doc.setFont(PDF_FONT_FAMILY, bold ? 'bold' : 'normal');
+    pdfFontUse(doc, bold);
     doc.setFontSize(sizeMm * PT_PER_MM);
     return doc.getTextWidth(text);
   });
@@ -83,7 +75,7 @@ function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
   for (const stroke of scene.strokes) pdfPolylines(doc, [stroke.points], stroke);
   doc.setTextColor(TEXT_COLOR);
   for (const t of scene.texts) {
-    doc.setFont(PDF_FONT_FAMILY, t.bold ? 'bold' : 'normal');
+    pdfFontUse(doc, t.bold);
     doc.setFontSize(t.sizeMm * PT_PER_MM);
     const half = t.anchor === 'middle' ? doc.getTextWidth(t.text) / 2 : 0;
     const x = t.atMm[0] - half * Math.cos(t.angleRad);
@@ -116,12 +108,4 @@ function pdfPolygonFill(doc: jsPDF, polygon: readonly Vec2Mm[]) {
   for (let i = 1; i < polygon.length; i++) doc.lineTo(polygon[i]![0], polygon[i]![1]);
   doc.close();
   doc.fill();
-}
-
-/** Base64 of bytes without Node's Buffer (btoa exists in browsers and Node ≥ 16). */
-export function pdfBase64(bytes: Uint8Array): string {
-  let binary = '';
-  const chunk = 0x8000;
-  for (let i = 0; i < bytes.length; i += chunk) binary += String.fromCharCode(...bytes.subarray(i, i + chunk));
-  return btoa(binary);
 }

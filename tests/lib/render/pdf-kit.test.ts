@@ -113,7 +113,8 @@ describe('pdfKit', () => {
   test('embeds the KitwrightSans subset rather than a standard font', async () => {
     const bytes = pdfKit(fixtureKit(), fonts);
     const raw = new TextDecoder('latin1').decode(bytes);
-    expect(raw).toMatch(/\/BaseFont \/KitwrightSans/);
+    expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+KitwrightSans-Regular/);
+    expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+KitwrightSans-Bold/);
     expect(raw).not.toMatch(/\/BaseFont \/Helvetica/);
     // Two embedded subsets of ~35 kB each, compressed with the page streams: well under the 760 kB full font.
     expect(bytes.length).toBeLessThan(200_000);

@@ -2,12 +2,11 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { jsPDF } from 'jspdf';
 import { describe, expect, test } from 'vitest';
-import { pdfBase64 } from '../../../src/lib/render/pdf-kit';
 import { TEXT_WIDTH_REGULAR } from '../../../src/lib/render/text-width-table';
 import { textWidthEm, textWidthMm } from '../../../src/lib/render/text-width';
 
 const fontFile = (name: string) =>
-  pdfBase64(new Uint8Array(readFileSync(fileURLToPath(new URL(`../../../assets/fonts/${name}`, import.meta.url)))));
+  readFileSync(fileURLToPath(new URL(`../../../assets/fonts/${name}`, import.meta.url))).toString('base64');
 
 describe('textWidthEm', () => {
   // Reference: jspdf's own TTF parser measuring the same shipped font (getStringUnitWidth, in em).
