@@ -6,15 +6,21 @@ import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { COMPAT_LIBRARIES, PREACT_ISLANDS, REACT_ISLANDS, islandRuntimes } from './config/island-runtimes.mjs';
 import { originAllowedHostnames } from './src/lib/http/origin-check.ts';
+import { precompress } from './config/precompress.mjs';
 
 export default defineConfig({
   output: 'server',
   // KW_OUT_DIR lets two test runs on one machine build side by side (DEVELOPERS.md).
   outDir: process.env.KW_OUT_DIR ?? './dist',
-  adapter: node({ mode: 'standalone' }),
+  // Middleware mode: scripts/serve.ts is the server (static files, compression, the socket address).
+  adapter: node({ mode: 'middleware' }),
   // Preact islands are tagged for their renderer (config/island-runtimes.mjs); Astro asks React first about
   // the rest, which it answers without rendering them.
-  integrations: [react({ include: REACT_ISLANDS }), preact({ include: PREACT_ISLANDS, exclude: REACT_ISLANDS })],
+  integrations: [
+    react({ include: REACT_ISLANDS }),
+    preact({ include: PREACT_ISLANDS, exclude: REACT_ISLANDS }),
+    precompress(),
+  ],
   server: {
     host: process.env.HOST ?? '127.0.0.1',
     port: Number(process.env.PORT ?? 4321),

@@ -1,28 +1,29 @@
 /**
  * The client's IP address for rate limits. Only when TRUST_PROXY is a number N ≥ 1 (that many proxies of ours
  * in front) is X-Forwarded-For read, and then its N-th address from the right — never the leftmost one, which
- * the client writes itself. Otherwise the socket's address; but Astro 5's node adapter reports the leftmost
- * X-Forwarded-For entry as clientAddress when the header is present (astro/dist/core/app/node.js), so a
- * request that carries the header without a trusted proxy is counted in one shared bucket: rotating forged
- * addresses then buys no fresh limits.
+ * the client writes itself. Otherwise the socket's address: the server entry (scripts/serve.ts) drops an
+ * X-Forwarded-For header before Astro reads it, since Astro's node adapter would report the header's leftmost
+ * entry as clientAddress (astro/dist/core/app/node.js), and a forged header must not move a caller into a
+ * bucket of its own.
  */
 import type { APIContext } from 'astro';
 
-/** The bucket of requests that name a forwarded address no trusted proxy vouches for. */
-export const UNTRUSTED_FORWARDED = 'untrusted-forwarded';
+/** How many proxies of ours stand in front (TRUST_PROXY); 0 when unset or not a whole number ≥ 1. */
+export function trustedProxyHops(): number {
+  const hops = Number(process.env.TRUST_PROXY ?? 0);
+  return Number.isInteger(hops) && hops >= 1 ? hops : 0;
+}
 
 /** The address to count attempts against; "unknown" when the adapter cannot tell. */
 export function clientIp(context: Pick<APIContext, 'clientAddress' | 'request'>): string {
-  const hops = Number(process.env.TRUST_PROXY ?? 0);
-  if (Number.isInteger(hops) && hops >= 1) {
+  const hops = trustedProxyHops();
+  if (hops >= 1) {
     const chain = (context.request.headers.get('x-forwarded-for') ?? '')
       .split(',')
       .map((part) => part.trim())
       .filter(Boolean);
     const candidate = chain[chain.length - hops];
     if (candidate) return candidate;
-  } else if (context.request.headers.has('x-forwarded-for')) {
-    return UNTRUSTED_FORWARDED;
   }
   try {
     return context.clientAddress || 'unknown';

@@ -1,0 +1,85 @@
+/**
+ * The production server (`npm start` and `npm test` run it; so can a deployment: `tsx scripts/serve.ts`).
+ * node:http in front of the Astro build, which the node adapter makes in middleware mode:
+ *
+ * 1. Static files of the build (`dist/client`) through sirv, which lists the folder once at start: API and page
+ *    routes never stat the disk. It answers the `.br`/`.gz` twins written at build (config/precompress.mjs) to
+ *    clients that accept them; `/_astro/*` names carry a content hash, so they are cached as immutable.
+ * 2. Everything else through compression (brotli or gzip as the client accepts), flushed after every write of a
+ *    streamed NDJSON answer so each stage line reaches the client when it happens, then into Astro.
+ * 3. The client's address is the socket's: an X-Forwarded-For header is dropped before Astro reads it (Astro
+ *    would report its leftmost entry as clientAddress) unless TRUST_PROXY says proxies of ours put it there.
+ */
+import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
+import { join, resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import compression from 'compression';
+import sirv from 'sirv';
+import { trustedProxyHops } from '../src/lib/auth/client-ip.server';
+import { PROGRESS_CONTENT_TYPE } from '../src/lib/http/progress-lines';
+
+/** Cache-Control of hashed build assets: a new build gives a changed file a new name. */
+export const IMMUTABLE_CACHE_CONTROL = 'public, max-age=31536000, immutable';
+/** Cache-Control of other static files (favicon): a browser asks again, and gets a 304 by ETag. */
+const REVALIDATE_CACHE_CONTROL = 'public, max-age=0, must-revalidate';
+
+type Handler = (req: IncomingMessage, res: ServerResponse, next?: () => void) => void | Promise<void>;
+
+const outDir = resolve(process.env.KW_OUT_DIR ?? 'dist');
+const { handler: astro } = (await import(pathToFileURL(join(outDir, 'server', 'entry.mjs')).href)) as {
+  handler: Handler;
+};
+
+const assets = sirv(join(outDir, 'client'), {
+  dev: false,
+  etag: true,
+  brotli: true,
+  gzip: true,
+  // Only real files: a page name never resolves to an .html file here.
+  extensions: [],
+  setHeaders: (res, pathname) =>
+    res.setHeader(
+      'cache-control',
+      pathname.startsWith('/_astro/') ? IMMUTABLE_CACHE_CONTROL : REVALIDATE_CACHE_CONTROL,
+    ),
+});
+
+const compress = compression({
+  // Tiny bodies (most JSON errors) cost more to compress than they save; 1 kB is the middleware's own default.
+  threshold: 1024,
+  // The media-type list the middleware consults does not know NDJSON; its result line holds every sheet's SVG.
+  filter: (req, res) =>
+    String(res.getHeader('content-type') ?? '').startsWith(PROGRESS_CONTENT_TYPE) || compression.filter(req, res),
+});
+
+/** Flushes the compressor after each write of a streamed progress answer, so no stage line waits in a buffer. */
+function flushStreamedLines(res: ServerResponse & { flush?: () => void }): void {
+  const write = res.write.bind(res) as (...args: unknown[]) => boolean;
+  res.write = ((...args: unknown[]) => {
+    const ok = write(...args);
+    if (String(res.getHeader('content-type') ?? '').startsWith(PROGRESS_CONTENT_TYPE)) res.flush?.();
+    return ok;
+  }) as ServerResponse['write'];
+}
+
+const hops = trustedProxyHops();
+const server = createServer((req, res) => {
+  if (hops === 0) delete req.headers['x-forwarded-for'];
+  assets(req, res, () =>
+    compress(req as Parameters<typeof compress>[0], res as Parameters<typeof compress>[1], () => {
+      flushStreamedLines(res);
+      void astro(req, res);
+    }),
+  );
+});
+
+const host = process.env.HOST ?? '127.0.0.1';
+const port = Number(process.env.PORT ?? 4321);
+server.listen(port, host, () => console.log(`Kitwright serving http://${host}:${port} from ${outDir}`));
+
+for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  process.on(signal, () => {
+    server.close(() => process.exit(0));
+    server.closeAllConnections();
+  });
+}
