@@ -25,7 +25,7 @@ async function* filesUnder(dir) {
   }
 }
 
-/** Writes the twins under `dir`; returns how many files got at least one. */
+/** Writes the twins under `dir`; returns how many files got at least one. @param {string} dir */
 export async function precompressFolder(dir) {
   let count = 0;
   for await (const path of filesUnder(dir)) {

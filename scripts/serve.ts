@@ -65,12 +65,12 @@ function flushStreamedLines(res: ServerResponse & { flush?: () => void }): void 
 const hops = trustedProxyHops();
 const server = createServer((req, res) => {
   if (hops === 0) delete req.headers['x-forwarded-for'];
-  assets(req, res, () =>
+  assets(req, res, () => {
     compress(req as Parameters<typeof compress>[0], res as Parameters<typeof compress>[1], () => {
       flushStreamedLines(res);
       void astro(req, res);
-    }),
-  );
+    });
+  });
 });
 
 const host = process.env.HOST ?? '127.0.0.1';
