@@ -2,8 +2,10 @@
  * Benchmark (a script, not a test): Welch PSD of a one-hour, 100 Hz, three-axis record (360 000 samples per
  * axis) with the vibration tool's default segment length, and the whole vibration analysis of the same
  * record. Prints min/median/max ms over the runs after warm-up and the peak resident set size.
- * Target: PSD median ≤ 300 ms on the 2-core reference machine. Then the deploy-test and interference tools at
- * their largest accepted inputs (target: median ≤ 20 ms each).
+ * Target: PSD median ≤ 300 ms on the 2-core reference machine. Then the deploy-test, interference,
+ * four-point and launch-stack tools at their largest accepted inputs (four-point: FOUR_POINT_MAX_POINTS
+ * points; launch stack: STACK_PROBES_MAX probes of a 256-facet body), parse and saved result included
+ * (target: median ≤ 20 ms each).
  */
 import { performance } from 'node:perf_hooks';
 import { DEPLOYMENT_MAX_TRIALS, DeploymentInputSchema, deploymentAnalyse } from '../../src/lib/analysis/deployment';
@@ -13,10 +15,18 @@ import {
   InterferenceInputSchema,
   interferenceRank,
 } from '../../src/lib/analysis/interference';
-import { deploymentSavedResult, interferenceSavedResult } from '../../src/lib/analysis/saved-result-tools';
+import {
+  deploymentSavedResult,
+  fourPointSavedResult,
+  interferenceSavedResult,
+  launchStackSavedResult,
+} from '../../src/lib/analysis/saved-result-tools';
 import { VibrationInputSchema, vibrationAnalyse } from '../../src/lib/analysis/vibration';
 import { vibrationInputFromCsv } from '../../src/lib/analysis/vibration-csv';
 import { welchDefaultSegmentLength, welchPsd } from '../../src/lib/analysis/welch-psd';
+import { FOUR_POINT_MAX_POINTS, FourPointInputSchema, fourPointGradient } from '../../src/lib/analysis/four-point';
+import { LaunchStackInputSchema, launchStackAnalyse } from '../../src/lib/analysis/launch-stack';
+import { CYLINDER_FACETS_MAX, STACK_PROBES_MAX } from '../../src/lib/geometry/model-schema';
 
 const FS = 100;
 const N = 3600 * FS;
@@ -121,3 +131,37 @@ console.log(`interference: ${JSON.stringify(interferenceBody).length.toLocaleStr
 measure('interference: parse, rank, saved result (12 devices × 100 readings)', () => {
   interferenceSavedResult(interferenceRank(InterferenceInputSchema.parse(interferenceBody)));
 });
+
+// Four-point and launch stack, their largest accepted inputs.
+const fourPointBody = {
+  unit: '°C',
+  points: Array.from({ length: FOUR_POINT_MAX_POINTS }, () => {
+    const p = [noise() * 100, noise() * 100, noise() * 100];
+    return { positionCm: p, value: 20 + 0.1 * p[0]! - 0.05 * p[2]! + noise() };
+  }),
+};
+measure(
+  `four-point gradient, ${FOUR_POINT_MAX_POINTS} points (least squares): parse, gradient, saved result`,
+  () => {
+    const input = FourPointInputSchema.parse(fourPointBody);
+    fourPointSavedResult(input, fourPointGradient(input));
+  },
+  200,
+);
+const launchStackBody = {
+  body: { kind: 'cylinder', diameterM: 2, heightM: 1, facets: CYLINDER_FACETS_MAX },
+  stack: { count: STACK_PROBES_MAX, ring: { heightM: 0.2, diameterM: 1.6 }, adapter: { heightM: 0.8, diameterM: 2 } },
+  probeMassKg: 450,
+  ringMassKg: 20,
+  adapterMassKg: 120,
+  // Too short on purpose: the calculator also searches how many probes fit and what cylinder would do.
+  fairing: { diameterM: 3, cylinderHeightM: 5, coneHeightM: 3, clearanceM: 0.05 },
+};
+measure(
+  `launch stack, ${STACK_PROBES_MAX} probes of a ${CYLINDER_FACETS_MAX}-facet body: parse, analyse, saved result`,
+  () => {
+    const input = LaunchStackInputSchema.parse(launchStackBody);
+    launchStackSavedResult(input, launchStackAnalyse(input));
+  },
+  200,
+);

@@ -16,6 +16,8 @@ export const TEST_KINDS = [
   'scale',
   'deployment',
   'interference',
+  'four-point',
+  'launch-stack',
 ] as const;
 export type TestKind = (typeof TEST_KINDS)[number];
 
@@ -31,6 +33,8 @@ export const TEST_KIND_LABELS: Record<TestKind, string> = {
   scale: 'Scale and size',
   deployment: 'Deployment (booms and panels)',
   interference: 'Interference (noisy devices)',
+  'four-point': 'Four-point measurement (gradients)',
+  'launch-stack': 'Launch stack (fit and balance)',
 };
 
 export const GRADE_BAND_LABELS: Record<GradeBand, string> = {

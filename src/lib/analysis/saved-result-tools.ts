@@ -6,6 +6,8 @@ import type { CleanroomResult } from './cleanroom';
 import type { DeploymentResult } from './deployment';
 import type { InterferenceResult } from './interference';
 import type { EquilibriumTemperatureInput, EquilibriumTemperatureResult } from './equilibrium-temperature';
+import type { FourPointInput, FourPointResult } from './four-point';
+import type { LaunchStackInput, LaunchStackResult } from './launch-stack';
 import type { MagneticResult } from './magnetic';
 import type { OrbitEclipseInput, OrbitEclipseResult } from './orbit-eclipse';
 import type { PsdProfileResult } from './psd-profile';
@@ -232,6 +234,52 @@ export function interferenceSavedResult(r: InterferenceResult): SavedResult {
       xLabel: 'Rank (1 needs the most room)',
       yLabel: 'Keep-out distance (cm)',
       series: bars,
+    },
+  );
+}
+
+/** Saved form of a four-point result: the gradient's x, y and z parts as bars (unit per cm). */
+export function fourPointSavedResult(input: FourPointInput, r: FourPointResult): SavedResult {
+  const unit = input.unit ? `${input.unit}/cm` : 'per cm';
+  return savedResultBuild(
+    'four-point',
+    `${input.points.length} points, elongation ${r.quality.elongation.toFixed(2)}, planarity ${r.quality.planarity.toFixed(2)}`,
+    r,
+    {
+      kind: 'bar',
+      title: `Gradient ${+r.gradientMagnitudePerCm.toPrecision(3)} ${unit}`,
+      xLabel: 'Component: x (1), y (2), z (3)',
+      yLabel: `Gradient (${unit})`,
+      series: (['x', 'y', 'z'] as const).map((axis, i) => series(axis, [[i + 1, r.gradientPerCm[i]!]])),
+    },
+  );
+}
+
+/** Saved form of a launch stack: the stack's radius against height beside the fairing's usable radius (m). */
+export function launchStackSavedResult(input: LaunchStackInput, r: LaunchStackResult): SavedResult {
+  const f = input.fairing;
+  const outline = r.parts.flatMap((p): [number, number][] => [
+    [p.bottomM, p.radiusM],
+    [p.topM, p.radiusM],
+  ]);
+  const top = f.cylinderHeightM + f.coneHeightM;
+  return savedResultBuild(
+    'launch-stack',
+    `${r.probes} probe(s), stack ${r.heightM.toFixed(2)} m, fairing ${f.diameterM} m × ${f.cylinderHeightM} m + ${f.coneHeightM} m cone`,
+    r,
+    {
+      kind: 'line',
+      title: r.fits ? 'The stack fits the fairing' : 'The stack does not fit the fairing',
+      xLabel: 'Height above the adapter base (m)',
+      yLabel: 'Radius (m)',
+      series: [
+        series('stack', outline),
+        series('fairing', [
+          [0, f.diameterM / 2],
+          [f.cylinderHeightM, f.diameterM / 2],
+          [top, 0],
+        ]),
+      ],
     },
   );
 }

@@ -24,6 +24,8 @@ export const SAVED_RESULT_TOOLS = [
   'equilibrium-temperature',
   'deployment',
   'interference',
+  'four-point',
+  'launch-stack',
 ] as const;
 
 const text = (max: number) => TextSchema.trim().max(max);

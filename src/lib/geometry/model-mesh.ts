@@ -10,6 +10,7 @@ import { appendageDirection, appendageFootMm, frameAroundAxis } from './appendag
 import { deployablePanelFrame } from './panel-pattern';
 import { CHORD_TOLERANCE_MM } from './paper';
 import { vec3Combine, vec3Cross, vec3Sub, vec3Length } from './vec';
+import { launchStackLoftRings } from './launch-stack';
 
 /** Slab thickness of panels in the mesh, mm at kit scale (a printable plate; common practice, no source). */
 export const PANEL_MESH_THICKNESS_MM = 1;
@@ -22,6 +23,10 @@ export function modelMesh(model: Model, scaleDenominator: number): ModelMesh {
   const positions: number[] = [];
   const indices: number[] = [];
   const loft = (bottom: Vec3Mm[], top: Vec3Mm[]) => meshLoft(positions, indices, bottom, top);
+  if (model.stack) {
+    for (const part of launchStackLoftRings(model, scaleDenominator)) loft(part.bottom, part.top);
+    return { positions: Float32Array.from(positions), indices: Uint32Array.from(indices) };
+  }
   const faces = bodyFaces(model.body, scaleDenominator);
   const sides = faces.slice(0, -2);
   loft(

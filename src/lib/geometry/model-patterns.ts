@@ -1,6 +1,7 @@
 /**
  * The flat patterns of a whole model at a scale on a paper weight: the body net first (step 1), then one
- * step per appendage in the model's order, tab numbers unique across the kit, and the wire boom threads.
+ * step per appendage in the model's order, tab numbers unique across the kit, and the wire boom threads;
+ * a launch stack's parts come from launch-stack.ts.
  * Flat mm per piece, model mm at kit scale (see types.ts).
  */
 import { z } from 'zod';
@@ -14,6 +15,7 @@ import { deployablePanelFrame, panelBodyLabel, panelPiece } from './panel-patter
 import { wireAnchorPiece, wireAnchorPlacement, wireBoomThread } from './wire-boom';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN, paperOverlapMm, paperTabDepthMm } from './paper';
 import { vec3Combine } from './vec';
+import { launchStackPieces } from './launch-stack';
 
 /** Largest scale denominator accepted (1:100 000): beyond it every real spacecraft is dust on paper. */
 export const SCALE_DENOMINATOR_MAX = 100_000;
@@ -41,6 +43,7 @@ export interface ModelPatterns {
 /** Every piece and thread of a parsed model at options.scaleDenominator on options.paperGsm paper. */
 export function modelPatterns(model: Model, options: PatternOptions): ModelPatterns {
   const { scaleDenominator: N, paperGsm: gsm } = options;
+  if (model.stack) return { pieces: launchStackPieces(model, N, gsm), threads: [] };
   const k = 1000 / N;
   let number = 0;
   const next = () => ++number;

@@ -17,6 +17,10 @@ export const MODEL_LENGTH_MAX_M = 1000;
 export const APPENDAGES_MAX = 64;
 /** Tilt of a boom, dish or nozzle away from its face's outward normal, degrees (below 90 so it leaves the face). */
 export const APPENDAGE_TILT_MAX_DEG = 80;
+/** Most probes on one launch adapter in a stack model. */
+export const STACK_PROBES_MAX = 8;
+/** Wall facets of a stack's separation rings and adapter: few enough for a one-piece paper net. */
+export const STACK_DRUM_FACETS = 8;
 /** Small-satellite sizes with their 10 cm unit; see SMALLSAT_SIZES_M in body-shape.ts. */
 export const SMALLSAT_SIZES = ['1U', '2U', '3U', '6U', '12U'] as const;
 
@@ -153,6 +157,25 @@ const AppendageSchema = z.discriminatedUnion('kind', [
   }),
 ]);
 
+/** A short round part of a launch stack (separation ring, adapter), drawn as a STACK_DRUM_FACETS-sided drum. */
+const StackDrumSchema = (what: string) =>
+  z.object({ heightM: lengthM(`the ${what} height`), diameterM: lengthM(`the ${what} diameter`) });
+
+/**
+ * A launch stack: `count` copies of the model's body stacked on one launch adapter, a separation ring under
+ * each; the probes ride stowed, so a stack model has no appendages. See launch-stack.ts.
+ */
+export const LaunchStackSchema = z.object({
+  count: z
+    .number()
+    .int('the number of probes must be a whole number')
+    .min(1, 'a stack needs at least 1 probe')
+    .max(STACK_PROBES_MAX, `a stack holds at most ${STACK_PROBES_MAX} probes`),
+  ring: StackDrumSchema('separation ring'),
+  adapter: StackDrumSchema('adapter'),
+});
+export type LaunchStack = z.infer<typeof LaunchStackSchema>;
+
 /** The cross-field checks walk every face (a count bounded above) and appendage: they run only on a bounded model. */
 export const ModelSchema = refineValid(
   z.object({
@@ -165,8 +188,17 @@ export const ModelSchema = refineValid(
       .array(AppendageSchema)
       .max(APPENDAGES_MAX, `a model has at most ${APPENDAGES_MAX} appendages`)
       .default([]),
+    /** Present for a launch stack of identical probes (their body) on an adapter. */
+    stack: LaunchStackSchema.optional(),
   }),
   (model, ctx) => {
+    if (model.stack && model.appendages.length > 0) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['appendages'],
+        message: 'a launch stack carries its probes stowed: leave the appendages out of a stack model',
+      });
+    }
     const faces = bodyFaceSizesM(model.body);
     const seen = new Set<string>();
     model.appendages.forEach((a, i) => {

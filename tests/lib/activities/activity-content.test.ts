@@ -25,10 +25,22 @@ describe('content/activities', () => {
         'scale-it',
         'deployment-trials',
         'interference-hunt',
+        'four-point-measurement',
+        'launch-stack',
       ]),
     );
     expect(new Set(activities.map((a) => a.testKind))).toEqual(
-      new Set(['vibration', 'thermal', 'cleanroom', 'magnetic', 'scale', 'deployment', 'interference']),
+      new Set([
+        'vibration',
+        'thermal',
+        'cleanroom',
+        'magnetic',
+        'scale',
+        'deployment',
+        'interference',
+        'four-point',
+        'launch-stack',
+      ]),
     );
   });
 

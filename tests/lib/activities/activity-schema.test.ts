@@ -117,7 +117,7 @@ describe('ActivitySchema', () => {
     const base = activityFixture();
     const bad = { ...base.record.columns[0]!, tool: 'sound' as never };
     expect(problems({ ...base, record: { ...base.record, columns: [bad] } })).toEqual([
-      'record.columns.0.tool: "sound" is not a data tool; use one of vibration, thermal, cleanroom, magnetic, scale, deployment, interference',
+      'record.columns.0.tool: "sound" is not a data tool; use one of vibration, thermal, cleanroom, magnetic, scale, deployment, interference, four-point, launch-stack',
     ]);
     expect(problems({ ...base, slug: 'Shake_Test' })).toEqual([
       'slug: slug must be lower-case words joined by hyphens, like "shake-test"',

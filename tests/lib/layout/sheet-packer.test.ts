@@ -108,6 +108,14 @@ describe('sheetPack', () => {
     }
   });
 
+  test('lays out the Skein launch stack kit at 1:20 on Letter without overlap, inside the margin', () => {
+    const pieces = modelPatterns(demoModel('skein-stack'), { scaleDenominator: 20, paperGsm: 160 }).pieces;
+    const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES.letter, units: 'us', copies: 1 });
+    const placed = new Set(sheets.flatMap((s) => s.placements.map((p) => p.pieceId)));
+    for (const p of pieces) expect(placed.has(p.id), p.id).toBe(true);
+    expectValidSheets(sheets, pieces, 'us');
+  });
+
   test('keeps each placed piece congruent to its flat outline (same area)', () => {
     const pieces = smallKitPieces();
     const sheets = sheetPack(pieces, { sheetSize: SHEET_SIZES.a4, units: 'metric', copies: 1 });

@@ -1,0 +1,16 @@
+/**
+ * POST /api/analysis/four-point — the four-point measurement tool. Body: JSON FourPointInputSchema
+ * (src/lib/analysis/four-point.ts), at most FOUR_POINT_JSON_MAX_BYTES bytes (413 above). Answers
+ * { result, savedResult }; a flat or degenerate formation is a 400 that says why.
+ */
+import { endpoint } from '../../../lib/http/endpoint';
+import { readJson } from '../../../lib/http/respond';
+import { FOUR_POINT_JSON_MAX_BYTES, FourPointInputSchema, fourPointGradient } from '../../../lib/analysis/four-point';
+import { fourPointSavedResult } from '../../../lib/analysis/saved-result-tools';
+import { parseInput } from '../../../lib/validation';
+
+export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {
+  const input = parseInput(FourPointInputSchema, await readJson(request, FOUR_POINT_JSON_MAX_BYTES));
+  const result = fourPointGradient(input);
+  return { result, savedResult: fourPointSavedResult(input, result) };
+});
