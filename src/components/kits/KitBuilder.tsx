@@ -14,6 +14,8 @@ import type { KitStageDone } from '../../lib/kit/kit-stages';
 import type { KitBuilderProps } from './builder-props';
 import BuildStatus from './BuildStatus';
 import DownloadButtons from './DownloadButtons';
+import PrintPlateSummary from './PrintPlateSummary';
+import PrintTargetFields from './PrintTargetFields';
 import SaveKitPanel from './SaveKitPanel';
 import ScaleAdvice from './ScaleAdvice';
 import ScaleField from './ScaleField';
@@ -53,7 +55,7 @@ export default function KitBuilder(props: KitBuilderProps) {
 }
 
 function KitBuilderForm(props: KitBuilderProps) {
-  const { models, activities, classes, sheetSizes, venues, usualScales, limits, initial } = props;
+  const { models, activities, classes, sheetSizes, venues, printBeds, usualScales, limits, initial } = props;
   const schema = useMemo(() => kitFormSchema(limits), [limits]);
   const { register, watch, setValue, formState } = useForm<KitForm>({
     resolver: zodResolver(schema),
@@ -267,6 +269,15 @@ function KitBuilderForm(props: KitBuilderProps) {
             </div>
           )}
         </div>
+        <PrintTargetFields
+          value={values.print ?? initial.print!}
+          beds={printBeds}
+          nozzlesMm={limits.printNozzlesMm}
+          bedMinMm={limits.printBedMinMm}
+          bedMaxMm={limits.printBedMaxMm}
+          errors={printErrors(err.print)}
+          onChange={(next, now) => change('print', next, now)}
+        />
         <div className="grid grid-cols-2 gap-3">
           <div>
             <label className="field-label" htmlFor="kit-copies">
@@ -359,6 +370,16 @@ function KitBuilderForm(props: KitBuilderProps) {
             />
           </div>
         </section>
+        {data && (
+          <section aria-labelledby="kit-print-h" className="card">
+            <h2 id="kit-print-h" className="text-lg font-bold">
+              3D print
+            </h2>
+            <div className="mt-2">
+              <PrintPlateSummary print={data.print} />
+            </div>
+          </section>
+        )}
         <section aria-labelledby="kit-save-h" className="card flex flex-col gap-4">
           <h2 id="kit-save-h" className="text-lg font-bold">
             Save and download
@@ -385,4 +406,14 @@ function KitBuilderForm(props: KitBuilderProps) {
       </div>
     </div>
   );
+}
+
+/** The messages of the print fields' errors, by field (react-hook-form nests them as the schema does). */
+function printErrors(e: unknown): Partial<Record<'widthMm' | 'depthMm' | 'heightMm' | 'nozzleMm', string>> {
+  const tree = e as { bed?: Record<string, { message?: string }>; nozzleMm?: { message?: string } } | undefined;
+  const out: Partial<Record<'widthMm' | 'depthMm' | 'heightMm' | 'nozzleMm', string>> = {};
+  for (const k of ['widthMm', 'depthMm', 'heightMm'] as const)
+    if (tree?.bed?.[k]?.message) out[k] = tree.bed[k].message;
+  if (tree?.nozzleMm?.message) out.nozzleMm = tree.nozzleMm.message;
+  return out;
 }

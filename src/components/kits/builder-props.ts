@@ -9,6 +9,8 @@ export interface KitBuilderProps {
   classes: { id: string; name: string }[];
   sheetSizes: { id: string; label: string }[];
   venues: { id: string; label: string }[];
+  /** Preset print beds for the STL. */
+  printBeds: { id: string; label: string }[];
   usualScales: number[];
   limits: KitSettingsLimits;
   initial: KitForm;

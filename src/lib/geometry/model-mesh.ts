@@ -46,7 +46,7 @@ export function modelMesh(model: Model, scaleDenominator: number): ModelMesh {
             ? [(a.innerDiameterM ?? 0) / 2, a.diameterM / 2, a.depthM]
             : [a.throatDiameterM / 2, a.exitDiameterM / 2, a.lengthM];
       // Both rings share the segment count of the wider one so the loft's walls pair up.
-      const n = ringSegments(Math.max(r0, r1) * k);
+      const n = meshRingSegments(Math.max(r0, r1) * k);
       const ring = (rMm: number, along: number): Vec3Mm[] => {
         if (rMm === 0) return [vec3Combine([1, foot], [along, axis])];
         return Array.from({ length: n }, (_, i) => {
@@ -98,7 +98,7 @@ export function modelMesh(model: Model, scaleDenominator: number): ModelMesh {
 }
 
 /** Segments for a ring of radius rMm within CHORD_TOLERANCE_MM, between the ring limits. */
-function ringSegments(rMm: number): number {
+export function meshRingSegments(rMm: number): number {
   const step = 2 * Math.acos(Math.max(-1, 1 - CHORD_TOLERANCE_MM / rMm));
   return Math.min(RING_SEGMENTS_MAX, Math.max(RING_SEGMENTS_MIN, Math.ceil((2 * Math.PI) / step)));
 }

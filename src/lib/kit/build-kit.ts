@@ -2,10 +2,10 @@
  * The kit pipeline: a validated request → patterns (model engine) → sheet layout → PDF, SVG per sheet,
  * STL and JSON, with a content hash of the inputs and engine version. Pure; the caller passes the font bytes.
  */
-import { modelMesh } from '../geometry/model-mesh';
 import { modelPatterns } from '../geometry/model-patterns';
 import type { Model } from '../geometry/model-schema';
-import type { ModelMesh, Piece, WireBoomThread } from '../geometry/types';
+import type { Piece, WireBoomThread } from '../geometry/types';
+import { printPlateMesh } from '../layout/print-plate';
 import { cutListRows } from '../layout/cut-list';
 import { sheetPack } from '../layout/sheet-packer';
 import { sheetSize } from '../layout/sheet-sizes';
@@ -17,25 +17,24 @@ import { stlBinary } from '../render/stl';
 import { svgSheet } from '../render/svg-sheet';
 import { contentHash } from './content-hash';
 import { ENGINE_VERSION } from './engine-version';
+import { kitPrintScale, kitPrintView, type KitPrintView } from './kit-print';
 import type { KitRequest } from './kit-request';
 
 /** The model engine as the pipeline uses it (src/lib/geometry provides it; tests may pass fixtures). */
 export interface KitEngine {
   patterns(model: Model, scaleDenominator: number, paperGsm: number): { pieces: Piece[]; threads: WireBoomThread[] };
-  mesh(model: Model, scaleDenominator: number): ModelMesh;
 }
 
 /** The model engine of src/lib/geometry. */
 export const GEOMETRY_KIT_ENGINE: KitEngine = {
   patterns: (model, scaleDenominator, paperGsm) => modelPatterns(model, { scaleDenominator, paperGsm }),
-  mesh: modelMesh,
 };
 
 export type KitStage = 'patterns' | 'layout' | 'pdf' | 'svg' | 'stl' | 'json';
 export type KitOutput = 'pdf' | 'svg' | 'stl' | 'json';
 
 export interface KitBuildOptions {
-  /** The model engine; src/lib/geometry's modelPatterns and modelMesh when left out. */
+  /** The model engine; src/lib/geometry's modelPatterns when left out. */
   engine?: KitEngine;
   /** Which files to make; all four when left out. */
   outputs?: readonly KitOutput[];
@@ -51,7 +50,10 @@ export interface KitBuild {
   contentHash: string;
   pdf?: Uint8Array;
   svgSheets?: string[];
+  /** The print plate of parts on the request's bed (laid flat, gluing order), as the STL holds it. */
   stl?: Uint8Array;
+  /** The STL's scale, parts and substitutes in words (with the STL or the JSON). */
+  print?: KitPrintView;
   json?: string;
 }
 
@@ -98,11 +100,14 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
     await step('svg');
   }
   if (outputs.has('stl')) {
-    build.stl = stlBinary(engine.mesh(request.model, request.scaleDenominator));
+    const print = kitPrintScale(request);
+    build.print = kitPrintView(request, print);
+    build.stl = stlBinary(printPlateMesh(print.plate));
     await step('stl');
   }
   if (outputs.has('json')) {
-    build.json = kitJson(layout, build.contentHash);
+    build.print ??= kitPrintView(request, kitPrintScale(request));
+    build.json = kitJson(layout, build.contentHash, build.print);
     await step('json');
   }
   return build;

@@ -45,7 +45,6 @@ function guardedEngine(request: KitRequest): KitEngine {
       kitScaleGuard(request, result.pieces);
       return result;
     },
-    mesh: GEOMETRY_KIT_ENGINE.mesh,
   };
 }
 

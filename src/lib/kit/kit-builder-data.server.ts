@@ -5,6 +5,7 @@
 import type { Actor } from '../auth/actor';
 import { classListForTeacher } from '../db/classes';
 import { USUAL_SCALE_DENOMINATORS } from '../layout/scale-ratios';
+import { PRINT_BEDS, PRINT_CHOICE_DEFAULT } from '../layout/print-plate';
 import { SHEET_SIZES } from '../layout/sheet-sizes';
 import { VENUES } from '../layout/venues';
 import { AppError } from '../errors';
@@ -45,6 +46,7 @@ export async function kitBuilderProps(
     venue: { ...base.venue },
     scaleDenominator: solve?.suggestedScaleDenominator ?? 20,
     copies: 1,
+    print: PRINT_CHOICE_DEFAULT,
     ...(activity ? { activitySlug: activity.slug } : {}),
   } satisfies KitForm & KitInputs;
   const preview = await kitPreview(initial).catch((err: unknown) => {
@@ -62,6 +64,7 @@ export async function kitBuilderProps(
     classes,
     sheetSizes: Object.values(SHEET_SIZES).map(({ id, label }) => ({ id, label })),
     venues: Object.values(VENUES).map(({ id, label }) => ({ id, label })),
+    printBeds: Object.entries(PRINT_BEDS).map(([id, { label }]) => ({ id, label })),
     usualScales: [...USUAL_SCALE_DENOMINATORS],
     limits: KIT_SETTINGS_LIMITS,
     initial,

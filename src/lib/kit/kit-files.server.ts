@@ -5,7 +5,9 @@
  */
 import { InputError } from '../errors';
 import { stlAscii } from '../render/stl';
-import { GEOMETRY_KIT_ENGINE, type KitBuild, type KitOutput } from './build-kit';
+import { printPlateMesh } from '../layout/print-plate';
+import type { KitBuild, KitOutput } from './build-kit';
+import { kitPrintScale } from './kit-print';
 import type { KitRequest } from './kit-request';
 
 export interface KitFileOptions {
@@ -26,6 +28,11 @@ const TYPES: Record<KitOutput, string> = {
 
 /** A file-name stem like "skein-probe-1-20-letter" (ASCII letters, digits and dashes). */
 export function kitFileStem(title: string, request: KitRequest): string {
+  return `${kitFileWords(title)}-1-${request.scaleDenominator}-${request.sheetSizeId}`;
+}
+
+/** The title as file-name words: "Skein probe" → "skein-probe" ("kit" when nothing is left). */
+function kitFileWords(title: string): string {
   const words = title
     .normalize('NFKD')
     .replace(/[^\w\s-]/g, '')
@@ -34,7 +41,7 @@ export function kitFileStem(title: string, request: KitRequest): string {
     .replace(/[\s_]+/g, '-')
     .replace(/-+/g, '-')
     .slice(0, 60);
-  return `${words || 'kit'}-1-${request.scaleDenominator}-${request.sheetSizeId}`;
+  return words || 'kit';
 }
 
 /** Parses ?sheet=N against the kit's sheet count; 400 naming the valid range otherwise. */
@@ -70,9 +77,15 @@ export function kitFile(
     const name = `${stem}-sheet-${sheet}-of-${build.layout.sheets.length}.svg`;
     return { body: build.svgSheets![sheet - 1]!, name, type: TYPES.svg, etag };
   }
-  if (output === 'stl' && options.stlFormat === 'ascii') {
-    const body = stlAscii(GEOMETRY_KIT_ENGINE.mesh(kitRequest.model, kitRequest.scaleDenominator));
-    return { body, name: `${stem}-ascii.stl`, type: 'model/stl; charset=us-ascii', etag };
+  if (output === 'stl') {
+    // The print has its own scale (the bed may need a smaller one than the paper); the name says which.
+    const n = build.print?.scaleDenominator ?? kitRequest.scaleDenominator;
+    const printStem = `${kitFileWords(build.layout.title)}-print-1-${n}`;
+    if (options.stlFormat === 'ascii') {
+      const body = stlAscii(printPlateMesh(kitPrintScale(kitRequest).plate));
+      return { body, name: `${printStem}-ascii.stl`, type: 'model/stl; charset=us-ascii', etag };
+    }
+    return { body: build.stl!, name: `${printStem}.stl`, type: TYPES.stl, etag };
   }
   const body = output === 'json' ? build.json! : output === 'pdf' ? build.pdf! : build.stl!;
   return { body, name: `${stem}.${output}`, type: TYPES[output], etag };

@@ -6,6 +6,7 @@ import { z } from 'zod';
 import { ModelSchema, type Model } from '../geometry/model-schema';
 import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
+import { PRINT_CHOICE_LIMITS } from '../layout/print-plate';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { CustomVenueSchema, VENUES, venueCustom, type Venue, type VenueId } from '../layout/venues';
 import { parseInput } from '../validation';
@@ -22,6 +23,7 @@ export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[numb
   copiesMax: KIT_COPIES_MAX,
   sheetSizeIds: SHEET_SIZE_IDS,
   venueIds: VENUE_IDS,
+  ...PRINT_CHOICE_LIMITS,
 };
 
 export const KitSettingsSchema = kitSettingsSchema(KIT_SETTINGS_LIMITS);
@@ -89,6 +91,7 @@ export function kitRequestOf(
       paperGsm: inputs.paperGsm,
       copies: inputs.copies,
       units: inputs.units,
+      ...(inputs.print ? { print: inputs.print } : {}),
       qrUrl,
     },
     'kit',

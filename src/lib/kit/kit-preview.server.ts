@@ -19,6 +19,9 @@ import { kitOutputBuild, kitScaleGuard, type KitOutputBuildOptions, type KitTimi
 import { KitCache } from './kit-cache.server';
 import { kitSummary, type KitSummary } from './kit-summary';
 import type { KitOutput } from './build-kit';
+import { kitPrintScale, kitPrintView, type KitPrintView } from './kit-print';
+import type { KitRequest } from './kit-request';
+import { AppError } from '../errors';
 
 export interface KitPreview {
   contentHash: string;
@@ -31,6 +34,8 @@ export interface KitPreview {
   /** One SVG document per sheet, in order. */
   sheets: string[];
   summary: KitSummary;
+  /** The STL's print plate on the chosen bed, or why none fits. */
+  print: KitPrintView | { error: string };
   timingsMs: KitTimingsMs;
 }
 
@@ -56,8 +61,18 @@ export async function kitPreview(inputs: KitInputs, options: KitOutputBuildOptio
       venue,
       units: request.units,
     }),
+    print: kitPreviewPrint(request),
     timingsMs,
   };
+}
+
+function kitPreviewPrint(request: KitRequest): KitPrintView | { error: string } {
+  try {
+    return kitPrintView(request, kitPrintScale(request));
+  } catch (err) {
+    if (err instanceof AppError) return { error: err.message };
+    throw err;
+  }
 }
 
 /**

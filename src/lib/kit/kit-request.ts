@@ -8,7 +8,9 @@ import { KitTitleSchema } from './kit-settings';
 import { ModelSchema } from '../geometry/model-schema';
 import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
+import { PRINT_CHOICE_DEFAULT, PRINT_CHOICE_LIMITS, type PrintChoice } from '../layout/print-plate';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
+import { printChoiceSchema } from './kit-settings';
 
 /** Kits per class: one per team; 40 teams is more than any class has (common practice, no source). */
 export const KIT_COPIES_MAX = 40;
@@ -43,6 +45,10 @@ export const KitRequestSchema = z.object({
   units: z.enum(['metric', 'us']).default('metric'),
   /** The kit page the first sheet's QR code links to; null for an unsaved kit, whose sheets print a note instead. */
   qrUrl: z.string().url('qrUrl must be an absolute URL').max(300).nullable(),
+  /** The STL's print bed and nozzle. */
+  print: printChoiceSchema(PRINT_CHOICE_LIMITS)
+    .transform((v) => v as PrintChoice)
+    .default(PRINT_CHOICE_DEFAULT),
 });
 export type KitRequest = z.infer<typeof KitRequestSchema>;
 export type KitRequestInput = z.input<typeof KitRequestSchema>;

@@ -14,6 +14,10 @@ export interface KitSettingsLimits<S extends string = string, V extends string =
   copiesMax: number;
   sheetSizeIds: readonly [S, ...S[]];
   venueIds: readonly [V, ...V[]];
+  printBedIds: readonly [string, ...string[]];
+  printNozzlesMm: readonly number[];
+  printBedMinMm: number;
+  printBedMaxMm: number;
 }
 
 const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
@@ -40,6 +44,34 @@ function venueChoiceSchema<V extends string>(venueIds: readonly [V, ...V[]]) {
         .positive('the venue width must be more than 0 m'),
     }),
   ]);
+}
+
+/** The STL's print target: a preset bed by id or a custom one in mm, and the nozzle from the offered sizes. */
+export function printChoiceSchema(
+  limits: Pick<KitSettingsLimits, 'printBedIds' | 'printNozzlesMm' | 'printBedMinMm' | 'printBedMaxMm'>,
+) {
+  const side = (what: string) =>
+    z
+      .number({ invalid_type_error: `the bed ${what} must be a number of mm` })
+      .finite(`the bed ${what} must be a number of mm`)
+      .min(limits.printBedMinMm, `the bed ${what} must be at least ${limits.printBedMinMm} mm`)
+      .max(limits.printBedMaxMm, `the bed ${what} must be at most ${limits.printBedMaxMm} mm`);
+  return z.object({
+    bed: z.discriminatedUnion('kind', [
+      z.object({ kind: z.literal('preset'), id: z.enum(limits.printBedIds as [string, ...string[]]) }),
+      z.object({
+        kind: z.literal('custom'),
+        widthMm: side('width'),
+        depthMm: side('depth'),
+        heightMm: side('height'),
+      }),
+    ]),
+    nozzleMm: z
+      .number({ invalid_type_error: 'the nozzle must be a number of mm' })
+      .refine((v) => limits.printNozzlesMm.includes(v), {
+        message: `the nozzle must be one of ${limits.printNozzlesMm.join(', ')} mm`,
+      }),
+  });
 }
 
 /** Scale, sheet, paper, copies, units, venue, title and activity of a kit (no model: callers add it). */
@@ -72,6 +104,8 @@ export function kitSettingsSchema<S extends string, V extends string>(limits: Ki
       .max(limits.copiesMax, `copies must be at most ${limits.copiesMax}`),
     units: z.enum(['metric', 'us']),
     venue: venueChoiceSchema(limits.venueIds),
+    /** Bed and nozzle of the STL; the standard bed and a 0.4 mm nozzle when left out. */
+    print: printChoiceSchema(limits).optional(),
   });
 }
 

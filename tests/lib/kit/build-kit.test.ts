@@ -11,7 +11,6 @@ import { ENGINE_VERSION } from '../../../src/lib/kit/engine-version';
 import { KitRequestSchema } from '../../../src/lib/kit/kit-request';
 import { KIT_STAGE_LABELS, kitStagesOf } from '../../../src/lib/kit/kit-stages';
 import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
-import { boxMesh } from '../../fixtures/pieces/meshes';
 import { rectPiece, smallKitPieces } from '../../fixtures/pieces/pieces';
 
 const fonts = fixtureFonts();
@@ -31,7 +30,6 @@ const request = (extra: Record<string, unknown> = {}) =>
   });
 const fixtureEngine: KitEngine = {
   patterns: () => ({ pieces: [...smallKitPieces(), rectPiece('long', 400, 40)], threads: [] }),
-  mesh: () => boxMesh(10, 20, 30),
 };
 
 describe('buildKit', () => {
