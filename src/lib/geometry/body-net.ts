@@ -10,7 +10,7 @@
 import type { Body } from './model-schema';
 import { bodyFaces, type BodyFace } from './body-shape';
 import { faceFrame, pieceFromNet, type NetFace, type NetTab } from './piece-builder';
-import { netGluePair, tabFoldAngle, type NetEdge } from './net-glue';
+import { netEdgeLabel, netGluePair, tabFoldAngle, type NetEdge } from './net-glue';
 import { paperTabDepthMm } from './paper';
 import { BUILD_GRADE_BAND_FLOOR, BUILDABILITY_MINIMUMS } from './buildability';
 import { bodyRingTeeth } from './body-ring';
@@ -181,14 +181,17 @@ function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
   const apothemMm = Math.min(
     ...capNets[0]!.flatMm.map((p, i, poly) => lineDistance([0, 0], p, poly[(i + 1) % poly.length]!)),
   );
+  // Local numbers: the seam 1, then wall j's top tooth 2 + j and its bottom tooth 2 + n + j. Wall j's top
+  // edge meets the top cap's edge j; the bottom cap lists the base vertices in reverse (edge n − 2 − j).
+  const capEdge = (k: number, j: number): NetEdge => ({ face: n + k, edge: k === 0 ? j : (2 * n - 2 - j) % n });
   const rings = (['top', 'bottom'] as const).map((side, k) =>
     bodyRingTeeth(
       net,
       side,
       paperTabDepthMm(gsm),
       apothemMm,
-      k + 2,
-      tabFoldAngle(all, { face: 0, edge: side === 'top' ? 2 : 0 }, { face: n + k, edge: 0 }),
+      2 + k * n,
+      sides.map((_, j) => tabFoldAngle(all, { face: j, edge: side === 'top' ? 2 : 0 }, capEdge(k, j))),
     ),
   );
   const obstacles: Vec2Mm[][] = [...net.map((f) => f.flatMm), ...rings.flatMap((r) => r.teethMm)];
@@ -202,7 +205,7 @@ function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
     assemblyStep,
     faces: net,
     joints: sides.slice(1).map((_, i) => ({ parent: i, child: i + 1 })),
-    tabs: [seam.tab, ...rings.map((r) => r.tab)],
+    tabs: [seam.tab, ...rings.flatMap((r) => r.tabs)],
     edgeLabels: [seam.label],
   });
   const caps = capNets.map((cap, k) =>
@@ -215,7 +218,8 @@ function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
       faces: [cap],
       joints: [],
       tabs: [],
-      edgeLabels: [capRingLabel(cap.flatMm, k + 2, apothemMm)],
+      // The cap's flat coordinates are the same in `all` and in its own piece.
+      edgeLabels: sides.map((_, j) => netEdgeLabel(all, capEdge(k, j), 2 + k * n + j)),
     }),
   );
   const spots = [
@@ -223,20 +227,6 @@ function bodyNetRinged(faces: BodyFace[], gsm: number, assemblyStep: number): Bu
     ...capNets.map((f, k) => ({ piece: 1 + k, frame: faceFrame(f) })),
   ];
   return { pieces: [wall, ...caps], spots, crowded: false };
-}
-
-/** The ring's number, printed inside the middle of the cap's edge 0, reading along it. */
-function capRingLabel(poly: readonly Vec2Mm[], number: number, apothemMm: number): EdgeLabel {
-  const [a, b] = [poly[0]!, poly[1]!];
-  const mid: Vec2Mm = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
-  // The cap is centred on its flat origin, so "inward" is toward (0, 0).
-  const inset = Math.min(2 * 2.5, apothemMm / 3);
-  const len = Math.hypot(mid[0], mid[1]) || 1;
-  return {
-    number,
-    atMm: [mid[0] - (mid[0] / len) * inset, mid[1] - (mid[1] / len) * inset],
-    angleRad: Math.atan2(b[1] - a[1], b[0] - a[0]),
-  };
 }
 
 function bodyNetFitsOfficePaper(piece: Piece): boolean {

@@ -3,7 +3,8 @@
  * about its own wall edge onto the cap's underside. Teeth lean in by π/n plus a clearance at each side, so
  * once folded the n teeth of a regular n-gon meet as wedges round the cap centre and never overlap (two
  * neighbouring edges turn by 2π/n; each tooth side gives up half of it); flat, their tips lean apart.
- * Flat mm of the strip, y up; walls left to right from x = 0, bottom edge at y = 0.
+ * Each tooth is a tab of its own with its own number, so every tooth and the cap edge it glues to carry
+ * the same mark. Flat mm of the strip, y up; walls left to right from x = 0, bottom edge at y = 0.
  */
 import type { NetFace, NetTab } from './piece-builder';
 import type { Vec2Mm } from './types';
@@ -16,23 +17,24 @@ export const BODY_RING_REACH_FRACTION = 0.6;
 export const BODY_RING_TIP_FRACTION = 0.3;
 
 export interface BodyRing {
-  /** The whole ring as one tab: a weakly simple polygon whose teeth touch at the wall corners. */
-  tab: NetTab;
+  /** One tab per tooth (wall j's tooth numbered firstNumber + j), each folding about its own wall edge. */
+  tabs: NetTab[];
   /** Each tooth as its own convex quadrilateral (CCW), for clearance checks. */
   teethMm: Vec2Mm[][];
 }
 
 /**
  * The ring on `side` of the strip `walls` (their flat rectangles), teeth as deep as `depthWantedMm` allows
- * within the cap's `apothemMm`, numbered `number`, folding by foldAngleRad; no walls gives an empty ring.
+ * within the cap's `apothemMm`, numbered from `firstNumber`, wall j's tooth folding by foldAnglesRad[j]; no
+ * walls gives an empty ring.
  */
 export function bodyRingTeeth(
   walls: readonly NetFace[],
   side: 'top' | 'bottom',
   depthWantedMm: number,
   apothemMm: number,
-  number: number,
-  foldAngleRad: number,
+  firstNumber: number,
+  foldAnglesRad: readonly number[],
 ): BodyRing {
   const n = walls.length;
   const xs = [...walls.map((w) => w.flatMm[0]![0]), walls[n - 1]!.flatMm[1]![0]];
@@ -47,10 +49,11 @@ export function bodyRingTeeth(
   );
   const inset = depthMm * Math.tan(lean);
   const teethMm: Vec2Mm[][] = [];
+  const tabs: NetTab[] = [];
   for (let j = 0; j < n; j++) {
     const [l, r] = [xs[j]!, xs[j + 1]!];
     // Counter-clockwise: base along the wall edge (reversed from the wall's own direction), then the tip.
-    teethMm.push(
+    const tooth: Vec2Mm[] =
       side === 'top'
         ? [
             [l, y],
@@ -63,42 +66,26 @@ export function bodyRingTeeth(
             [l, y],
             [l + inset, y - depthMm],
             [r - inset, y - depthMm],
-          ],
-    );
-  }
-  const polygonMm: Vec2Mm[] = [];
-  if (side === 'top') {
-    for (const x of xs) polygonMm.push([x, y]);
-    for (let j = n - 1; j >= 0; j--) {
-      polygonMm.push(teethMm[j]![2]!, teethMm[j]![3]!);
-      if (j > 0) polygonMm.push([xs[j]!, y]);
-    }
-  } else {
-    for (let j = n; j >= 0; j--) polygonMm.push([xs[j]!, y]);
-    for (let j = 0; j < n; j++) {
-      polygonMm.push(teethMm[j]![2]!, teethMm[j]![3]!);
-      if (j < n - 1) polygonMm.push([xs[j + 1]!, y]);
-    }
-  }
-  const m = Math.floor(n / 2);
-  const [from, to]: [Vec2Mm, Vec2Mm] =
-    side === 'top'
-      ? [
-          [xs[n]!, y],
-          [xs[0]!, y],
-        ]
-      : [
-          [xs[0]!, y],
-          [xs[n]!, y],
-        ];
-  return {
-    tab: {
-      number,
-      polygonMm,
-      labelAtMm: [(xs[m]! + xs[m + 1]!) / 2, y + (out * depthMm) / 2],
+          ];
+    teethMm.push(tooth);
+    // The tooth lies right of its fold line's direction, as every tab does.
+    const [fromMm, toMm]: [Vec2Mm, Vec2Mm] =
+      side === 'top'
+        ? [
+            [r, y],
+            [l, y],
+          ]
+        : [
+            [l, y],
+            [r, y],
+          ];
+    tabs.push({
+      number: firstNumber + j,
+      polygonMm: tooth,
+      labelAtMm: [(l + r) / 2, y + (out * depthMm) / 2],
       depthMm,
-      fold: { fromMm: from, toMm: to, angleRad: foldAngleRad },
-    },
-    teethMm,
-  };
+      fold: { fromMm, toMm, angleRad: foldAnglesRad[j]! },
+    });
+  }
+  return { tabs, teethMm };
 }

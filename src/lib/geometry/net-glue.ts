@@ -55,7 +55,7 @@ export function netGluePair(
       labelAtMm: vec2Add(midpoint(a, b), vec2Scale(outward(a, b), fit.depthMm / 2)),
       fold: { fromMm: a, toMm: b, angleRad: tabFoldAngle(faces, on, partner) },
     };
-    best = { tab, label: edgeLabel(faces, partner, number), depth: fit.depthMm };
+    best = { tab, label: netEdgeLabel(faces, partner, number), depth: fit.depthMm };
     if (fit.depthMm >= depthWantedMm * 0.999) break;
   }
   return { tab: best!.tab, label: best!.label };
@@ -72,8 +72,8 @@ const outward = (a: Vec2Mm, b: Vec2Mm): Vec2Mm => {
   return [d[1], -d[0]];
 };
 
-/** The number printed inside the partner edge, reading along it. */
-function edgeLabel(faces: NetFace[], e: NetEdge, number: number): EdgeLabel {
+/** The number printed just inside edge `e` (the partner of a tab), reading along it. */
+export function netEdgeLabel(faces: NetFace[], e: NetEdge, number: number): EdgeLabel {
   const [a, b] = edgeFlat(faces, e);
   const inset = Math.min(EDGE_LABEL_INSET_MM, vec2Length(vec2Sub(b, a)) / 4);
   const atMm = vec2Sub(midpoint(a, b), vec2Scale(outward(a, b), inset));

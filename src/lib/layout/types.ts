@@ -84,4 +84,9 @@ export interface KitLayout {
   qrUrl: string | null;
   /** Engine version that produced the layout, printed small on each sheet. */
   engineVersion: string;
+  /**
+   * Smallest printed mark the kit's readers can read, mm (the grade band's smallest label); the glue marks'
+   * default (GLUE_MARK_MIN_MM_DEFAULT, grades 6–8) when absent.
+   */
+  smallestLabelMm?: number;
 }

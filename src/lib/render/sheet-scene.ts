@@ -4,7 +4,7 @@
  * legend, and the QR code or, for a kit with no page yet, a note in its place). The SVG and PDF renderers draw the same scene.
  */
 import type { Piece, Vec2Mm } from '../geometry/types';
-import { placementApply, placementApplyAngle } from '../layout/placement';
+import { placementApply, placementApplyAngle, placementBoundsOfPoints } from '../layout/placement';
 import {
   LABEL_BOX_HEIGHT_EM,
   labelBox,
@@ -12,6 +12,9 @@ import {
   labelCandidatePoints,
   labelPointInside,
 } from './label-placement';
+import { LABEL_LINE_CLEARANCE_MM, LabelObstacles, labelBoxGrown, labelBoxNearestPoint } from './label-obstacles';
+import { GLUE_MARK_UNDERLINE_EM, glueMarkSizesMm, glueMarkUnderlined } from './glue-marks';
+import { pieceLines } from './piece-lines';
 import type { LabelMeasure } from './label-placement';
 import { textWidthMm } from './text-width';
 import { polygonArea } from '../geometry/vec';
@@ -38,6 +41,16 @@ export interface SceneText {
   bold: boolean;
   anchor: 'start' | 'middle';
   group: 'labels' | 'furniture';
+  /** Present on a glue mark: its number, which side of the joint it is on, and the piece it is printed on. */
+  mark?: SceneMark;
+  /** Present on a mark printed beside its piece: the point on the piece its leader line ends at, mm. */
+  calloutMm?: Vec2Mm;
+}
+/** A glue mark's joint and side: the tab, or the edge the tab glues to. */
+export interface SceneMark {
+  number: number;
+  side: 'tab' | 'edge';
+  pieceId: string;
 }
 export interface SceneStroke {
   points: Vec2Mm[];
@@ -69,44 +82,121 @@ const FOOTER_SIZE_MM = 2.8;
 export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure = textWidthMm): SheetScene {
   const scene: SheetScene = { texts: [], strokes: [], fills: [] };
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
-  const labels = new SceneLabels(scene, measure);
-  // Numbers have fixed homes (their edge or tab); piece names can move, so they are placed last.
-  for (const m of sheet.alignmentMarks)
-    labels.reserve(
-      text(m.letter, [m.atMm[0] + 3.6, m.atMm[1] - 3], NUMBER_SIZE_MM, 'labels', { bold: true, anchor: 'start' }),
-    );
+  for (const placement of sheet.placements) if (placement.tile) sceneTileGuides(scene, placement);
+  const labels = new SceneLabels(scene, measure, sceneObstacles(kit, sheet, byId, scene, measure));
+  // Registration letters and glue marks have fixed homes (their cross, tab or edge); piece names and step
+  // badges can move, so they are placed last.
+  for (const m of sheet.alignmentMarks) sceneAlignmentLetter(labels, m.atMm, m.letter);
+  const markSizes = glueMarkSizesMm(kit.smallestLabelMm);
+  const callouts: SceneCallout[] = [];
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);
-    if (piece) scenePieceNumbers(labels, piece, placement);
-    if (placement.tile) sceneTileGuides(scene, placement);
+    if (piece) scenePieceMarks(labels, piece, placement, markSizes, callouts);
   }
+  const onFreePaper = sceneFreePaper(sheet, byId);
+  for (const c of callouts)
+    if (!labels.tryCallout(c.callout, c.targets, (b) => c.fits(b) && onFreePaper(b))) labels.reserve(c.fallback);
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);
     if (piece) scenePieceName(labels, piece, placement);
   }
-  for (const mark of sheet.alignmentMarks) {
-    const [x, y] = mark.atMm;
-    const arm = 3;
-    const style = { widthMm: 0.25, color: TEXT_COLOR, dashMm: [], group: 'labels' as const };
-    scene.strokes.push(
-      {
-        ...style,
-        points: [
-          [x - arm, y],
-          [x + arm, y],
-        ],
-      },
-      {
-        ...style,
-        points: [
-          [x, y - arm],
-          [x, y + arm],
-        ],
-      },
-    );
-  }
+  for (const mark of sheet.alignmentMarks)
+    scene.strokes.push(...sceneAlignmentCross(mark.atMm).map((points) => ({ ...ALIGNMENT_STYLE, points })));
   sceneFurniture(scene, kit, sheet, measure);
   return scene;
+}
+
+/**
+ * A test that a box lies on blank paper: inside the printable area and outside every placed piece (a box
+ * that crosses no line is wholly inside or wholly outside each outline, so its centre decides).
+ */
+function sceneFreePaper(sheet: LaidOutSheet, byId: ReadonlyMap<string, Piece>): (box: Vec2Mm[]) => boolean {
+  const outlines = sheet.placements.flatMap((placement) => {
+    const piece = byId.get(placement.pieceId);
+    if (!piece) return [];
+    const outline = piece.outlineMm.map((p) => placementApply(placement, p));
+    return [{ outline, bounds: placementBoundsOfPoints(outline) }];
+  });
+  return (box) => {
+    if (!box.every((p) => inside(p, sheet.printableMm))) return false;
+    const c: Vec2Mm = [(box[0]![0] + box[2]![0]) / 2, (box[0]![1] + box[2]![1]) / 2];
+    return !outlines.some(({ outline, bounds: r }) => inside(c, r) && labelPointInside(c, outline));
+  };
+}
+
+const ALIGNMENT_STYLE = { widthMm: 0.25, color: TEXT_COLOR, dashMm: [], group: 'labels' as const };
+/** Half the length of a registration cross's arms, mm. */
+const ALIGNMENT_ARM_MM = 3;
+
+/** The two strokes of a registration cross centred on a point. */
+function sceneAlignmentCross([x, y]: Vec2Mm): Vec2Mm[][] {
+  const arm = ALIGNMENT_ARM_MM;
+  return [
+    [
+      [x - arm, y],
+      [x + arm, y],
+    ],
+    [
+      [x, y - arm],
+      [x, y + arm],
+    ],
+  ];
+}
+
+/** A registration cross's letter in the first free quarter round the cross (above right first). */
+function sceneAlignmentLetter(labels: SceneLabels, at: Vec2Mm, letter: string) {
+  const d = ALIGNMENT_ARM_MM + 0.6;
+  const homes: [Vec2Mm, SceneText['anchor']][] = [
+    [[at[0] + d, at[1] - d], 'start'],
+    [[at[0] + d, at[1] + d], 'start'],
+    [[at[0] - d - 1.8, at[1] - d], 'start'],
+    [[at[0] - d - 1.8, at[1] + d], 'start'],
+  ];
+  const candidates = homes.map(([p, anchor]) => text(letter, p, NUMBER_SIZE_MM, 'labels', { bold: true, anchor }));
+  if (!labels.tryPlace(candidates)) labels.reserve(candidates[0]!);
+}
+
+/**
+ * Everything drawn on the sheet that a label must not cover: every piece's cut outline and folds (clipped to
+ * its tile), registration crosses, tile guides and their captions, and the furniture (footer, check square,
+ * legend, QR code, cut list) with its gap.
+ */
+function sceneObstacles(
+  kit: KitLayout,
+  sheet: LaidOutSheet,
+  byId: ReadonlyMap<string, Piece>,
+  scene: SheetScene,
+  measure: LabelMeasure,
+): LabelObstacles {
+  const obstacles = new LabelObstacles(LABEL_LINE_CLEARANCE_MM);
+  for (const placement of sheet.placements) {
+    const piece = byId.get(placement.pieceId);
+    if (!piece) continue;
+    const lines = pieceLines(piece, placement, (polylines) =>
+      polylines.map((line) => line.map((p) => placementApply(placement, p))),
+    );
+    for (const line of [...lines.cut, ...lines.mountain, ...lines.valley]) obstacles.addPolyline(line);
+  }
+  for (const m of sheet.alignmentMarks) for (const arm of sceneAlignmentCross(m.atMm)) obstacles.add(arm);
+  for (const stroke of scene.strokes) obstacles.addPolyline(stroke.points);
+  for (const t of scene.texts) obstacles.add(sceneTextBox(t, measure));
+  const furniture = sheetFurnitureLayout(sheet.printableMm, kit.units, sheet.number === 1, kit.cutList.length);
+  for (const r of furniture.obstacles) obstacles.add(rectCorners(r));
+  return obstacles;
+}
+
+function rectCorners(r: RectMm): Vec2Mm[] {
+  return [
+    [r.xMm, r.yMm],
+    [r.xMm + r.widthMm, r.yMm],
+    [r.xMm + r.widthMm, r.yMm + r.heightMm],
+    [r.xMm, r.yMm + r.heightMm],
+  ];
+}
+
+/** The box a text covers on the sheet, measured with `measure`. */
+export function sceneTextBox(t: SceneText, measure: LabelMeasure): Vec2Mm[] {
+  return labelBox(t.atMm, t.angleRad, measure(t.text, t.sizeMm, t.bold), t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor);
 }
 
 function text(
@@ -131,73 +221,201 @@ function upright(angleRad: number): number {
   return a;
 }
 
-/** The label texts of a sheet and their boxes, so each new label can be kept clear of the ones before. */
+/** The label texts of a sheet and their boxes, so each new label can be kept clear of the drawing and of the ones before. */
 class SceneLabels {
-  readonly boxes: Vec2Mm[][] = [];
+  private readonly placed = new LabelObstacles(0);
+  /** Callout leaders drawn so far: later labels keep clear of them like of any line. */
+  private readonly leaders = new LabelObstacles(LABEL_LINE_CLEARANCE_MM);
+  private readonly widths = new Map<string, number>();
   constructor(
     readonly scene: SheetScene,
     readonly measure: LabelMeasure,
+    readonly obstacles: LabelObstacles,
   ) {}
 
   box(t: SceneText): Vec2Mm[] {
-    return labelBox(
-      t.atMm,
-      t.angleRad,
-      this.measure(t.text, t.sizeMm, t.bold),
-      t.sizeMm * LABEL_BOX_HEIGHT_EM,
-      t.anchor,
-    );
+    const key = `${t.bold ? 'b' : 'r'}${t.sizeMm}|${t.text}`;
+    let width = this.widths.get(key);
+    if (width === undefined) this.widths.set(key, (width = this.measure(t.text, t.sizeMm, t.bold)));
+    return labelBox(t.atMm, t.angleRad, width, t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor);
   }
 
-  free(box: readonly Vec2Mm[]): boolean {
-    return !this.boxes.some((b) => labelBoxesOverlap(b, box));
-  }
-
-  /** Adds a text at its own place whatever it covers (marks whose place is their meaning). */
+  /** Adds a text at its own place whatever it covers (the last resort of a mark that must print). */
   reserve(t: SceneText) {
-    this.scene.texts.push(t);
-    this.boxes.push(this.box(t));
+    this.push(t, this.box(t));
   }
 
-  /** Adds the first of the candidate texts whose box is free and passes `fits`; false when none is. */
+  /**
+   * Adds the first of the candidate texts whose box is clear of every label and drawn element and passes
+   * `fits`; false when none is.
+   */
   tryPlace(candidates: Iterable<SceneText>, fits: (box: Vec2Mm[]) => boolean = () => true): boolean {
     for (const t of candidates) {
       const box = this.box(t);
-      if (this.free(box) && fits(box)) {
-        this.scene.texts.push(t);
-        this.boxes.push(box);
+      if (fits(box) && !this.placed.hits(box) && !this.obstacles.hits(box) && !this.leaders.hits(box)) {
+        this.push(t, box);
         return true;
       }
     }
     return false;
   }
+
+  /**
+   * For a mark its piece has no room for (a part too small for its kit's readers): the mark upright on clear
+   * paper near the first target, with a thin leader line from the mark to one of `targets` that no label
+   * covers; false when nothing within CALLOUT_RADII_MM is clear.
+   */
+  tryCallout(t: SceneText, targets: readonly Vec2Mm[], fits: (box: Vec2Mm[]) => boolean): boolean {
+    const home = targets[0]!;
+    const free = targets.filter((p) => !this.placed.hits([p, p]));
+    for (const r of CALLOUT_RADII_MM)
+      for (let k = 0; k < CALLOUT_DIRECTIONS; k++) {
+        const a = (2 * Math.PI * k) / CALLOUT_DIRECTIONS;
+        const candidate = { ...t, atMm: [home[0] + r * Math.cos(a), home[1] + r * Math.sin(a)] as Vec2Mm };
+        const box = this.box(candidate);
+        if (!fits(box) || this.placed.hits(box) || this.obstacles.hits(box) || this.leaders.hits(box)) continue;
+        // The leader runs from the box's nearest side to a point of the mark's place and crosses no label.
+        for (const target of free) {
+          const leader: Vec2Mm[] = [labelBoxNearestPoint(box, target), target];
+          if (this.placed.hits(leader)) continue;
+          this.push({ ...candidate, calloutMm: target }, box);
+          this.scene.strokes.push({
+            points: leader,
+            widthMm: CALLOUT_LEADER_MM,
+            color: TEXT_COLOR,
+            dashMm: [],
+            group: 'labels',
+          });
+          this.leaders.add(leader);
+          return true;
+        }
+      }
+    return false;
+  }
+
+  private push(t: SceneText, box: Vec2Mm[]) {
+    this.scene.texts.push(t);
+    this.placed.add(box);
+    if (t.mark && glueMarkUnderlined(t.text)) {
+      // The underline runs under the digits along the baseline: within the box, so it needs no room of its own.
+      const [c, s] = [Math.cos(t.angleRad), Math.sin(t.angleRad)];
+      const width = this.measure(t.text, t.sizeMm, t.bold);
+      const [x0, x1] = t.anchor === 'middle' ? [-width / 2, width / 2] : [0, width];
+      const down = GLUE_MARK_UNDERLINE_EM.offset * t.sizeMm;
+      const at = (x: number): Vec2Mm => [t.atMm[0] + c * x - s * down, t.atMm[1] + s * x + c * down];
+      this.scene.strokes.push({
+        points: [at(x0), at(x1)],
+        widthMm: GLUE_MARK_UNDERLINE_EM.width * t.sizeMm,
+        color: TEXT_COLOR,
+        dashMm: [],
+        group: 'labels',
+      });
+    }
+  }
 }
 
-/** Sizes tried for a number, mm: full size first, then smaller, before it is nudged further along. */
-const NUMBER_SIZES_MM = [NUMBER_SIZE_MM, 2.1, 1.7];
-/** Shifts along its baseline tried for a number that would cover another label, mm. */
-const NUMBER_SHIFTS_MM = [0, 1.5, -1.5, 3, -3, 4.5, -4.5, 6, -6];
+/** Distances from its home tried for a mark printed beside its piece, mm, nearest first. */
+const CALLOUT_RADII_MM = [4, 6, 8, 11, 14, 18, 23, 30, 40, 50, 65, 80, 100, 125];
+/** Directions tried round the home at each distance. */
+const CALLOUT_DIRECTIONS = 36;
+/** Width of a callout's leader line, mm. */
+const CALLOUT_LEADER_MM = 0.15;
 
-function* numberCandidates(value: string, at: Vec2Mm, angleRad: number): Generator<SceneText> {
-  const [c, s] = [Math.cos(angleRad), Math.sin(angleRad)];
-  for (const size of NUMBER_SIZES_MM)
-    for (const d of NUMBER_SHIFTS_MM) yield text(value, [at[0] + c * d, at[1] + s * d], size, 'labels', { angleRad });
+/** Shifts along its edge tried for a glue mark, mm, nearest first. */
+const MARK_SHIFTS_MM = [0, 1.5, -1.5, 3, -3, 4.5, -4.5, 6, -6];
+/** Moves of a tab's mark across its fold (+ away from it) and of an edge's mark into its face, mm. */
+const TAB_MARK_ACROSS_MM = [0, 0.8, -0.8];
+const EDGE_MARK_INSET_MM = [0, 1, 2, 3.5, -0.8];
+
+/** A mark its piece had no room for, to print beside the piece once every piece's own marks are placed. */
+interface SceneCallout {
+  /** Points on the piece the leader may end at, best first (the mark's home first). */
+  targets: Vec2Mm[];
+  callout: SceneText;
+  /** Printed at its home whatever it covers when no clear spot is found (so no joint loses a mark). */
+  fallback: SceneText;
+  fits: (box: Vec2Mm[]) => boolean;
 }
 
-function scenePieceNumbers(labels: SceneLabels, piece: Piece, placement: Placement) {
+/**
+ * The glue marks of a placed piece: on each tab, reading along its fold line, and inside each edge a tab
+ * glues to, reading along that edge; both upright on the sheet, underlined when they read as another number
+ * upside down, as large as the room allows down to the smallest mark size, kept clear of every line and
+ * label. A mark with no room on its piece is queued in `callouts`.
+ */
+function scenePieceMarks(
+  labels: SceneLabels,
+  piece: Piece,
+  placement: Placement,
+  sizesMm: readonly number[],
+  callouts: SceneCallout[],
+) {
   const window = placement.tile?.windowMm;
-  const place = (value: string, at: Vec2Mm, angleRad: number) => {
-    if (!inside(at, window)) return;
-    if (!labels.tryPlace(numberCandidates(value, at, angleRad), (b) => b.every((p) => inside(p, window))))
-      labels.reserve(text(value, at, NUMBER_SIZES_MM[NUMBER_SIZES_MM.length - 1]!, 'labels', { angleRad }));
+  // A mark prints on the tile whose visible part holds its home, so a tiled piece shows it once.
+  const visible = sceneNameWindow(placement);
+  const faces = piece.hinge.faces.map((f) => f.polygonMm);
+  const tabPolys = piece.tabs.map((t) => t.polygonMm);
+  const inWindow = (b: Vec2Mm[]) => b.every((p) => inside(p, window));
+  const place = (
+    mark: SceneMark,
+    home: Vec2Mm,
+    angleFlat: number,
+    across: readonly number[],
+    acrossDir: Vec2Mm,
+    within: (flat: Vec2Mm) => boolean,
+  ) => {
+    if (!inside(placementApply(placement, home), visible)) return;
+    const angleRad = upright(placementApplyAngle(placement, angleFlat));
+    const [c, s] = [Math.cos(angleFlat), Math.sin(angleFlat)];
+    const value = String(mark.number);
+    function* candidates(): Generator<SceneText> {
+      for (const size of sizesMm)
+        for (const a of across)
+          for (const d of MARK_SHIFTS_MM) {
+            const flat: Vec2Mm = [home[0] + c * d + acrossDir[0] * a, home[1] + s * d + acrossDir[1] * a];
+            if (!within(flat)) continue;
+            yield text(value, placementApply(placement, flat), size, 'labels', { angleRad, mark });
+          }
+    }
+    if (labels.tryPlace(candidates(), inWindow)) return;
+    const at = placementApply(placement, home);
+    const smallest = sizesMm[sizesMm.length - 1]!;
+    const targets: Vec2Mm[] = [];
+    // A leader may end a little either side of the home (a part's mark on a face can sit on its edge).
+    for (const a of [...across, ...across.map((x) => -x)])
+      for (const d of MARK_SHIFTS_MM) {
+        const flat: Vec2Mm = [home[0] + c * d + acrossDir[0] * a, home[1] + s * d + acrossDir[1] * a];
+        if (within(flat)) targets.push(placementApply(placement, flat));
+      }
+    callouts.push({
+      targets: targets.length ? targets : [at],
+      callout: text(value, at, smallest, 'labels', { angleRad: 0, mark }),
+      fallback: text(value, at, smallest, 'labels', { angleRad, mark }),
+      fits: inWindow,
+    });
   };
-  for (const tab of piece.tabs) place(String(tab.number), placementApply(placement, tab.labelAtMm), 0);
-  for (const label of piece.edgeLabels)
-    place(
-      String(label.number),
-      placementApply(placement, label.atMm),
-      upright(placementApplyAngle(placement, label.angleRad)),
+  piece.tabs.forEach((tab, i) => {
+    const fold = piece.folds.find((f) => f.tabNumber === tab.number);
+    const along = fold ? Math.atan2(fold.toMm[1] - fold.fromMm[1], fold.toMm[0] - fold.fromMm[0]) : 0;
+    // A tab lies right of its fold's direction, so "away from the fold" is the right-hand normal.
+    const away: Vec2Mm = [Math.sin(along), -Math.cos(along)];
+    const poly = tabPolys[i]!;
+    place({ number: tab.number, side: 'tab', pieceId: piece.id }, tab.labelAtMm, along, TAB_MARK_ACROSS_MM, away, (p) =>
+      labelPointInside(p, poly),
     );
+  });
+  for (const label of piece.edgeLabels) {
+    // Edge labels sit left of their baseline's direction (inside the face), so "inward" is the left normal.
+    const inward: Vec2Mm = [-Math.sin(label.angleRad), Math.cos(label.angleRad)];
+    place(
+      { number: label.number, side: 'edge', pieceId: piece.id },
+      label.atMm,
+      label.angleRad,
+      EDGE_MARK_INSET_MM,
+      inward,
+      (p) => faces.some((f) => labelPointInside(p, f)) && !tabPolys.some((t) => labelPointInside(p, t)),
+    );
+  }
 }
 
 /** Piece names tried, mm: large first; below the last the name is left off. */
@@ -263,23 +481,6 @@ function sceneNameRegions(piece: Piece): { region: Vec2Mm[]; points: Vec2Mm[] }[
 /** Clear paper kept round a piece's name inside its face, mm (common practice, no source). */
 const NAME_PADDING_MM = 0.6;
 
-/** A text box (corners p0…p3, p0→p1 along the baseline) grown by padMm on every side. */
-function sceneBoxPadded(box: readonly Vec2Mm[], padMm: number): Vec2Mm[] {
-  const [p0, p1, p2, p3] = box as [Vec2Mm, Vec2Mm, Vec2Mm, Vec2Mm];
-  const unit = (a: Vec2Mm, b: Vec2Mm): Vec2Mm => {
-    const l = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-    return [((b[0] - a[0]) / l) * padMm, ((b[1] - a[1]) / l) * padMm];
-  };
-  const u = unit(p0, p1);
-  const v = unit(p0, p3);
-  return [
-    [p0[0] - u[0] - v[0], p0[1] - u[1] - v[1]],
-    [p1[0] + u[0] - v[0], p1[1] + u[1] - v[1]],
-    [p2[0] + u[0] + v[0], p2[1] + u[1] + v[1]],
-    [p3[0] - u[0] + v[0], p3[1] - u[1] + v[1]],
-  ];
-}
-
 /** Where a piece's name may go: its tile's window less the overlap strips the next tiles cover. */
 function sceneNameWindow(placement: Placement): RectMm | undefined {
   const t = placement.tile;
@@ -303,7 +504,7 @@ function sceneInside(region: readonly Vec2Mm[], window?: RectMm): (box: Vec2Mm[]
     };
   });
   return (tight) => {
-    const box = sceneBoxPadded(tight, NAME_PADDING_MM);
+    const box = labelBoxGrown(tight, NAME_PADDING_MM);
     if (!box.every((p) => inside(p, window) && labelPointInside(p, region))) return false;
     const xs = box.map((p) => p[0]);
     const ys = box.map((p) => p[1]);

@@ -55,7 +55,6 @@ describe('bodyNet (through modelPatterns)', () => {
     for (const facets of [9, 24, 64, 256]) {
       const m = model({ body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.15, facets } });
       const [wall, top] = bodyPieces(m, 5);
-      const ring = wall!.tabs.find((t) => t.labelAtMm[1] > 0 && t.polygonMm.length > 4)!;
       const H = wall!.hinge.faces[0]!.polygonMm[2]![1];
       const cap = top!.hinge.faces[0]!.polygonMm.map(
         (p) => [Math.round(p[0] * 1e6) / 1e6, Math.round(p[1] * 1e6) / 1e6] as [number, number],
@@ -68,7 +67,9 @@ describe('bodyNet (through modelPatterns)', () => {
         const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
         const u = [(b[0] - a[0]) / len, (b[1] - a[1]) / len];
         const inward = [-u[1]!, u[0]!];
-        const pts = ring.polygonMm.filter((p) => p[0] >= x0 - 1e-9 && p[0] <= x1 + 1e-9 && p[1] > H + 1e-9);
+        // Wall j's tooth: the tab above its top edge, a tab of its own.
+        const tooth = wall!.tabs.find((t) => t.labelAtMm[1] > H && t.labelAtMm[0] > x0 && t.labelAtMm[0] < x1)!;
+        const pts = tooth.polygonMm.filter((p) => p[1] > H + 1e-9);
         const base = [[x0, H], [x1, H], ...pts.sort((p, q) => q[0] - p[0])] as [number, number][];
         // Snapped to 1 nm: polygon-clipping fails on corners shared to within rounding (about 1e-13 mm apart).
         const snap = (v: number) => Math.round(v * 1e6) / 1e6;
