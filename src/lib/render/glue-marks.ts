@@ -3,6 +3,7 @@
  * whether it needs an underline because it reads as another number upside down (a cut-out piece is often
  * turned, so 6 and 9, 16 and 91, 18 and 81 would be confused).
  */
+import { BUILD_GRADE_BAND_DEFAULT, BUILDABILITY_MINIMUMS } from '../geometry/buildability';
 
 /** Each digit as it reads turned half a turn; digits missing here read as no digit (2, 3, 4, 5, 7). */
 const DIGIT_TURNED: Readonly<Record<string, string>> = { '0': '0', '1': '1', '6': '9', '8': '8', '9': '6' };
@@ -27,17 +28,17 @@ export function glueMarkUnderlined(text: string): boolean {
   return turned !== null && turned !== text;
 }
 
-/** Height a glue mark prints at when there is room, mm (common practice, no source: about 9 pt). */
-export const GLUE_MARK_SIZE_MM = 3.2;
+/** Height a glue mark prints at when there is room, mm (common practice, no source: about 10 pt). */
+export const GLUE_MARK_SIZE_MM = 3.5;
 /**
- * Smallest glue mark when the kit names no grade band, mm: about 7 pt, what a grade 6–8 student reads at
- * arm's length on a cut-out (common practice, no source). The buildability minimums replace it per grade band.
+ * Smallest glue mark when the kit names no grade band, mm: the default band's smallest label from the
+ * buildability minimums (grades 6–8).
  */
-export const GLUE_MARK_MIN_MM_DEFAULT = 2.4;
+export const GLUE_MARK_MIN_MM_DEFAULT = BUILDABILITY_MINIMUMS[BUILD_GRADE_BAND_DEFAULT].labelMm;
 
 /** Sizes tried for a mark, largest first, none below minMm (minMm itself last). */
 export function glueMarkSizesMm(minMm: number = GLUE_MARK_MIN_MM_DEFAULT): number[] {
-  const sizes = [GLUE_MARK_SIZE_MM, (GLUE_MARK_SIZE_MM + minMm) / 2].filter((s) => s > minMm);
+  const sizes = [Math.max(GLUE_MARK_SIZE_MM, minMm * 1.2), (GLUE_MARK_SIZE_MM + minMm) / 2].filter((s) => s > minMm);
   return [...sizes, minMm];
 }
 

@@ -363,6 +363,7 @@ function scenePieceMarks(
     across: readonly number[],
     acrossDir: Vec2Mm,
     within: (flat: Vec2Mm) => boolean,
+    zone?: readonly Vec2Mm[],
   ) => {
     if (!inside(placementApply(placement, home), visible)) return;
     const angleRad = upright(placementApplyAngle(placement, angleFlat));
@@ -377,7 +378,11 @@ function scenePieceMarks(
             yield text(value, placementApply(placement, flat), size, 'labels', { angleRad, mark });
           }
     }
-    if (labels.tryPlace(candidates(), inWindow)) return;
+    // A tab without a fold line (a rolled part's overlap strip) has no drawn edge on its face's side: its
+    // mark's whole box must lie within it.
+    const placedZone = zone?.map((p) => placementApply(placement, p));
+    const fitsZone = (b: Vec2Mm[]) => inWindow(b) && (!placedZone || b.every((p) => labelPointInside(p, placedZone)));
+    if (labels.tryPlace(candidates(), fitsZone)) return;
     const at = placementApply(placement, home);
     const smallest = sizesMm[sizesMm.length - 1]!;
     const targets: Vec2Mm[] = [];
@@ -400,8 +405,14 @@ function scenePieceMarks(
     // A tab lies right of its fold's direction, so "away from the fold" is the right-hand normal.
     const away: Vec2Mm = [Math.sin(along), -Math.cos(along)];
     const poly = tabPolys[i]!;
-    place({ number: tab.number, side: 'tab', pieceId: piece.id }, tab.labelAtMm, along, TAB_MARK_ACROSS_MM, away, (p) =>
-      labelPointInside(p, poly),
+    place(
+      { number: tab.number, side: 'tab', pieceId: piece.id },
+      tab.labelAtMm,
+      along,
+      TAB_MARK_ACROSS_MM,
+      away,
+      (p) => labelPointInside(p, poly),
+      fold ? undefined : poly,
     );
   });
   for (const label of piece.edgeLabels) {
