@@ -35,3 +35,47 @@ export async function pageNew(browser: Browser): Promise<{ page: Page; errors: s
   page.on('pageerror', (err) => errors.push(err.message));
   return { page, errors };
 }
+
+/** Waits until every island on the page has hydrated (Astro drops the `ssr` attribute then). */
+export async function hydrated(page: Page): Promise<void> {
+  await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'));
+}
+
+/** axe-core's serious and critical violations on the current page, as `id: first targets`. */
+export async function axeSerious(page: Page): Promise<string[]> {
+  await page.addScriptTag({ path: 'node_modules/axe-core/axe.min.js' });
+  const violations = await page.evaluate(async () => {
+    // axe is the global the script tag defines.
+    const { axe } = window as unknown as {
+      axe: { run: () => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> };
+    };
+    return (await axe.run()).violations;
+  });
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map(
+      (v) =>
+        `${v.id}: ${v.nodes
+          .map((n) => n.target.join(' '))
+          .slice(0, 3)
+          .join(', ')}`,
+    );
+}
+
+/** Saves a kit through the API with the page's cookies: demo defaults (Letter, 160 g/m², one copy) overridden. */
+export function kitSaveRequest(page: Page, classId: string, inputs: Record<string, unknown>) {
+  return page.request.post('/api/kits', {
+    data: {
+      classId,
+      inputs: {
+        paperGsm: 160,
+        sheetSizeId: 'letter',
+        copies: 1,
+        units: 'metric',
+        venue: { kind: 'preset', id: 'classroom' },
+        ...inputs,
+      },
+    },
+    headers: { origin: BASE_URL },
+  });
+}

@@ -9,7 +9,7 @@ import { gzipSync } from 'node:zlib';
 import type { Browser, Page } from 'playwright-core';
 import type { Knex } from 'knex';
 import { PDFDocument } from 'pdf-lib';
-import { BASE_URL, browserLaunch, pageNew } from './browser';
+import { axeSerious, BASE_URL, browserLaunch, hydrated, kitSaveRequest, pageNew } from './browser';
 import { testKnex } from '../db/database';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
 import { SAFETY_GENERAL_NOTE } from '../../src/lib/activities/safety';
@@ -37,33 +37,6 @@ async function signedIn(): Promise<{ page: Page; errors: string[] }> {
   const [name, value] = teacherCookie.split('=') as [string, string];
   await page.context().addCookies([{ name, value, url: BASE_URL }]);
   return { page, errors };
-}
-
-async function hydrated(page: Page): Promise<void> {
-  await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'));
-}
-
-/** axe-core's serious and critical violations on the current page (ids and first targets). */
-async function axeSerious(page: Page): Promise<string[]> {
-  await page.addScriptTag({ path: 'node_modules/axe-core/axe.min.js' });
-  const violations = await page.evaluate(async () => {
-    // axe is the global the script tag defines.
-    const result = await (
-      window as unknown as {
-        axe: { run: () => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> };
-      }
-    ).axe.run();
-    return result.violations;
-  });
-  return violations
-    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map(
-      (v) =>
-        `${v.id}: ${v.nodes
-          .map((n) => n.target.join(' '))
-          .slice(0, 3)
-          .join(', ')}`,
-    );
 }
 
 const sheetsText = (page: Page) => page.getByTestId('sheet-previews').innerHTML();
@@ -191,21 +164,11 @@ describe('kit page', () => {
     const { page } = await signedIn();
     const classes = await page.request.get('/api/classes');
     const classId = ((await classes.json()) as { classes: { id: string }[] }).classes[0]!.id;
-    const saved = await page.request.post('/api/kits', {
-      data: {
-        classId,
-        inputs: {
-          modelId: 'skein-probe',
-          activitySlug: 'shake-test',
-          scaleDenominator: 25,
-          sheetSizeId: 'a4',
-          paperGsm: 160,
-          copies: 1,
-          units: 'metric',
-          venue: { kind: 'preset', id: 'classroom' },
-        },
-      },
-      headers: { origin: BASE_URL },
+    const saved = await kitSaveRequest(page, classId, {
+      modelId: 'skein-probe',
+      activitySlug: 'shake-test',
+      scaleDenominator: 25,
+      sheetSizeId: 'a4',
     });
     expect(saved.status()).toBe(201);
     const { kit } = (await saved.json()) as { kit: { id: string } };

@@ -3,13 +3,20 @@ import { FormAlert } from '../auth/FormAlert';
 import { FormField } from '../auth/FormField';
 import { useApiForm } from '../auth/useApiForm';
 
+interface Props {
+  /** A same-site path to return to after joining (checked by the page with safeNextPath); null: the class page. */
+  next: string | null;
+  /** A class code from the link (a class poster's QR code), already checked and formatted; '' to type one. */
+  code: string;
+}
+
 /** Students type the class code from their teacher; no name or e-mail is asked. */
-export default function JoinClassForm() {
+export default function JoinClassForm({ next, code }: Props) {
   const { form, onSubmit, formError } = useApiForm({
     schema: ClassJoinSchema,
     path: '/api/classes/join',
-    defaultValues: { code: '' },
-    onSuccess: () => window.location.assign('/class'),
+    defaultValues: { code },
+    onSuccess: () => window.location.assign(next ?? '/class'),
   });
   const { errors, isSubmitting } = form.formState;
   return (

@@ -1,15 +1,17 @@
 import { useState } from 'react';
-import { classCodeFormat } from '../../lib/auth/class-code';
+import { classCodeFormat, classJoinUrl } from '../../lib/auth/class-code';
 import { apiSend } from '../auth/api-post';
 import { FormAlert } from '../auth/FormAlert';
 
 interface Props {
   classId: string;
   code: string;
+  /** The site's public address, for the join link with the code filled in. */
+  siteUrl: string;
 }
 
-/** Shows the class code and gives the class a new one (every device opened with the old code is closed). */
-export default function RotateCodeButton({ classId, code: initial }: Props) {
+/** Shows the class code large with its join link, and gives the class a new one (devices of the old code close). */
+export default function RotateCodeButton({ classId, code: initial, siteUrl }: Props) {
   const [code, setCode] = useState(initial);
   const [message, setMessage] = useState<{ kind: 'error' | 'success'; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
@@ -30,8 +32,15 @@ export default function RotateCodeButton({ classId, code: initial }: Props) {
   }
   return (
     <div className="space-y-3">
-      <p className="font-mono text-3xl font-bold tracking-widest" data-testid="class-code" aria-live="polite">
+      <p
+        className="font-mono text-5xl font-bold tracking-widest sm:text-6xl"
+        data-testid="class-code"
+        aria-live="polite"
+      >
         {classCodeFormat(code)}
+      </p>
+      <p className="text-sm break-all text-ink-soft">
+        A link with the code filled in: <span className="font-mono">{classJoinUrl(siteUrl, code)}</span>
       </p>
       <button type="button" className="btn-secondary" onClick={rotate} disabled={busy}>
         Make a new code

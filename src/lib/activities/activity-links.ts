@@ -1,4 +1,6 @@
-/** URLs of an activity's pages and downloads, and of the kit builder preset for it. */
+/** URLs of an activity's pages and downloads, of the kit builder preset for it, and of its data tools. */
+import type { DataTool } from './activity-facets';
+import type { Activity } from './activity-schema';
 
 /** The kit builder, preset to a demo model and this activity. */
 export function activityKitBuilderHref(modelId: string, slug: string): string {
@@ -25,4 +27,16 @@ export function activityPaperForSheet(sheetSizeId: string): ActivityPaper {
 /** The paper a query string asks for; Letter unless it says a4. */
 export function activityPaperFromQuery(params: URLSearchParams): ActivityPaper {
   return params.get('paper') === 'a4' ? 'a4' : 'letter';
+}
+
+/** The page of a data tool (one page per tool under /tools, named like the tool). */
+export function dataToolHref(tool: DataTool): string {
+  return `/tools/${tool}`;
+}
+
+/** The data tools an activity's records feed: the data sheet's tool first, then any other a column names. */
+export function activityDataTools(activity: Pick<Activity, 'record'>): DataTool[] {
+  const { tool, fields, columns } = activity.record;
+  const named = [...fields, ...columns].map((c) => c.tool).filter((t): t is DataTool => t !== undefined);
+  return [...new Set([tool, ...named])];
 }

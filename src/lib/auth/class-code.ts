@@ -46,3 +46,15 @@ export function classCodeNormalize(input: string): string {
 export function classCodeFormat(code: string): string {
   return code.length === CLASS_CODE_LENGTH ? `${code.slice(0, 4)}-${code.slice(4)}` : code;
 }
+
+/** The join page with a class code filled in (a class poster's QR code): `${siteUrl}/join?code=JFMS3K7Q`. */
+export function classJoinUrl(siteUrl: string, code: string): string {
+  const url = new URL('/join', siteUrl);
+  url.searchParams.set('code', code);
+  return url.href;
+}
+
+/** The join page's address as a person types it: host and path, no scheme ("kits.example.org/join"). */
+export function classJoinAddress(siteUrl: string): string {
+  return `${new URL(siteUrl).host}/join`;
+}

@@ -4,8 +4,11 @@ import {
   CLASS_CODE_LENGTH,
   classCodeFormat,
   classCodeNew,
+  classJoinAddress,
+  classJoinUrl,
   classCodeNormalize,
 } from '../../../src/lib/auth/class-code';
+import { ClassCodeSchema } from '../../../src/lib/auth/class-schemas';
 
 describe('CLASS_CODE_ALPHABET', () => {
   it('holds 31 distinct characters without 0, O, 1, I or L', () => {
@@ -60,5 +63,25 @@ describe('classCodeFormat', () => {
   it('splits an 8-character code in two groups of four', () => {
     expect(classCodeFormat('JFMS3K7Q')).toBe('JFMS-3K7Q');
     expect(classCodeFormat('SHORT')).toBe('SHORT');
+  });
+});
+
+describe('classJoinUrl', () => {
+  // Read back with the WHATWG URL parser, as a phone does after scanning the poster's QR code.
+  it('points at /join on the site with the code as a query the join page accepts', () => {
+    const url = new URL(classJoinUrl('https://kits.example.org/', 'JFMS3K7Q'));
+    expect(url.origin + url.pathname).toBe('https://kits.example.org/join');
+    expect(ClassCodeSchema.parse(url.searchParams.get('code'))).toBe('JFMS3K7Q');
+  });
+
+  it('keeps a port and drops a base path, since /join is at the root', () => {
+    expect(classJoinUrl('http://127.0.0.1:4321/app', 'ABCD2345')).toBe('http://127.0.0.1:4321/join?code=ABCD2345');
+  });
+});
+
+describe('classJoinAddress', () => {
+  it('spells the join page as host and path, with a port when there is one', () => {
+    expect(classJoinAddress('https://kits.example.org')).toBe('kits.example.org/join');
+    expect(classJoinAddress('http://127.0.0.1:4321/')).toBe('127.0.0.1:4321/join');
   });
 });
