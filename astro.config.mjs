@@ -7,6 +7,7 @@ import tailwindcss from '@tailwindcss/vite';
 import { COMPAT_LIBRARIES, PREACT_ISLANDS, REACT_ISLANDS, islandRuntimes } from './config/island-runtimes.mjs';
 import { originAllowedHostnames } from './src/lib/http/origin-check.ts';
 import { precompress } from './config/precompress.mjs';
+import { workWorker } from './config/work-worker.mjs';
 
 export default defineConfig({
   output: 'server',
@@ -33,7 +34,7 @@ export default defineConfig({
     allowedDomains: originAllowedHostnames(process.env.SITE_URL).map((hostname) => ({ hostname })),
   },
   vite: {
-    plugins: [islandRuntimes(), tailwindcss()],
+    plugins: [islandRuntimes(), tailwindcss(), workWorker()],
     // The dev server's pre-bundler would bind these to React before the alias sees them.
     optimizeDeps: { exclude: COMPAT_LIBRARIES, include: ['preact/compat', 'preact/hooks', 'preact/jsx-runtime'] },
     ssr: {

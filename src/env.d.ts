@@ -8,3 +8,9 @@ declare namespace App {
     actor: import('./lib/auth/actor').Actor;
   }
 }
+
+/** The built worker thread entry's file URL; null under the dev server (config/work-worker.mjs). */
+declare module 'virtual:kitwright/work-worker' {
+  const workerUrl: string | null;
+  export default workerUrl;
+}

@@ -67,14 +67,24 @@ export class PayloadTooLargeError extends AppError {
   readonly code = 'too_large';
 }
 
-/** 429: too many attempts; retry after the given number of seconds. */
-export class RateLimitError extends AppError {
-  readonly status = 429;
-  readonly code = 'rate_limited';
+/** An error the caller may retry after the given number of seconds (answered with Retry-After). */
+export abstract class RetryLaterError extends AppError {
   constructor(
     message: string,
     readonly retryAfterSeconds: number,
   ) {
     super(message);
   }
+}
+
+/** 429: too many attempts; retry after the given number of seconds. */
+export class RateLimitError extends RetryLaterError {
+  readonly status = 429;
+  readonly code = 'rate_limited';
+}
+
+/** 503: the server is busy (its work queue is full); retry after the given number of seconds. */
+export class ServiceUnavailableError extends RetryLaterError {
+  readonly status = 503;
+  readonly code = 'busy';
 }

@@ -3,7 +3,7 @@
  * shape `{ error: { code, message, fields?, requestId? } }`; unexpected errors are logged with a request id
  * and answered 500 with that id, never a stack trace.
  */
-import { AppError, InputError, MethodNotAllowedError, PayloadTooLargeError, RateLimitError } from '../errors';
+import { AppError, InputError, MethodNotAllowedError, PayloadTooLargeError, RetryLaterError } from '../errors';
 
 export interface ErrorBody {
   error: { code: string; message: string; fields?: Record<string, string[]>; requestId?: string };
@@ -36,7 +36,7 @@ export interface ErrorAnswer {
 export function errorAnswer(err: unknown, requestId: string): ErrorAnswer {
   if (err instanceof AppError) {
     const headers: Record<string, string> =
-      err instanceof RateLimitError
+      err instanceof RetryLaterError
         ? { 'retry-after': String(Math.max(1, Math.ceil(err.retryAfterSeconds))) }
         : err instanceof MethodNotAllowedError
           ? { allow: err.allowed.join(', ') }

@@ -1,7 +1,7 @@
 /**
  * Server adapter: builds one output of a kit (SVG sheets, PDF, STL or JSON) through buildKit, refusing scales
  * at which a piece falls below the buildability floor (with the solver's message of what would work), timing each
- * stage, and caching the result by content hash.
+ * stage, and caching the result by content hash. The build itself runs on the worker pool (src/lib/work).
  */
 import { BUILD_GRADE_BAND_FLOOR, buildabilityShortfalls, buildabilityShortfallWords } from '../geometry/buildability';
 import { InputError } from '../errors';
@@ -10,6 +10,7 @@ import type { Piece } from '../geometry/types';
 import { buildKit, GEOMETRY_KIT_ENGINE, type KitBuild, type KitEngine, type KitOutput } from './build-kit';
 import { contentHash } from './content-hash';
 import { kitFonts } from './fonts.server';
+import { workRun } from '../work/work-pool.server';
 import type { KitRequest } from './kit-request';
 import { KitCache } from './kit-cache.server';
 import type { StageReport } from '../http/progress-lines';
@@ -60,6 +61,35 @@ export interface KitOutputBuildOptions {
   onStage?: StageReport;
 }
 
+/**
+ * Builds one output now, on this thread, timing each stage: the task a pool worker runs (src/lib/work). Callers
+ * go through kitOutputBuild, which caches and hands this to the pool.
+ */
+export async function kitOutputMake(
+  request: KitRequest,
+  output: KitOutput,
+  options: KitOutputBuildOptions = {},
+): Promise<KitOutputBuild> {
+  const fonts = await kitFonts();
+  const start = performance.now();
+  let last = start;
+  const timingsMs: KitTimingsMs = { total: 0 };
+  const build = await buildKit(request, fonts, {
+    engine: guardedEngine(request),
+    outputs: [output],
+    signal: options.signal,
+    onProgress: (stage, fraction) => {
+      if (fraction < 1) return;
+      const now = performance.now();
+      timingsMs[stage] = Math.round((now - last) * 10) / 10;
+      last = now;
+      options.onStage?.(stage, timingsMs[stage]);
+    },
+  });
+  timingsMs.total = Math.round((performance.now() - start) * 10) / 10;
+  return { build, timingsMs };
+}
+
 const isAbort = (err: unknown) => err instanceof Error && err.name === 'AbortError';
 
 /** One output of a kit, built (or taken from the cache) from a parsed request; InputError when impossible. */
@@ -71,24 +101,8 @@ export async function kitOutputBuild(
   const hash = await contentHash(request);
   try {
     return await cache.get(`${hash}:${output}`, async () => {
-      const fonts = await kitFonts();
-      const start = performance.now();
-      let last = start;
-      const timingsMs: KitTimingsMs = { total: 0 };
-      const build = await buildKit(request, fonts, {
-        engine: guardedEngine(request),
-        outputs: [output],
-        signal: options.signal,
-        onProgress: (stage, fraction) => {
-          if (fraction < 1) return;
-          const now = performance.now();
-          timingsMs[stage] = Math.round((now - last) * 10) / 10;
-          last = now;
-          options.onStage?.(stage, timingsMs[stage]);
-        },
-      });
-      timingsMs.total = Math.round((performance.now() - start) * 10) / 10;
-      return { build, timingsMs };
+      // On a worker thread of the pool (src/lib/work): the request's event loop keeps answering meanwhile.
+      return (await workRun({ kind: 'kit-output', request, output }, options)) as KitOutputBuild;
     });
   } catch (err) {
     // This request joined a build whose own client cancelled it (the cache then forgets it): build anew.

@@ -1,0 +1,34 @@
+/**
+ * The CPU-heavy tasks the worker pool runs (work-pool.server.ts), by kind: what a task carries across the thread
+ * boundary (structured-clone data only) and the function that does it. The same function runs on the request's
+ * thread when there is no built worker (the dev server).
+ */
+import type { StageReport } from '../http/progress-lines';
+import type { KitOutput } from '../kit/build-kit';
+import { kitOutputMake } from '../kit/kit-build.server';
+import type { KitRequest } from '../kit/kit-request';
+import type { Model } from '../geometry/model-schema';
+import type { UnitSystem } from '../layout/units';
+import type { Venue } from '../layout/venues';
+import type { SheetSizeId } from '../layout/sheet-sizes';
+import { scaleExplain } from '../tools/scale-explain';
+
+export type WorkTask =
+  | { kind: 'kit-output'; request: KitRequest; output: KitOutput }
+  | {
+      kind: 'scale-explain';
+      model: Model;
+      req: { sheetId: SheetSizeId; paperGsm: number };
+      venue: Venue;
+      units: UnitSystem;
+    };
+
+/** Runs one task, reporting stages as they end; stops between stages when the signal fires. */
+export function workTaskRun(task: WorkTask, onStage: StageReport, signal: AbortSignal): Promise<unknown> {
+  switch (task.kind) {
+    case 'kit-output':
+      return kitOutputMake(task.request, task.output, { onStage, signal });
+    case 'scale-explain':
+      return Promise.resolve(scaleExplain(task.model, task.req, task.venue, task.units));
+  }
+}
