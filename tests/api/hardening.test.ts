@@ -124,6 +124,29 @@ describe('finding 2: /sign-in?next= never leaves the site', () => {
   });
 });
 
+describe('finding 4: finite but extreme numbers are a 400 naming the range, never a 500', () => {
+  const ramp = Array.from({ length: 512 }, (_, i) => i / 100);
+  for (const [path, body, range] of [
+    ['/api/analysis/equilibrium-temperature', { absorptivity: 1, emissivity: 5e-324 }, /from 0.01 to 1/],
+    [
+      '/api/analysis/magnetic',
+      { readings: [2, 4, 8].map((d) => ({ distanceCm: d, fieldUT: d === 4 ? 1e308 : 50 })) },
+      /µT/,
+    ],
+    [
+      '/api/analysis/vibration',
+      { timeS: ramp, x: ramp.map((_, i) => (i % 2 ? 1e308 : -1e308)), y: ramp.map(() => 0), z: ramp.map(() => 1) },
+      /from -100000 to 100000/,
+    ],
+  ] as const) {
+    it(path, async () => {
+      const e = await jsonError(await postJson(path, body));
+      expect(e.status).toBe(400);
+      expect(e.message).toMatch(range);
+    });
+  }
+});
+
 describe('finding 5: a password change voids the reset links mailed before it', () => {
   it('a reset link mailed before a change on the account page no longer sets a password', async () => {
     const teacher = await accountCreate(knex, { role: 'teacher', label: 'hardening-reset' });

@@ -6,6 +6,7 @@
  * over locations was dropped in 2015 (from memory: ISO 14644-1:2015, A.5–A.6).
  */
 import { z } from 'zod';
+import { readingBetween } from './reading-range';
 import { TextSchema } from '../text-schema';
 import { refineValid } from '../validation';
 import {
@@ -23,6 +24,11 @@ export const CLEANROOM_JSON_MAX_BYTES = 1_000_000;
 export const CLEANROOM_MAX_LOCATIONS = 200;
 export const CLEANROOM_MAX_SAMPLES_PER_LOCATION = 20;
 export const CLEANROOM_MAX_AREA_M2 = 100_000;
+/** Sample volume bounds, in the sample's own unit (L or m³): a millilitre to a million. */
+export const CLEANROOM_MIN_VOLUME = 1e-6;
+export const CLEANROOM_MAX_VOLUME = 1e6;
+/** Most particles one sample may count (far above ISO class 9's 3.52e7 per m³ at 0.5 µm). */
+export const CLEANROOM_MAX_COUNT = 1e12;
 
 const size = z
   .number()
@@ -34,10 +40,13 @@ const size = z
 export const CleanroomSampleSchema = z
   .object({
     /** Air volume the counter drew for this sample. */
-    volume: z.number().finite().positive(),
+    volume: readingBetween(CLEANROOM_MIN_VOLUME, CLEANROOM_MAX_VOLUME, 'L or m³'),
     volumeUnit: z.enum(['L', 'm3']),
     /** Particle counts, one per size in `sizesUm`, in the same order. */
-    counts: z.array(z.number().finite().int('counts are whole particles').min(0)).min(1).max(ISO_14644_SIZES_UM.length),
+    counts: z
+      .array(readingBetween(0, CLEANROOM_MAX_COUNT, 'particles').int('counts are whole particles'))
+      .min(1)
+      .max(ISO_14644_SIZES_UM.length),
   })
   .strict();
 

@@ -5,6 +5,7 @@
  * plate facing the Sun and radiating from both faces 1/2.
  */
 import { z } from 'zod';
+import { readingBetween } from './reading-range';
 
 /** Largest JSON equilibrium-temperature request, bytes. */
 export const EQUILIBRIUM_JSON_MAX_BYTES = 10_000;
@@ -16,12 +17,18 @@ export const SOLAR_CONSTANT_W_PER_M2 = 1360.8;
 export const EQUILIBRIUM_MIN_DISTANCE_AU = 0.1;
 export const EQUILIBRIUM_MAX_DISTANCE_AU = 100;
 
+/**
+ * Smallest absorptivity or emissivity accepted: polished metals go down to about 0.02 (from memory: polished gold
+ * and silver, ε ≈ 0.02–0.03), and α/ε of 5e-324 would overflow the temperature to Infinity.
+ */
+export const EQUILIBRIUM_MIN_COEFFICIENT = 0.01;
+
 export const EquilibriumTemperatureInputSchema = z
   .object({
-    /** Solar absorptivity α, 0 … 1. */
-    absorptivity: z.number().finite().gt(0).max(1),
-    /** Infrared emissivity ε, 0 … 1. */
-    emissivity: z.number().finite().gt(0).max(1),
+    /** Solar absorptivity α, 0.01 … 1. */
+    absorptivity: readingBetween(EQUILIBRIUM_MIN_COEFFICIENT, 1, ''),
+    /** Infrared emissivity ε, 0.01 … 1. */
+    emissivity: readingBetween(EQUILIBRIUM_MIN_COEFFICIENT, 1, ''),
     /** Sunlit (absorbing) area over radiating area; 0.25 for a sphere. */
     areaRatio: z.number().finite().gt(0).max(1).default(0.25),
     /** Distance from the Sun, AU. */

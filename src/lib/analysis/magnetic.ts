@@ -5,6 +5,7 @@
  * Electrodynamics, 4th ed., §5.4.3): on the axis B = (μ0/4π)·2m/r³, in the equatorial plane (μ0/4π)·m/r³.
  */
 import { z } from 'zod';
+import { readingBetween } from './reading-range';
 import { InputError } from '../errors';
 import { linearFit } from './least-squares';
 
@@ -18,14 +19,21 @@ export const EARTH_FIELD_TYPICAL_UT = 50;
 export const MAGNETIC_DEFAULT_THRESHOLD_UT = EARTH_FIELD_TYPICAL_UT / 100;
 export const MAGNETIC_MAX_READINGS = 1_000;
 export const MAGNETIC_MIN_READINGS = 3;
+/** Distances a ruler can read, cm: 1 mm to 1 km (a power law fitted to 1e-300 cm overflows). */
+export const MAGNETIC_MIN_DISTANCE_CM = 0.1;
+export const MAGNETIC_MAX_DISTANCE_CM = 100_000;
+/** Strongest field accepted, µT: 10 T, above any classroom magnet or magnetometer (from memory: lab NdFeB ≈ 1 T). */
+export const MAGNETIC_MAX_FIELD_UT = 1e7;
+/** Lowest threshold, µT (1 nT, about a fluxgate's resolution; from memory). */
+export const MAGNETIC_MIN_THRESHOLD_UT = 0.001;
 
 /** One field reading at a distance from the source. */
 export const MagneticReadingSchema = z
   .object({
     /** Distance from the magnet's centre, cm. */
-    distanceCm: z.number().finite().positive(),
+    distanceCm: readingBetween(MAGNETIC_MIN_DISTANCE_CM, MAGNETIC_MAX_DISTANCE_CM, 'cm'),
     /** Field magnitude read there, µT. */
-    fieldUT: z.number().finite(),
+    fieldUT: readingBetween(-MAGNETIC_MAX_FIELD_UT, MAGNETIC_MAX_FIELD_UT, 'µT'),
   })
   .strict();
 export type MagneticReading = z.infer<typeof MagneticReadingSchema>;
@@ -34,9 +42,11 @@ export const MagneticInputSchema = z
   .object({
     readings: z.array(MagneticReadingSchema).max(MAGNETIC_MAX_READINGS),
     /** Field read with the magnet far away (Earth and room), µT, subtracted from every reading. */
-    backgroundUT: z.number().finite().min(0).default(0),
+    backgroundUT: readingBetween(0, MAGNETIC_MAX_FIELD_UT, 'µT').default(0),
     /** Field level to stay below, µT; default 1 % of a typical Earth field. */
-    thresholdUT: z.number().finite().positive().default(MAGNETIC_DEFAULT_THRESHOLD_UT),
+    thresholdUT: readingBetween(MAGNETIC_MIN_THRESHOLD_UT, MAGNETIC_MAX_FIELD_UT, 'µT').default(
+      MAGNETIC_DEFAULT_THRESHOLD_UT,
+    ),
   })
   .strict();
 export type MagneticInput = z.infer<typeof MagneticInputSchema>;

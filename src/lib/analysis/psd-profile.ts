@@ -4,6 +4,7 @@
  * start level with slopes in dB/octave.
  */
 import { z } from 'zod';
+import { readingBetween } from './reading-range';
 import { InputError } from '../errors';
 
 /** Largest JSON PSD-profile request, bytes. */
@@ -13,6 +14,9 @@ export const PSD_PROFILE_MAX_BREAKPOINTS = 100;
 /** Frequency bounds for a breakpoint, Hz. */
 export const PSD_PROFILE_MIN_FREQUENCY_HZ = 0.01;
 export const PSD_PROFILE_MAX_FREQUENCY_HZ = 100_000;
+/** Level bounds for a breakpoint, g²/Hz: far outside any test specification, inside what the integral can hold. */
+export const PSD_PROFILE_MIN_LEVEL_G2_PER_HZ = 1e-12;
+export const PSD_PROFILE_MAX_LEVEL_G2_PER_HZ = 1e6;
 
 const frequencyHz = z.number().finite().min(PSD_PROFILE_MIN_FREQUENCY_HZ).max(PSD_PROFILE_MAX_FREQUENCY_HZ);
 
@@ -26,7 +30,7 @@ export const PsdProfilePointSchema = z
     /** Breakpoint frequency, Hz. */
     frequencyHz,
     /** Level at the breakpoint, g²/Hz. */
-    psdG2PerHz: z.number().finite().positive().optional(),
+    psdG2PerHz: readingBetween(PSD_PROFILE_MIN_LEVEL_G2_PER_HZ, PSD_PROFILE_MAX_LEVEL_G2_PER_HZ, 'g²/Hz').optional(),
     /** Slope from the previous point to this one, dB/octave (+6 rising, −6 falling). */
     slopeDbPerOctave: z.number().finite().min(-100).max(100).optional(),
   })

@@ -4,6 +4,8 @@
  * saved-result-tools.ts.
  */
 import { z } from 'zod';
+import { InputError } from '../errors';
+import { readingsFinite } from './reading-range';
 import { TextSchema } from '../text-schema';
 
 /** Most points a saved plot series may hold; longer series are downsampled. */
@@ -85,12 +87,20 @@ export function seriesDownsample(points: [number, number][], maxPoints = SAVED_R
   return out;
 }
 
-/** Validates and stamps a saved result with the analysis version; throws ZodError if a builder broke a bound. */
+/**
+ * Validates and stamps a saved result with the analysis version; throws ZodError if a builder broke a bound. A
+ * result holding Infinity or NaN is the inputs' doing (a reading range too wide for some tool), so it is a 400.
+ */
 export function savedResultBuild(
   tool: SavedResult['tool'],
   inputsSummary: string,
   result: object,
   plot: SavedPlot,
 ): SavedResult {
+  if (!readingsFinite(result) || !readingsFinite(plot))
+    throw new InputError(
+      `These readings give a ${tool} result too large to compute (it overflows to infinity). ` +
+        'Check for a misplaced decimal point or a wrong unit, and send readings an instrument could record.',
+    );
   return SavedResultSchema.parse({ tool, toolVersion: ANALYSIS_TOOL_VERSION, inputsSummary, result, plot });
 }

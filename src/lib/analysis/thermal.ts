@@ -4,6 +4,7 @@
  * the time constant τ and final temperature T∞ with standard uncertainties.
  */
 import { z } from 'zod';
+import { ReadingTimeSchema, readingBetween } from './reading-range';
 import { TextSchema } from '../text-schema';
 import { InputError } from '../errors';
 import { linearFit } from './least-squares';
@@ -19,7 +20,10 @@ export const THERMAL_MAX_POINTS_PER_RUN = 20_000;
 /** Share of a run (at least 3 readings) the initial rate is fitted over. */
 export const THERMAL_INITIAL_SHARE = 0.2;
 
-const finite = z.number().finite('must be a finite number');
+/** Hottest reading accepted, °C (well above any classroom heat lamp or oven). */
+export const THERMAL_MAX_TEMPERATURE_C = 10_000;
+/** Absolute zero, °C (BIPM SI Brochure: 0 K = −273.15 °C). */
+export const ABSOLUTE_ZERO_C = -273.15;
 
 /** One temperature log: readings at increasing times. */
 export const ThermalRunSchema = z
@@ -27,9 +31,11 @@ export const ThermalRunSchema = z
     /** Name shown in the legend, e.g. "with blanket". */
     label: TextSchema.trim().min(1).max(60),
     /** Reading times, s. */
-    timeS: z.array(finite).max(THERMAL_MAX_POINTS_PER_RUN),
+    timeS: z.array(ReadingTimeSchema).max(THERMAL_MAX_POINTS_PER_RUN),
     /** Temperatures, °C. */
-    temperatureC: z.array(finite).max(THERMAL_MAX_POINTS_PER_RUN),
+    temperatureC: z
+      .array(readingBetween(ABSOLUTE_ZERO_C, THERMAL_MAX_TEMPERATURE_C, '°C'))
+      .max(THERMAL_MAX_POINTS_PER_RUN),
   })
   .strict()
   .refine((r) => r.timeS.length === r.temperatureC.length, {

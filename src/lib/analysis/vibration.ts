@@ -5,6 +5,7 @@
  * offset) removed, because a shake test asks how hard the model is shaken, not which way is down.
  */
 import { z } from 'zod';
+import { ReadingTimeSchema, readingBetween } from './reading-range';
 import { InputError } from '../errors';
 import {
   STANDARD_GRAVITY_M_PER_S2,
@@ -34,7 +35,11 @@ export const VIBRATION_MAX_BANDS = 20;
 /** How many dominant frequencies are reported. */
 export const VIBRATION_DOMINANT_COUNT = 5;
 
-const samples = z.array(z.number().finite('must be a finite number')).max(VIBRATION_MAX_SAMPLES);
+/** Largest |acceleration| accepted, in g or m/s²: shock accelerometers top out near 1e5 g (from memory). */
+export const VIBRATION_MAX_READING = 1e5;
+const samples = z
+  .array(readingBetween(-VIBRATION_MAX_READING, VIBRATION_MAX_READING, 'g or m/s²'))
+  .max(VIBRATION_MAX_SAMPLES);
 
 /** Options shared by the JSON and CSV forms of a vibration request. */
 export const VibrationOptionsSchema = z.object({
@@ -57,7 +62,7 @@ export const VibrationOptionsSchema = z.object({
 
 /** A vibration record as columns: time in seconds and x, y, z in the stated (or detected) unit. */
 export const VibrationInputSchema = VibrationOptionsSchema.extend({
-  timeS: samples,
+  timeS: z.array(ReadingTimeSchema).max(VIBRATION_MAX_SAMPLES),
   x: samples,
   y: samples,
   z: samples,
