@@ -189,9 +189,88 @@ describe('scale tool', () => {
   it('lists every tool on the tools page', async () => {
     const { page } = await pageNew(browser);
     await page.goto('/tools');
-    for (const name of ['Shake test', 'Thermal cycling', 'Clean room', 'Magnetic field', 'Scale it']) {
+    for (const name of [
+      'Shake test',
+      'Thermal cycling',
+      'Clean room',
+      'Magnetic field',
+      'Scale it',
+      'Four-point measurement',
+      'Launch stack',
+    ]) {
       expect(await page.getByRole('link', { name, exact: true }).count()).toBe(1);
     }
     expect(await axeSerious(page)).toEqual([]);
+  });
+});
+
+describe('four-point tool', () => {
+  it('finds the sample gradient, draws the formation and the arrow in 3D, and refuses the flat sample', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/four-point');
+    await islandReady(page, 'FourPointTool');
+    await page.getByRole('button', { name: 'Load sample: one corner raised' }).click();
+    await page.getByRole('button', { name: 'Find the gradient' }).click();
+    const gradient = page.getByTestId('four-point-gradient');
+    await gradient.waitFor();
+    // The sample lamp stands at x < 0 and above the table: the field grows toward −x and +z.
+    const [gx, , gz] = (await gradient.textContent())!
+      .replace(/[()]/g, '')
+      .split(',')
+      .map((s) => Number(s.trim()));
+    expect(gx).toBeLessThan(0);
+    expect(gz).toBeGreaterThan(0);
+    await page.getByTestId('formation-view').scrollIntoViewIfNeeded();
+    await islandReady(page, 'FormationView');
+    await page.waitForSelector('[data-testid="formation-canvas"][data-scene-ready="true"]', { timeout: 30_000 });
+    expect(await page.getByTestId('formation-canvas').getAttribute('data-arrow')).toBe('shown');
+    expect(await page.getByTestId('formation-arrow').textContent()).toMatch(/points where the reading grows fastest/);
+
+    await page.getByRole('button', { name: 'Load sample: all four flat' }).click();
+    await page.getByRole('button', { name: 'Find the gradient' }).click();
+    await page
+      .getByText(/like three points do: they cannot see how the field changes across that plane/)
+      .first()
+      .waitFor();
+    await page.waitForSelector('[data-testid="formation-canvas"][data-arrow="none"]');
+    expect(errors).toEqual([]);
+  });
+});
+
+describe('launch stack tool', () => {
+  it('checks the sample stack: height, centre of mass, fit, and the side view in stacking order', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/launch-stack');
+    await islandReady(page, 'LaunchStackTool');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Check the stack' }).click();
+    await page.getByTestId('stack-height').waitFor();
+    // Hand calculation (tests/lib/analysis/launch-stack.test.ts): 4.1 m tall, centre of mass 3610.5/1530 m.
+    expect(await page.getByTestId('stack-height').textContent()).toBe('4.1');
+    expect(Number(await page.getByTestId('stack-centre-of-mass').textContent())).toBeCloseTo(2.36, 2);
+    expect(await page.getByTestId('stack-fits').textContent()).toBe('Yes');
+    const parts = await page.locator('[data-testid="launch-stack-view"] figcaption li').allTextContents();
+    expect(parts[0]).toBe('Launch adapter');
+    expect(parts.at(-1)).toBe('Probe 3');
+
+    // A fairing too short: the tool says how much longer its cylinder must be.
+    await page.getByLabel('Cylinder height').fill('3.5');
+    await page.getByLabel('Fairing diameter').fill('3');
+    await page.getByLabel('Cone height').fill('2.5');
+    await page.getByRole('button', { name: 'Check the stack' }).click();
+    await page.getByText(/too tall for this fairing/).waitFor();
+    expect(await page.getByTestId('stack-fits').textContent()).toBe('No');
+    expect(errors).toEqual([]);
+  });
+
+  it('shows the launch stack in the 3D fold-along preview, bottom part first', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/preview/skein-stack');
+    await page.getByTestId('fold-preview').scrollIntoViewIfNeeded();
+    await page.waitForSelector('[data-testid="fold-canvas"][data-scene-ready="true"]', { timeout: 30_000 });
+    const steps = await page.locator('[data-testid="fold-preview"] ol li').allTextContents();
+    expect(steps[0]).toMatch(/Launch adapter/);
+    expect(steps.findIndex((s) => /Probe 3/.test(s))).toBeGreaterThan(steps.findIndex((s) => /Probe 1/.test(s)));
+    expect(errors).toEqual([]);
   });
 });

@@ -3,7 +3,7 @@ import type { Piece } from '../../lib/geometry/types';
 import FoldScene from './FoldScene';
 import SceneCanvas from './SceneCanvas';
 import { viewCommandRun, viewKeyCommand, type ViewActions } from '../../lib/preview/view-keys';
-import { VIEW_FOV_DEG, viewFrame } from './view-frame';
+import { viewCamera, viewFrame } from './view-frame';
 
 export interface FoldCanvasProps {
   pieces: readonly Piece[];
@@ -62,17 +62,7 @@ export default function FoldCanvas({
       data-testid="fold-canvas"
       className="h-full w-full cursor-grab rounded-lg active:cursor-grabbing"
     >
-      <SceneCanvas
-        frameloop="demand"
-        dpr={[1, 2]}
-        camera={{
-          fov: VIEW_FOV_DEG,
-          up: [0, 0, 1],
-          position: frame.cameraPosition,
-          near: frame.radiusMm / 100,
-          far: frame.radiusMm * 100,
-        }}
-      >
+      <SceneCanvas frameloop="demand" dpr={[1, 2]} camera={viewCamera(frame)}>
         <FoldScene
           pieces={pieces}
           foldPercent={foldPercent}

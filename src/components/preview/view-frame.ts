@@ -28,6 +28,26 @@ export function viewFrame(pieces: readonly Piece[]): ViewFrame {
       edges.dispose();
     }
   }
+  return viewFrameOfBox(box);
+}
+
+/** The preview camera for a frame (z up), as @react-three/fiber's `camera` prop takes it. */
+export function viewCamera(frame: ViewFrame) {
+  return {
+    fov: VIEW_FOV_DEG,
+    up: [0, 0, 1] as [number, number, number],
+    position: frame.cameraPosition,
+    near: frame.radiusMm / 100,
+    far: frame.radiusMm * 100,
+  };
+}
+
+/** The same camera placement for points (any unit: the frame comes out in the points' unit). */
+export function viewFrameOfPoints(points: readonly (readonly [number, number, number])[]): ViewFrame {
+  return viewFrameOfBox(new Box3().setFromPoints(points.map((p) => new Vector3(...p))));
+}
+
+function viewFrameOfBox(box: Box3): ViewFrame {
   if (box.isEmpty()) return { target: [0, 0, 0], cameraPosition: [0, -100, 50], radiusMm: 50 };
   const centre = box.getCenter(new Vector3());
   const radiusMm = Math.max(1, box.getSize(new Vector3()).length() / 2);

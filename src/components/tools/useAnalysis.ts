@@ -8,7 +8,15 @@ import { ApiError, api } from '../../lib/http/client';
 import type { SavedResult } from '../../lib/analysis/saved-result';
 
 export type AnalysisTool =
-  'vibration' | 'thermal' | 'cleanroom' | 'magnetic' | 'psd-profile' | 'orbit-eclipse' | 'equilibrium-temperature';
+  | 'vibration'
+  | 'thermal'
+  | 'cleanroom'
+  | 'magnetic'
+  | 'psd-profile'
+  | 'orbit-eclipse'
+  | 'equilibrium-temperature'
+  | 'four-point'
+  | 'launch-stack';
 
 /** What the islands send: a JSON body, or CSV text with query options. */
 export type AnalysisBody = { json: unknown } | { csv: string; query?: Record<string, string | number | undefined> };

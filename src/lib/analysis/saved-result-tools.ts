@@ -238,19 +238,34 @@ export function interferenceSavedResult(r: InterferenceResult): SavedResult {
   );
 }
 
-/** Saved form of a four-point result: the gradient's x, y and z parts as bars (unit per cm). */
+/**
+ * Saved form of a four-point result: each reading against its sensor's distance along the gradient from the
+ * centre (cm), and the fitted even change through them, a straight line of slope |∇f|.
+ */
 export function fourPointSavedResult(input: FourPointInput, r: FourPointResult): SavedResult {
   const unit = input.unit ? `${input.unit}/cm` : 'per cm';
+  const dir = r.gradientDirection ?? [1, 0, 0];
+  const along = (p: readonly number[]) => dir.reduce((sum, d, k) => sum + d * (p[k]! - r.centreCm[k]!), 0);
+  const readings = input.points
+    .map((p): [number, number] => [along(p.positionCm), p.value])
+    .sort((a, b) => a[0] - b[0]);
+  const ends = [readings[0]![0], readings.at(-1)![0]];
   return savedResultBuild(
     'four-point',
     `${input.points.length} points, elongation ${r.quality.elongation.toFixed(2)}, planarity ${r.quality.planarity.toFixed(2)}`,
     r,
     {
-      kind: 'bar',
-      title: `Gradient ${+r.gradientMagnitudePerCm.toPrecision(3)} ${unit}`,
-      xLabel: 'Component: x (1), y (2), z (3)',
-      yLabel: `Gradient (${unit})`,
-      series: (['x', 'y', 'z'] as const).map((axis, i) => series(axis, [[i + 1, r.gradientPerCm[i]!]])),
+      kind: 'line',
+      title: `Readings along the gradient: ${+r.gradientMagnitudePerCm.toPrecision(3)} ${unit}`,
+      xLabel: 'Distance along the gradient from the centre (cm)',
+      yLabel: input.unit ? `Reading (${input.unit})` : 'Reading',
+      series: [
+        series('readings', readings),
+        series(
+          'even change',
+          ends.map((x): [number, number] => [x, r.valueAtCentre + r.gradientMagnitudePerCm * x]),
+        ),
+      ],
     },
   );
 }
@@ -258,9 +273,12 @@ export function fourPointSavedResult(input: FourPointInput, r: FourPointResult):
 /** Saved form of a launch stack: the stack's radius against height beside the fairing's usable radius (m). */
 export function launchStackSavedResult(input: LaunchStackInput, r: LaunchStackResult): SavedResult {
   const f = input.fairing;
+  // Each part as a flat step; the ends are pulled in by a hair so no two points share a height (a plot
+  // keeps one value per x) and the step between parts draws nearly upright.
+  const hair = r.heightM * 1e-4;
   const outline = r.parts.flatMap((p): [number, number][] => [
-    [p.bottomM, p.radiusM],
-    [p.topM, p.radiusM],
+    [p.bottomM + hair, p.radiusM],
+    [p.topM - hair, p.radiusM],
   ]);
   const top = f.cylinderHeightM + f.coneHeightM;
   return savedResultBuild(

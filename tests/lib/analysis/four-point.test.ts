@@ -203,16 +203,16 @@ describe('fourPointGradient', () => {
     ).toBe(false);
   });
 
-  it('saves the gradient in the shared saved-result shape', () => {
+  it('saves the readings along the gradient in the shared saved-result shape', () => {
     const i = input(REGULAR, (p) => 2 * p[0] - p[2]);
     const saved = fourPointSavedResult(i, fourPointGradient(i));
     expect(SavedResultSchema.safeParse(saved).success).toBe(true);
     expect(saved.tool).toBe('four-point');
-    expect(saved.plot.series.map((x) => x.points[0]![1])).toEqual([
-      expect.closeTo(2, 12),
-      expect.closeTo(0, 12),
-      expect.closeTo(-1, 12),
-    ]);
+    // A linear field read along its own gradient is a straight line of slope |g| = √5 through every reading.
+    const [readings, line] = saved.plot.series;
+    const [[x0, y0], [x1, y1]] = line!.points as [[number, number], [number, number]];
+    expect((y1 - y0) / (x1 - x0)).toBeCloseTo(Math.sqrt(5), 12);
+    for (const [x, y] of readings!.points) expect(y).toBeCloseTo(y0 + Math.sqrt(5) * (x - x0), 9);
   });
 
   it('gives the sample a gradient pointing toward the lamp, and refuses the flat sample', () => {
