@@ -39,9 +39,9 @@ export default function KitBuilder(props: KitBuilderProps) {
     });
     if (props.initialPreview) c.setQueryData(kitPreviewQueryOptions(props.initial).queryKey, props.initialPreview);
     if (props.initialSolve) {
-      const { modelId, sheetSizeId, paperGsm, units, venue } = props.initial;
+      const { modelId, sheetSizeId, paperGsm, units, venue, gradeBand } = props.initial;
       c.setQueryData(
-        scaleSolveQueryOptions({ modelId, sheetSizeId, paperGsm, units, venue }).queryKey,
+        scaleSolveQueryOptions({ modelId, sheetSizeId, paperGsm, units, venue, gradeBand }).queryKey,
         props.initialSolve,
       );
     }
@@ -99,6 +99,7 @@ function KitBuilderForm(props: KitBuilderProps) {
     paperGsm: settled.paperGsm,
     units: settled.units,
     venue: settled.venue,
+    gradeBand: settled.gradeBand,
   };
   const solve = useQuery({ ...scaleSolveQueryOptions(solveParams), placeholderData: keepPreviousData });
   const [saved, setSaved] = useState<KitView | null>(null);
@@ -207,6 +208,29 @@ function KitBuilderForm(props: KitBuilderProps) {
               </p>
             )}
           </div>
+        </div>
+        <div>
+          <label className="field-label" htmlFor="kit-grade">
+            Who builds it
+          </label>
+          <select
+            id="kit-grade"
+            className="field-input"
+            aria-describedby="kit-grade-hint"
+            {...register('gradeBand', { onChange: () => (immediate.current = true) })}
+          >
+            {limits.gradeBands.map((g) => (
+              <option key={g} value={g}>
+                {limits.gradeBandWords[g]}
+              </option>
+            ))}
+          </select>
+          <p id="kit-grade-hint" className="mt-1 text-sm text-ink-soft">
+            {props.gradeBandFrom && values.gradeBand === initial.gradeBand
+              ? `From your class ${props.gradeBandFrom}. `
+              : ''}
+            The scale keeps every piece, tab and fold big enough for them.
+          </p>
         </div>
         <div>
           <label className="field-label" htmlFor="kit-venue">

@@ -6,7 +6,7 @@ export interface KitBuilderProps {
   models: { id: string; title: string; summary: string }[];
   activities: { slug: string; title: string; models: string[] }[];
   /** The teacher's own classes (empty for staff, who cannot save). */
-  classes: { id: string; name: string }[];
+  classes: { id: string; name: string; gradeBand: string }[];
   sheetSizes: { id: string; label: string }[];
   venues: { id: string; label: string }[];
   /** Preset print beds for the STL. */
@@ -18,4 +18,6 @@ export interface KitBuilderProps {
   initialSolve: ScaleSolution | null;
   /** Message when the first preview could not be built on the server. */
   initialError: string | null;
+  /** The class whose grade band the builder starts from, or null (the default band). */
+  gradeBandFrom: string | null;
 }

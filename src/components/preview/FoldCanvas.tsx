@@ -1,5 +1,6 @@
 import { useCallback, useMemo, useRef, type KeyboardEvent, type RefObject } from 'react';
 import type { Piece } from '../../lib/geometry/types';
+import type { PreviewRod } from './fold-preview-props';
 import FoldScene from './FoldScene';
 import SceneCanvas from './SceneCanvas';
 import { viewCommandRun, viewKeyCommand, type ViewActions } from '../../lib/preview/view-keys';
@@ -7,6 +8,7 @@ import { viewCamera, viewFrame } from './view-frame';
 
 export interface FoldCanvasProps {
   pieces: readonly Piece[];
+  rods: readonly PreviewRod[];
   foldPercent: number;
   foldWholeKit: boolean;
   currentAssemblyStep: number;
@@ -23,6 +25,7 @@ export interface FoldCanvasProps {
  */
 export default function FoldCanvas({
   pieces,
+  rods,
   foldPercent,
   foldWholeKit,
   currentAssemblyStep,
@@ -65,6 +68,7 @@ export default function FoldCanvas({
       <SceneCanvas frameloop="demand" dpr={[1, 2]} camera={viewCamera(frame)}>
         <FoldScene
           pieces={pieces}
+          rods={rods}
           foldPercent={foldPercent}
           foldWholeKit={foldWholeKit}
           currentAssemblyStep={currentAssemblyStep}

@@ -22,6 +22,7 @@ export default function FoldPreview({
   scaleDenominator,
   pieces,
   boomScale,
+  rods = [],
   initialFoldPercent = 100,
 }: FoldPreviewProps) {
   const steps = useMemo(() => assemblySteps(pieces), [pieces]);
@@ -43,6 +44,7 @@ export default function FoldPreview({
             <Suspense fallback={<p className="p-4 text-ink-soft">Loading the 3D view…</p>}>
               <FoldCanvas
                 pieces={pieces}
+                rods={rods}
                 foldPercent={progress.foldPercent}
                 foldWholeKit={progress.foldWholeKit}
                 currentAssemblyStep={currentAssemblyStep}

@@ -1,6 +1,8 @@
 import type { RefObject } from 'react';
 import type { Piece } from '../../lib/geometry/types';
 import PieceMesh, { type PieceState } from './PieceMesh';
+import RodMesh from './RodMesh';
+import type { PreviewRod } from './fold-preview-props';
 import ViewRig from './ViewRig';
 import SceneReadySignal from './SceneReadySignal';
 import type { ViewActions } from '../../lib/preview/view-keys';
@@ -8,6 +10,8 @@ import type { ViewFrame } from './view-frame';
 
 interface Props {
   pieces: readonly Piece[];
+  /** Rods standing in for booms too thin for paper, drawn in place. */
+  rods: readonly PreviewRod[];
   foldPercent: number;
   /** Fold every piece by the slider; otherwise only the current step's, the others shown assembled. */
   foldWholeKit: boolean;
@@ -24,6 +28,7 @@ const stateOf = (piece: Piece, current: number): PieceState =>
 /** The lit scene inside the canvas: every piece folded by the slider, the orbit rig and the ready signal. */
 export default function FoldScene({
   pieces,
+  rods,
   foldPercent,
   foldWholeKit,
   currentAssemblyStep,
@@ -44,6 +49,9 @@ export default function FoldScene({
           fraction={foldWholeKit || stateOf(p, currentAssemblyStep) === 'current' ? fraction : 1}
           state={stateOf(p, currentAssemblyStep)}
         />
+      ))}
+      {rods.map((r) => (
+        <RodMesh key={r.partId} name={r.partId} fromMm={r.fromMm} toMm={r.toMm} diameterMm={r.diameterMm} />
       ))}
       <ViewRig frame={frame} actionsRef={actionsRef} />
       <SceneReadySignal foldPercent={foldPercent} onRendered={onRendered} />

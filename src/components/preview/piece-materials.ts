@@ -33,3 +33,6 @@ export const PIECE_MATERIALS = {
   edge: new LineBasicMaterial({ color: '#1b2330' }),
   edgeLater: new LineBasicMaterial({ color: '#6b7482', transparent: true, opacity: 0.35 }),
 } as const;
+
+/** A rod (straw, skewer, dowel) that stands in for a boom too thin for paper: wood-coloured, matt. */
+export const ROD_MATERIAL = new MeshStandardMaterial({ color: '#c8a46a', roughness: 0.7 });

@@ -9,7 +9,6 @@
  * pair of school scissors and a fingertip handle at each age. A test measures the demo kits against them.
  */
 import type { Piece, Vec2Mm } from './types';
-import { pointsBounds } from './vec';
 
 /** The grade bands a kit is built for: school bands as classes record them, and adults. */
 export const BUILD_GRADE_BANDS = ['K-2', '3-5', '6-8', '9-12', 'adult'] as const;
@@ -32,7 +31,7 @@ export const BUILD_GRADE_BAND_WORDS: Record<BuildGradeBand, string> = {
 
 /** What a class of one band can build, mm on the printed sheet. */
 export interface BuildabilityMinimums {
-  /** Smallest piece: the smaller side of the box around its faces (tabs left out). */
+  /** Smallest piece: the narrowest width of its faces taken together (tabs left out). */
   pieceMm: number;
   /** Narrowest strip: the smallest width of any one face (a narrower face tears or crumples when cut). */
   stripMm: number;
@@ -86,10 +85,29 @@ export interface BuildabilityShortfall {
   minimumMm: number;
 }
 
-/** The smaller side of a piece's faces' bounding box, mm (tabs left out: they are not the part). */
+/**
+ * A piece's size: the narrowest width of its faces taken together (their convex hull), mm, so the same
+ * however the piece is turned on the sheet. Tabs are left out: they are not the part.
+ */
 export function pieceAcrossMm(piece: Pick<Piece, 'hinge'>): number {
-  const b = pointsBounds(piece.hinge.faces.flatMap((f) => f.polygonMm));
-  return Math.min(b.maxX - b.minX, b.maxY - b.minY);
+  return polygonWidthMm(convexHull(piece.hinge.faces.flatMap((f) => f.polygonMm)));
+}
+
+/** The convex hull of points, counter-clockwise (Andrew's monotone chain). */
+export function convexHull(points: readonly Vec2Mm[]): Vec2Mm[] {
+  const sorted = [...points].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+  if (sorted.length < 3) return sorted;
+  const cross = (o: Vec2Mm, a: Vec2Mm, b: Vec2Mm) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
+  const chain = (pts: Vec2Mm[]) => {
+    const out: Vec2Mm[] = [];
+    for (const p of pts) {
+      while (out.length >= 2 && cross(out[out.length - 2]!, out[out.length - 1]!, p) <= 0) out.pop();
+      out.push(p);
+    }
+    out.pop();
+    return out;
+  };
+  return [...chain(sorted), ...chain([...sorted].reverse())];
 }
 
 /**

@@ -1,19 +1,25 @@
 /**
- * The flat patterns of a whole model at a scale on a paper weight: the body net first (step 1), then one
- * step per appendage in the model's order, tab numbers unique across the kit, and the wire boom threads;
- * a launch stack's parts come from launch-stack.ts.
+ * The flat patterns of a whole model at a scale on a paper weight for a grade band: the body net first
+ * (step 1), then one step per appendage in the model's order, tab numbers unique across the kit, the wire
+ * boom threads, and the substitutes for parts too fine for paper (part-substitutes.ts): a boom thinner than
+ * a pencil has no piece but a rod cut to length; a cone smaller than the band can roll is a flat disc. A
+ * launch stack's parts come from launch-stack.ts.
  * Flat mm per piece, model mm at kit scale (see types.ts).
  */
 import { z } from 'zod';
 import type { Model } from './model-schema';
-import type { Piece, Vec3Mm, WireBoomThread } from './types';
+import type { Piece, PlaneFrame, Vec3Mm, WireBoomThread } from './types';
 import { bodyNet } from './body-net';
 import { appendageDirection, appendageFootMm, frameAlongAxis, frameAroundAxis } from './appendage-frame';
 import { coneDevelopment, conePiece } from './cone-development';
 import { tubePiece } from './tube-pattern';
 import { deployablePanelFrame, panelBodyLabel, panelPiece } from './panel-pattern';
-import { wireAnchorPiece, wireAnchorPlacement, wireBoomThread } from './wire-boom';
-import { PAPER_GSM_MAX, PAPER_GSM_MIN, paperOverlapMm, paperTabDepthMm } from './paper';
+import { WIRE_ANCHOR_SIZE_MM, wireAnchorPiece, wireAnchorPlacement, wireBoomThread } from './wire-boom';
+import { arcPoints, PAPER_GSM_MAX, PAPER_GSM_MIN, paperOverlapMm, paperTabDepthMm } from './paper';
+import { BUILD_GRADE_BAND_DEFAULT, BUILD_GRADE_BANDS, BUILDABILITY_MINIMUMS } from './buildability';
+import { boomStockFor, coneTooSmall, type PartSubstitute } from './part-substitutes';
+import { pieceFromNet } from './piece-builder';
+import { frameApply } from './hinge-tree';
 import { vec3Combine } from './vec';
 import { launchStackPieces } from './launch-stack';
 
@@ -32,19 +38,25 @@ export const PatternOptionsSchema = z.object({
     .finite()
     .min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`)
     .max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`),
+  /** The class the kit is for: sets anchor sizes and which parts are too fine for paper. */
+  gradeBand: z.enum(BUILD_GRADE_BANDS).default(BUILD_GRADE_BAND_DEFAULT),
 });
-export type PatternOptions = z.infer<typeof PatternOptionsSchema>;
+export type PatternOptions = z.input<typeof PatternOptionsSchema>;
 
 export interface ModelPatterns {
   pieces: Piece[];
   threads: WireBoomThread[];
+  /** Parts swapped for something a class can build, in the model's order. */
+  substitutes: PartSubstitute[];
 }
 
 /** Every piece and thread of a parsed model at options.scaleDenominator on options.paperGsm paper. */
 export function modelPatterns(model: Model, options: PatternOptions): ModelPatterns {
   const { scaleDenominator: N, paperGsm: gsm } = options;
-  if (model.stack) return { pieces: launchStackPieces(model, N, gsm), threads: [] };
+  if (model.stack) return { pieces: launchStackPieces(model, N, gsm), threads: [], substitutes: [] };
+  const band = options.gradeBand ?? BUILD_GRADE_BAND_DEFAULT;
   const k = 1000 / N;
+  const substitutes: PartSubstitute[] = [];
   let number = 0;
   const next = () => ++number;
   const body = bodyNet(model.body, N, gsm, next, 1);
@@ -62,7 +74,22 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
     const base = { id: a.id, partId: a.id, label: a.label, assemblyStep: step };
     switch (a.kind) {
       case 'rigid-boom': {
-        const frame = frameAlongAxis(foot, appendageDirection(a.orientation, face), face);
+        const stock = boomStockFor(a.diameterM * k, a.lengthM * k);
+        const axis = appendageDirection(a.orientation, face);
+        if (stock) {
+          substitutes.push({
+            kind: 'boom-stock',
+            partId: a.id,
+            label: a.label,
+            stock,
+            lengthMm: a.lengthM * k,
+            diameterMm: a.diameterM * k,
+            fromMm: foot,
+            toMm: vec3Combine([1, foot], [a.lengthM * k, axis]),
+          });
+          break;
+        }
+        const frame = frameAlongAxis(foot, axis, face);
         pieces.push(
           tubePiece({
             ...base,
@@ -83,6 +110,11 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
             : [a.exitDiameterM / 2, a.throatDiameterM / 2, a.lengthM];
         const development = coneDevelopment(R * k, r * k, h * k)!;
         const axis = appendageDirection(a.orientation, face);
+        if (coneTooSmall(2 * R * k, band)) {
+          substitutes.push({ kind: 'flat-disc', partId: a.id, label: a.label, diameterMm: 2 * R * k });
+          pieces.push(flatDiscPiece({ ...base, partKind: a.kind }, R * k, frameAroundAxis(foot, axis, face)));
+          break;
+        }
         // The narrow end sits on the face; a frustum's virtual apex lies h·r/(R − r) behind it.
         const apex = vec3Combine([1, foot], [(-h * k * r) / (R - r), axis]);
         pieces.push(
@@ -136,7 +168,11 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
       }
       case 'wire-boom': {
         const num = next();
-        const spot = wireAnchorPlacement(face, foot);
+        const spot = wireAnchorPlacement(
+          face,
+          foot,
+          Math.max(WIRE_ANCHOR_SIZE_MM, BUILDABILITY_MINIMUMS[band].pieceMm),
+        );
         pieces.push(
           wireAnchorPiece({
             ...base,
@@ -154,5 +190,22 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
       }
     }
   });
-  return { pieces, threads };
+  return { pieces, threads, substitutes };
+}
+
+/** A dish or nozzle too small to roll, as a flat disc of its wide end lying across its axis at its foot. */
+function flatDiscPiece(
+  base: Pick<Piece, 'id' | 'partId' | 'label' | 'assemblyStep' | 'partKind'>,
+  radiusMm: number,
+  frame: PlaneFrame,
+): Piece {
+  const circle = arcPoints([0, 0], radiusMm, 0, 2 * Math.PI).slice(0, -1);
+  return pieceFromNet({
+    ...base,
+    faces: [{ flatMm: circle, modelMm: circle.map(([x, y]) => frameApply(frame, [x, y, 0])) }],
+    joints: [],
+    tabs: [],
+    edgeLabels: [],
+    rootFrame: frame,
+  });
 }

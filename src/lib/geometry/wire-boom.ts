@@ -10,7 +10,7 @@ import { vec3Combine } from './vec';
 
 /** Thread added to each wire boom for the two knots, mm (common practice, no source). */
 export const THREAD_TIE_OFF_ALLOWANCE_MM = 100;
-/** Side of the square anchor flap, mm on paper (not scaled), shrunk to fit small faces. */
+/** Smallest side of the square anchor flap, mm on paper (not scaled); larger for younger classes, shrunk to fit small faces. */
 export const WIRE_ANCHOR_SIZE_MM = 10;
 
 /** The thread for a wire boom of lengthM at 1:scaleDenominator. */
@@ -75,10 +75,15 @@ export function wireAnchorPiece(spec: {
 }
 
 /**
- * The anchor's centre and side on its face: the foot point and WIRE_ANCHOR_SIZE_MM when the square fits
+ * The anchor's centre and side on its face: the foot point and sideMm (the band's smallest piece, at least
+ * WIRE_ANCHOR_SIZE_MM) when the square fits
  * inside the face, else moved toward the face centre (and, on a very small face, shrunk) until it does.
  */
-export function wireAnchorPlacement(face: BodyFace, footMm: Vec3Mm): { centreMm: Vec3Mm; sideMm: number } {
+export function wireAnchorPlacement(
+  face: BodyFace,
+  footMm: Vec3Mm,
+  sideMm: number = WIRE_ANCHOR_SIZE_MM,
+): { centreMm: Vec3Mm; sideMm: number } {
   const uv = face.polygonMm.map((p) => {
     const d = vec3Combine([1, p], [-1, face.centreMm]);
     return [
@@ -96,7 +101,7 @@ export function wireAnchorPlacement(face: BodyFace, footMm: Vec3Mm): { centreMm:
       const b = uv[(i + 1) % uv.length]!;
       return (b[0] - a[0]) * (y - a[1]) - (b[1] - a[1]) * (x - a[0]) >= 0;
     });
-  for (let side = WIRE_ANCHOR_SIZE_MM; side > 1e-6; side *= 0.8) {
+  for (let side = sideMm; side > 1e-6; side *= 0.8) {
     for (let t = 1; t >= 0; t -= 0.05) {
       const [x, y] = [foot[0] * t, foot[1] * t];
       const h = side / 2;

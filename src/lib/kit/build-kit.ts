@@ -5,6 +5,8 @@
 import { modelPatterns } from '../geometry/model-patterns';
 import type { Model } from '../geometry/model-schema';
 import type { Piece, WireBoomThread } from '../geometry/types';
+import { BUILDABILITY_MINIMUMS, type BuildGradeBand } from '../geometry/buildability';
+import type { PartSubstitute } from '../geometry/part-substitutes';
 import { printPlateMesh } from '../layout/print-plate';
 import { cutListRows } from '../layout/cut-list';
 import { sheetPack } from '../layout/sheet-packer';
@@ -22,12 +24,18 @@ import type { KitRequest } from './kit-request';
 
 /** The model engine as the pipeline uses it (src/lib/geometry provides it; tests may pass fixtures). */
 export interface KitEngine {
-  patterns(model: Model, scaleDenominator: number, paperGsm: number): { pieces: Piece[]; threads: WireBoomThread[] };
+  patterns(
+    model: Model,
+    scaleDenominator: number,
+    paperGsm: number,
+    gradeBand: BuildGradeBand,
+  ): { pieces: Piece[]; threads: WireBoomThread[]; substitutes: PartSubstitute[] };
 }
 
 /** The model engine of src/lib/geometry. */
 export const GEOMETRY_KIT_ENGINE: KitEngine = {
-  patterns: (model, scaleDenominator, paperGsm) => modelPatterns(model, { scaleDenominator, paperGsm }),
+  patterns: (model, scaleDenominator, paperGsm, gradeBand) =>
+    modelPatterns(model, { scaleDenominator, paperGsm, gradeBand }),
 };
 
 export type KitStage = 'patterns' | 'layout' | 'pdf' | 'svg' | 'stl' | 'json';
@@ -72,10 +80,15 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
   };
   options.signal?.throwIfAborted();
   const hash = contentHash(request);
-  const { pieces, threads } = engine.patterns(request.model, request.scaleDenominator, request.paperGsm);
+  const { pieces, threads, substitutes } = engine.patterns(
+    request.model,
+    request.scaleDenominator,
+    request.paperGsm,
+    request.gradeBand,
+  );
   await step('patterns');
   const size = sheetSize(request.sheetSizeId);
-  const sheets = sheetPack(pieces, { sheetSize: size, units: request.units, copies: request.copies });
+  const sheets = sheetPack(pieces, { sheetSize: size, units: request.units, copies: request.copies, substitutes });
   const layout: KitLayout = {
     title: request.title ?? request.model.name,
     scaleDenominator: request.scaleDenominator,
@@ -84,6 +97,9 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
     pieces,
     sheets,
     threads,
+    substitutes,
+    gradeBand: request.gradeBand,
+    smallestLabelMm: BUILDABILITY_MINIMUMS[request.gradeBand].labelMm,
     cutList: size.kind === 'stock' ? cutListRows(pieces, sheets) : [],
     qrUrl: request.qrUrl,
     engineVersion: ENGINE_VERSION,

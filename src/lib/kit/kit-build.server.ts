@@ -32,6 +32,7 @@ export function kitScaleGuard(request: KitRequest, pieces: readonly Piece[]): vo
     sheetId: request.sheetSizeId,
     paperGsm: request.paperGsm,
     scaleDenominator: request.scaleDenominator,
+    gradeBand: request.gradeBand,
   });
   throw new InputError(
     `At 1:${request.scaleDenominator} ${buildabilityShortfallWords(worst, BUILD_GRADE_BAND_FLOOR)}; choose a larger scale (a smaller N).`,
@@ -41,8 +42,8 @@ export function kitScaleGuard(request: KitRequest, pieces: readonly Piece[]): vo
 
 function guardedEngine(request: KitRequest): KitEngine {
   return {
-    patterns: (model, n, gsm) => {
-      const result = GEOMETRY_KIT_ENGINE.patterns(model, n, gsm);
+    patterns: (model, n, gsm, band) => {
+      const result = GEOMETRY_KIT_ENGINE.patterns(model, n, gsm, band);
       kitScaleGuard(request, result.pieces);
       return result;
     },

@@ -9,6 +9,7 @@ import { PRINT_BEDS, PRINT_CHOICE_DEFAULT } from '../layout/print-plate';
 import { SHEET_SIZES } from '../layout/sheet-sizes';
 import { VENUES } from '../layout/venues';
 import { AppError } from '../errors';
+import { BUILD_GRADE_BAND_DEFAULT } from '../geometry/buildability';
 import { demoModelById, demoModels } from './demo-models.server';
 import { KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
@@ -28,12 +29,19 @@ export async function kitBuilderProps(
   const model = demoModelById(query.get('model') ?? '') ?? demoModelById('skein-probe') ?? models[0]!;
   const activity = activities.find((a) => a.slug === query.get('activity'));
   const sheetSizeId = query.get('sheet') === 'a4' ? 'a4' : 'letter';
+  const classes =
+    actor.kind === 'user' && actor.role === 'teacher'
+      ? (await classListForTeacher(actor.userId)).map((c) => ({ id: c.id, name: c.name, gradeBand: c.grade_band }))
+      : [];
+  // The grade band starts from the class the kit is for (?class=, else the teacher's first class).
+  const gradeClass = classes.find((c) => c.id === query.get('class')) ?? classes[0];
   const base = {
     modelId: model.id,
     sheetSizeId,
     paperGsm: KIT_DEFAULT_PAPER_GSM,
     units: 'metric',
     venue: { kind: 'preset', id: 'classroom' },
+    gradeBand: gradeClass?.gradeBand ?? BUILD_GRADE_BAND_DEFAULT,
   } as const;
   let initialError: string | null = null;
   const solve = await kitScaleSolve({ ...base, ratios: 'usual' }).catch((err: unknown) => {
@@ -54,10 +62,6 @@ export async function kitBuilderProps(
     initialError = err.message;
     return null;
   });
-  const classes =
-    actor.kind === 'user' && actor.role === 'teacher'
-      ? (await classListForTeacher(actor.userId)).map((c) => ({ id: c.id, name: c.name }))
-      : [];
   return {
     models: models.map(({ id, title, summary }) => ({ id, title, summary })),
     activities,
@@ -71,5 +75,6 @@ export async function kitBuilderProps(
     initialPreview: preview,
     initialSolve: solve,
     initialError,
+    gradeBandFrom: gradeClass ? gradeClass.name : null,
   };
 }

@@ -7,6 +7,12 @@ import { ModelSchema, type Model } from '../geometry/model-schema';
 import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
 import { PRINT_CHOICE_LIMITS } from '../layout/print-plate';
+import {
+  BUILD_GRADE_BAND_DEFAULT,
+  BUILD_GRADE_BAND_WORDS,
+  BUILD_GRADE_BANDS,
+  type BuildGradeBand,
+} from '../geometry/buildability';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { CustomVenueSchema, VENUES, venueCustom, type Venue, type VenueId } from '../layout/venues';
 import { parseInput } from '../validation';
@@ -16,7 +22,7 @@ import { kitSettingsSchema, type KitSettingsLimits } from './kit-settings';
 const VENUE_IDS = Object.keys(VENUES) as [VenueId, ...VenueId[]];
 
 /** The engine's limits, in the serialisable shape the builder island receives as props. */
-export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[number], VenueId> = {
+export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[number], VenueId, BuildGradeBand> = {
   scaleDenominatorMax: SCALE_DENOMINATOR_MAX,
   paperGsmMin: PAPER_GSM_MIN,
   paperGsmMax: PAPER_GSM_MAX,
@@ -24,9 +30,16 @@ export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[numb
   sheetSizeIds: SHEET_SIZE_IDS,
   venueIds: VENUE_IDS,
   ...PRINT_CHOICE_LIMITS,
+  gradeBands: BUILD_GRADE_BANDS,
+  gradeBandDefault: BUILD_GRADE_BAND_DEFAULT,
+  gradeBandWords: BUILD_GRADE_BAND_WORDS,
 };
 
-export const KitSettingsSchema = kitSettingsSchema(KIT_SETTINGS_LIMITS);
+const KitSettingsBaseSchema = kitSettingsSchema(KIT_SETTINGS_LIMITS);
+/** The settings as the API takes them: a request without a grade band is for the default band. */
+export const KitSettingsSchema = KitSettingsBaseSchema.extend({
+  gradeBand: KitSettingsBaseSchema.shape.gradeBand.default(BUILD_GRADE_BAND_DEFAULT),
+});
 
 const DemoModelIdSchema = z
   .string()
@@ -54,14 +67,14 @@ export type KitInputs = z.infer<typeof KitInputsSchema>;
 
 /** Inputs of POST /api/models/patterns: a model, a scale and a paper weight (sheet optional, for messages). */
 export const PatternsRequestSchema = ModelSourceSchema.merge(
-  KitSettingsSchema.pick({ scaleDenominator: true, paperGsm: true }),
+  KitSettingsSchema.pick({ scaleDenominator: true, paperGsm: true, gradeBand: true }),
 )
   .extend({ sheetSizeId: KitSettingsSchema.shape.sheetSizeId.default('letter') })
   .superRefine(oneModel);
 
 /** Inputs of POST /api/scale/solve: a model, sheet, paper, venue and units; a scale to check is optional. */
 export const ScaleSolveRequestSchema = ModelSourceSchema.merge(
-  KitSettingsSchema.pick({ sheetSizeId: true, paperGsm: true, units: true, venue: true }),
+  KitSettingsSchema.pick({ sheetSizeId: true, paperGsm: true, units: true, venue: true, gradeBand: true }),
 )
   .extend({
     scaleDenominator: KitSettingsSchema.shape.scaleDenominator.optional(),
@@ -92,6 +105,7 @@ export function kitRequestOf(
       copies: inputs.copies,
       units: inputs.units,
       ...(inputs.print ? { print: inputs.print } : {}),
+      gradeBand: inputs.gradeBand,
       qrUrl,
     },
     'kit',

@@ -10,6 +10,7 @@ import { assemblySteps } from '../preview/assembly-steps';
 import type { KitRow } from '../db/kits';
 import { kitVenue } from './kit-inputs';
 import { kitSummary } from './kit-summary';
+import { kitMaterials } from './kit-materials';
 import { kitRequestForRow, kitView } from './saved-kit.server';
 
 /** The kit page's data for a kit row the actor may see. */
@@ -17,9 +18,10 @@ export function kitPageData(row: KitRow) {
   const view = kitView(row);
   const request = kitRequestForRow(row);
   const venue = kitVenue(row.inputs.venue);
-  const { pieces, threads } = modelPatterns(request.model, {
+  const { pieces, threads, substitutes } = modelPatterns(request.model, {
     scaleDenominator: request.scaleDenominator,
     paperGsm: request.paperGsm,
+    gradeBand: request.gradeBand,
   });
   const sheetLabel = sheetSize(request.sheetSizeId).label;
   return {
@@ -36,10 +38,12 @@ export function kitPageData(row: KitRow) {
     }),
     steps: assemblySteps(pieces),
     threads,
+    materials: kitMaterials({ threads, substitutes, gradeBand: request.gradeBand, units: request.units }),
     preview: {
       title: view.title,
       scaleDenominator: request.scaleDenominator,
       pieces,
+      rods: substitutes.flatMap((s) => (s.kind === 'boom-stock' ? [s] : [])),
       boomScale: boomScale(request.model, request.scaleDenominator, request.units),
     },
   };

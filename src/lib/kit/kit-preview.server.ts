@@ -88,7 +88,11 @@ export async function kitPreviewFile(inputs: KitInputs, output: KitOutput, optio
 /** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */
 export function kitPatterns(input: z.infer<typeof PatternsRequestSchema>) {
   const { model } = demoModelResolve(input);
-  const result = modelPatterns(model, { scaleDenominator: input.scaleDenominator, paperGsm: input.paperGsm });
+  const result = modelPatterns(model, {
+    scaleDenominator: input.scaleDenominator,
+    paperGsm: input.paperGsm,
+    gradeBand: input.gradeBand,
+  });
   kitScaleGuard(kitRequestOf({ ...input, copies: 1, units: 'metric' }, model, null), result.pieces);
   return result;
 }
@@ -108,9 +112,15 @@ const solveCache = new KitCache<ScaleSolution>(() => 20_000);
 export async function kitScaleSolve(input: z.infer<typeof ScaleSolveRequestSchema>): Promise<ScaleSolution> {
   const { model } = demoModelResolve(input);
   const venue = kitVenue(input.venue);
-  const key = await contentHash({ ...input, model, solver: 1 });
+  const key = await contentHash({ ...input, model, solver: 2 });
   return solveCache.get(key, async () => {
-    const req = { sheetId: input.sheetSizeId, paperGsm: input.paperGsm, ratios: input.ratios };
+    const req = {
+      sheetId: input.sheetSizeId,
+      paperGsm: input.paperGsm,
+      ratios: input.ratios,
+      gradeBand: input.gradeBand,
+      units: input.units,
+    };
     const kit = solveKitScale(model, req, venue, input.units);
     const checked =
       input.scaleDenominator === undefined

@@ -12,7 +12,7 @@ import type { KitView } from './kit-view';
 export type { KitPreview, ScaleSolution, KitView };
 
 /** What the solver needs: everything of the form but the scale, title, copies and activity. */
-export type ScaleSolveParams = Pick<KitForm, 'modelId' | 'sheetSizeId' | 'paperGsm' | 'units' | 'venue'>;
+export type ScaleSolveParams = Pick<KitForm, 'modelId' | 'sheetSizeId' | 'paperGsm' | 'units' | 'venue' | 'gradeBand'>;
 
 /** Hears a build's progress: `begin` as a request starts, `stage` as the server finishes each stage. */
 export interface BuildListener {

@@ -11,6 +11,7 @@ import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
 import { PRINT_CHOICE_DEFAULT, PRINT_CHOICE_LIMITS, type PrintChoice } from '../layout/print-plate';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { printChoiceSchema } from './kit-settings';
+import { BUILD_GRADE_BAND_DEFAULT, BUILD_GRADE_BANDS } from '../geometry/buildability';
 
 /** Kits per class: one per team; 40 teams is more than any class has (common practice, no source). */
 export const KIT_COPIES_MAX = 40;
@@ -43,6 +44,8 @@ export const KitRequestSchema = z.object({
     .default(1),
   /** Units for printed sizes and the check square. */
   units: z.enum(['metric', 'us']).default('metric'),
+  /** The class the kit is for: anchor sizes, substitutes for parts too fine for paper, and label sizes follow it. */
+  gradeBand: z.enum(BUILD_GRADE_BANDS).default(BUILD_GRADE_BAND_DEFAULT),
   /** The kit page the first sheet's QR code links to; null for an unsaved kit, whose sheets print a note instead. */
   qrUrl: z.string().url('qrUrl must be an absolute URL').max(300).nullable(),
   /** The STL's print bed and nozzle. */

@@ -7,7 +7,7 @@ import { z } from 'zod';
 import { TextSchema } from '../text-schema';
 
 /** The engine limits the settings schema is built from (numbers and id lists only, so they serialise). */
-export interface KitSettingsLimits<S extends string = string, V extends string = string> {
+export interface KitSettingsLimits<S extends string = string, V extends string = string, G extends string = string> {
   scaleDenominatorMax: number;
   paperGsmMin: number;
   paperGsmMax: number;
@@ -18,6 +18,10 @@ export interface KitSettingsLimits<S extends string = string, V extends string =
   printNozzlesMm: readonly number[];
   printBedMinMm: number;
   printBedMaxMm: number;
+  /** Grade bands a kit can be built for, the default first-class choice, and each band in words. */
+  gradeBands: readonly [G, ...G[]];
+  gradeBandDefault: G;
+  gradeBandWords: Readonly<Record<G, string>>;
 }
 
 const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
@@ -75,7 +79,9 @@ export function printChoiceSchema(
 }
 
 /** Scale, sheet, paper, copies, units, venue, title and activity of a kit (no model: callers add it). */
-export function kitSettingsSchema<S extends string, V extends string>(limits: KitSettingsLimits<S, V>) {
+export function kitSettingsSchema<S extends string, V extends string, G extends string>(
+  limits: KitSettingsLimits<S, V, G>,
+) {
   return z.object({
     /** Title printed on every sheet; the model's name when left out. */
     title: KitTitleSchema.optional(),
@@ -106,14 +112,20 @@ export function kitSettingsSchema<S extends string, V extends string>(limits: Ki
     venue: venueChoiceSchema(limits.venueIds),
     /** Bed and nozzle of the STL; the standard bed and a 0.4 mm nozzle when left out. */
     print: printChoiceSchema(limits).optional(),
+    /** The class the kit is for: the solver's minimums and the substitutes follow it. */
+    gradeBand: z.enum(limits.gradeBands as [G, ...G[]], {
+      errorMap: () => ({ message: `the grade band must be one of ${limits.gradeBands.join(', ')}` }),
+    }),
   });
 }
 
 /** The builder form: the settings plus the demo model's id. */
-export function kitFormSchema<S extends string, V extends string>(limits: KitSettingsLimits<S, V>) {
+export function kitFormSchema<S extends string, V extends string, G extends string>(
+  limits: KitSettingsLimits<S, V, G>,
+) {
   return kitSettingsSchema(limits).extend({
     modelId: z.string().regex(SLUG, 'choose a model'),
   });
 }
-export type KitForm = z.infer<ReturnType<typeof kitFormSchema<string, string>>>;
+export type KitForm = z.infer<ReturnType<typeof kitFormSchema<string, string, string>>>;
 export type KitVenueChoice = KitForm['venue'];

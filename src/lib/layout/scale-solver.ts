@@ -8,6 +8,7 @@
 import { InputError } from '../errors';
 import type { Model } from '../geometry/model-schema';
 import type { Piece } from '../geometry/types';
+import type { PartSubstitute } from '../geometry/part-substitutes';
 import { modelPatterns, SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
 import {
   BUILD_GRADE_BAND_DEFAULT,
@@ -22,7 +23,7 @@ import {
 } from '../geometry/buildability';
 import { pointsBounds } from '../geometry/vec';
 import { SHEET_MARGIN_MM, sheetSize, type SheetSizeId } from './sheet-sizes';
-import { sheetPack } from './sheet-packer';
+import { MAX_SHEETS, sheetPack } from './sheet-packer';
 import { USUAL_SCALE_DENOMINATORS } from './scale-ratios';
 import { solveVenueScale, type Venue, type VenueScale } from './venues';
 import type { UnitSystem } from './units';
@@ -43,8 +44,8 @@ export interface PaperScaleRequest {
 export interface PaperScale {
   scaleDenominator: number;
   gradeBand: BuildGradeBand;
-  /** Sheets one kit takes at this scale. */
-  sheetCount: number;
+  /** Sheets one kit takes at this scale; null past the most a kit may have. */
+  sheetCount: number | null;
   /** Pieces larger than the printable area at this scale: they are split across sheets. */
   tiledPieceIds: string[];
   /** Where a piece falls short of the band's minimums at this scale (empty: the class can build it all). */
@@ -58,6 +59,7 @@ export interface PaperScale {
 
 interface ScaleCheck {
   pieces: Piece[];
+  substitutes: PartSubstitute[];
   /** Shortfalls against the floor: any makes the scale impossible. */
   floor: BuildabilityShortfall[];
   /** Shortfalls against the class's band. */
@@ -67,7 +69,7 @@ interface ScaleCheck {
 
 /** Pieces' buildability and which pieces overflow the sheet at 1:N. */
 function scaleCheck(model: Model, n: number, gsm: number, sheetId: SheetSizeId, band: BuildGradeBand): ScaleCheck {
-  const { pieces } = modelPatterns(model, { scaleDenominator: n, paperGsm: gsm });
+  const { pieces, substitutes } = modelPatterns(model, { scaleDenominator: n, paperGsm: gsm, gradeBand: band });
   const sheet = sheetSize(sheetId);
   const [pw, ph] = [sheet.widthMm - 2 * SHEET_MARGIN_MM, sheet.heightMm - 2 * SHEET_MARGIN_MM];
   const tiled: string[] = [];
@@ -78,6 +80,7 @@ function scaleCheck(model: Model, n: number, gsm: number, sheetId: SheetSizeId, 
   }
   return {
     pieces,
+    substitutes,
     floor: buildabilityShortfalls(pieces, BUILD_GRADE_BAND_FLOOR),
     band: buildabilityShortfalls(pieces, band),
     tiled,
@@ -92,11 +95,20 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
   const check = (n: number): ScaleCheck =>
     checks.get(n) ?? checks.set(n, scaleCheck(model, n, req.paperGsm, req.sheetId, band)).get(n)!;
   const counts = new Map<number, number>();
-  const sheetCount = (n: number): number =>
-    counts.get(n) ??
-    counts
-      .set(n, sheetPack(check(n).pieces, { sheetSize: size, units: req.units ?? 'metric', copies: 1 }).length)
-      .get(n)!;
+  // Sheets of one kit at 1:N; Infinity past the packer's MAX_SHEETS.
+  const sheetCount = (n: number): number => {
+    if (!counts.has(n)) {
+      let count = Infinity;
+      try {
+        const options = { sheetSize: size, units: req.units ?? 'metric', copies: 1 } as const;
+        count = sheetPack(check(n).pieces, { ...options, substitutes: check(n).substitutes }).length;
+      } catch (err) {
+        if (!(err instanceof InputError)) throw err;
+      }
+      counts.set(n, count);
+    }
+    return counts.get(n)!;
+  };
   const smallestValid = largestDenominator((n) => check(n).floor.length === 0);
   if (smallestValid === null) {
     const worst = check(1).floor[0]!;
@@ -109,7 +121,7 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
   const answer = (n: number, explanation: string): PaperScale => ({
     scaleDenominator: n,
     gradeBand: band,
-    sheetCount: sheetCount(n),
+    sheetCount: Number.isFinite(sheetCount(n)) ? sheetCount(n) : null,
     tiledPieceIds: check(n).tiled,
     shortfalls: check(n).band,
     buildableDenominator: buildable,
@@ -128,7 +140,12 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
     }
     return answer(n, scaleWords(n, sheetCount(n), check(n), size.label, band));
   }
-  const n = bestDenominator(req.ratios ?? 'usual', buildable, smallestValid, sheetCount);
+  const ratios = req.ratios ?? 'usual';
+  const usualAtMost = (m: number) => [...USUAL_SCALE_DENOMINATORS].reverse().find((k) => k <= m) ?? m;
+  // A band served only by a kit of too many sheets is served as if no scale were buildable.
+  const feasible =
+    buildable !== null && Number.isFinite(sheetCount(ratios === 'any' ? buildable : usualAtMost(buildable)));
+  const n = bestDenominator(ratios, feasible ? buildable : smallestValid, sheetCount);
   const words = scaleWords(n, sheetCount(n), check(n), size.label, band);
   // The next smaller scale, to say what the sheets saved there would cost.
   const smaller = req.ratios === 'any' ? n + 1 : USUAL_SCALE_DENOMINATORS.find((k) => k > n && k <= smallestValid);
@@ -144,20 +161,14 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
 /**
  * The scale to suggest: buildable by the band first, fewest sheets second, largest model third. Sheet counts
  * grow with the model, so the smallest buildable scale has the fewest sheets; larger scales are taken while
- * they need no more sheets. With no buildable scale, the smallest scale anyone can cut (the class needs help).
+ * they need no more sheets. `top` is the smallest buildable scale, or with none the smallest anyone can cut
+ * (the class then needs help with the smallest parts).
  */
-function bestDenominator(
-  ratios: 'usual' | 'any',
-  buildable: number | null,
-  smallestValid: number,
-  sheetCount: (n: number) => number,
-): number {
+function bestDenominator(ratios: 'usual' | 'any', top: number, sheetCount: (n: number) => number): number {
   if (ratios === 'any') {
-    const top = buildable ?? smallestValid;
     const least = sheetCount(top);
     return smallestDenominator((k) => sheetCount(k) <= least, top) ?? top;
   }
-  const top = buildable ?? smallestValid;
   const candidates = USUAL_SCALE_DENOMINATORS.filter((k) => k <= top).reverse();
   if (candidates.length === 0) return Math.min(top, USUAL_SCALE_DENOMINATORS[0]);
   let best = candidates[0]!;
@@ -170,6 +181,7 @@ function bestDenominator(
 }
 
 function sheetsWords(count: number, sheet: string): string {
+  if (!Number.isFinite(count)) return `more than ${MAX_SHEETS} ${sheet} sheets`;
   return count === 1 ? `one ${sheet} sheet` : `${count} ${sheet} sheets`;
 }
 

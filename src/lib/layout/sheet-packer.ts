@@ -4,11 +4,14 @@
  * heuristic (Jylänki, "A Thousand Ways to Pack the Bin", 2010) of maxrects-packer, one sheet after another,
  * around the sheet furniture. Boxes that do not overlap hold pieces that do not overlap. Pieces too large for
  * a sheet are turned to need the fewest tiles (axis-aligned on a tie) and tiled (tiling.ts); tiles are
- * packed like pieces.
+ * packed like pieces. Cut-to-length gauges for rods that replace thin booms (cut-gauge.ts) are packed like
+ * pieces too, never turned, so their captions read across the sheet.
  */
 import { MaxRectsBin, Rectangle } from 'maxrects-packer/dist/maxrects-packer.mjs';
 import { InputError } from '../errors';
 import type { Piece } from '../geometry/types';
+import type { PartSubstitute } from '../geometry/part-substitutes';
+import { CUT_GAUGE_HEIGHT_MM, CUT_GAUGE_MIN_WIDTH_MM, cutGaugeParts, type CutGaugePart } from './cut-gauge';
 import { freeSpaceRects } from './free-space';
 import { pieceOrientationForTilesRad, pieceOrientationRad } from './piece-orientation';
 import { placementAtCorner, placementBounds } from './placement';
@@ -31,15 +34,20 @@ export interface SheetPackOptions {
   spacingMm?: number;
   marginMm?: number;
   overlapMm?: number;
+  /** Parts replaced by something else: each rod gets a cut-to-length gauge printed on a sheet. */
+  substitutes?: readonly PartSubstitute[];
 }
 
 interface PackItem {
-  piece: Piece;
+  /** The piece, or null for a gauge. */
+  piece: Piece | null;
   rotationRad: number;
   widthMm: number;
   heightMm: number;
   /** A tile of a large piece, laid out with its window's top-left corner at the sheet origin. */
   tile?: PieceTile;
+  /** A gauge part instead of a piece. */
+  gauge?: CutGaugePart;
 }
 
 /**
@@ -87,6 +95,16 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
       }
     }
   }
+  // Gauges: once per kit (one rod each per copy is cut against the same bar), as wide as a free row allows.
+  const widest = Math.max(...freeOther.map((r) => r.widthMm));
+  for (const gauge of cutGaugeParts(options.substitutes ?? [], widest))
+    items.push({
+      piece: null,
+      rotationRad: 0,
+      widthMm: Math.max(gauge.toMm - gauge.fromMm, CUT_GAUGE_MIN_WIDTH_MM),
+      heightMm: CUT_GAUGE_HEIGHT_MM,
+      gauge,
+    });
   const usableArea = freeOther.reduce((a, r) => Math.max(a, r.widthMm * r.heightMm), 0);
   const area = items.reduce((a, i) => a + (i.widthMm + spacing) * (i.heightMm + spacing), 0);
   const lowerBound = Math.ceil(area / usableArea);
@@ -120,13 +138,14 @@ export function sheetPack(pieces: readonly Piece[], options: SheetPackOptions): 
     );
     const left: PackItem[] = [];
     for (const item of remaining) {
-      const rect = bin.add(new Rectangle(item.widthMm, item.heightMm, 0, 0, false, !item.tile));
+      const rect = bin.add(new Rectangle(item.widthMm, item.heightMm, 0, 0, false, !item.tile && !item.gauge));
       if (!rect) {
         left.push(item);
         continue;
       }
-      if (item.tile) sheetPackTile(sheet, item.tile, rect.x, rect.y);
-      else {
+      if (item.gauge) (sheet.gauges ??= []).push({ ...item.gauge, xMm: rect.x, yMm: rect.y });
+      else if (item.tile) sheetPackTile(sheet, item.tile, rect.x, rect.y);
+      else if (item.piece) {
         const rotationRad = rect.rot ? item.rotationRad + Math.PI / 2 : item.rotationRad;
         sheet.placements.push({
           pieceId: item.piece.id,

@@ -8,6 +8,9 @@
  * src/lib/layout/placement.ts, the single implementation of this rule.
  */
 import type { Piece, Vec2Mm, WireBoomThread } from '../geometry/types';
+import type { BuildGradeBand } from '../geometry/buildability';
+import type { PartSubstitute } from '../geometry/part-substitutes';
+import type { PlacedCutGauge } from './cut-gauge';
 
 /** Paper sizes and sheet stock by name, with their size in mm (portrait: width ≤ height). */
 export interface SheetSize {
@@ -57,6 +60,8 @@ export interface LaidOutSheet {
   printableMm: RectMm;
   placements: Placement[];
   alignmentMarks: AlignmentMark[];
+  /** Cut-to-length gauges for rods that replace thin booms (cut-gauge.ts); absent when there are none. */
+  gauges?: PlacedCutGauge[];
 }
 
 /** A row of the cut list printed for sheet stock. */
@@ -79,6 +84,10 @@ export interface KitLayout {
   pieces: Piece[];
   sheets: LaidOutSheet[];
   threads: WireBoomThread[];
+  /** Parts too fine for paper and what replaces them (materials list; rods get a cut-to-length gauge). */
+  substitutes: PartSubstitute[];
+  /** The class the kit is for: marks and labels are sized for it. */
+  gradeBand: BuildGradeBand;
   cutList: CutListRow[];
   /** The kit page the first sheet's QR code points at; null for an unsaved kit (a note prints instead). */
   qrUrl: string | null;

@@ -76,6 +76,8 @@ function assemblyAction(piece: Piece): string {
       return `Roll it into a tube and glue its overlap strip (${t}) under the edge with the same number, then stand it on the body.`;
     case 'dish':
     case 'nozzle':
+      // Too small to roll for the class: printed as a flat disc (part-substitutes.ts).
+      if (!piece.hinge.curved) return 'Glue the flat disc onto the body at its place, printed side out.';
       return `Curl it into a cone and glue ${t} under the edge with the same number, then glue it onto the body.`;
     case 'wire-boom-anchor':
       return `Lay the thread where the body is printed with ${tabs.join(', ')}, fold the anchor over it and glue ${t} there.`;

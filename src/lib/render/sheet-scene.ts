@@ -30,6 +30,7 @@ import { MM_PER_INCH } from '../layout/units';
 import type { KitLayout, LaidOutSheet, Placement, RectMm } from '../layout/types';
 import { GLUE_TINT, GUIDE_STYLE, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { qrRects } from './qr';
+import { gaugeScene } from './gauge-scene';
 
 export interface SceneText {
   text: string;
@@ -84,6 +85,9 @@ export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMe
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
   for (const placement of sheet.placements) if (placement.tile) sceneTileGuides(scene, placement);
   const labels = new SceneLabels(scene, measure, sceneObstacles(kit, sheet, byId, scene, measure));
+  const gauges = gaugeScene(sheet);
+  for (const t of gauges.texts) labels.reserve(t);
+  scene.strokes.push(...gauges.strokes);
   // Registration letters and glue marks have fixed homes (their cross, tab or edge); piece names and step
   // badges can move, so they are placed last.
   for (const m of sheet.alignmentMarks) sceneAlignmentLetter(labels, m.atMm, m.letter);

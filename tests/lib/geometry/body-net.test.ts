@@ -177,7 +177,8 @@ describe('bodyNet (through modelPatterns)', () => {
   });
 
   test('numbers the assembly steps body first, then one step per appendage', () => {
-    const pieces = modelPatterns(demoModel('skein-probe'), { scaleDenominator: 20, paperGsm: 160 }).pieces;
+    // At 1:10 the axial booms are 10 mm paper tubes (thinner ones become rods: part-substitutes.ts).
+    const pieces = modelPatterns(demoModel('skein-probe'), { scaleDenominator: 10, paperGsm: 160 }).pieces;
     expect(pieces[0]!.partKind).toBe('body');
     // The wall strip and its two caps are one step (types.ts: pieces of one step share a number).
     expect(pieces.map((p) => p.assemblyStep)).toEqual([1, 1, 1, 2, 3, 4, 5, 6, 7, 8]);

@@ -29,7 +29,7 @@ const request = (extra: Record<string, unknown> = {}) =>
     ...extra,
   });
 const fixtureEngine: KitEngine = {
-  patterns: () => ({ pieces: [...smallKitPieces(), rectPiece('long', 400, 40)], threads: [] }),
+  patterns: () => ({ pieces: [...smallKitPieces(), rectPiece('long', 400, 40)], threads: [], substitutes: [] }),
 };
 
 describe('buildKit', () => {
@@ -95,7 +95,11 @@ describe('buildKit', () => {
     // Six sheet-filling pieces × 40 copies = 240 sheets; 33 copies (198 sheets) would fit.
     const big: KitEngine = {
       ...fixtureEngine,
-      patterns: () => ({ pieces: Array.from({ length: 6 }, (_, i) => rectPiece(`d${i}`, 190, 190)), threads: [] }),
+      patterns: () => ({
+        pieces: Array.from({ length: 6 }, (_, i) => rectPiece(`d${i}`, 190, 190)),
+        threads: [],
+        substitutes: [],
+      }),
     };
     const run = buildKit(request({ copies: 40 }), fonts, { engine: big });
     await expect(run).rejects.toThrow(InputError);

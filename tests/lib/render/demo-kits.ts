@@ -14,11 +14,11 @@ export const SWEEP_PAPER_IDS = Object.values(SHEET_SIZES)
 
 /** One demo kit as the renderers get it; null when the packer refuses it (more than MAX_SHEETS sheets). */
 export function demoKit(id: string, scaleDenominator: number, sheetSizeId: string): KitLayout | null {
-  const { pieces, threads } = modelPatterns(demoModel(id), { scaleDenominator, paperGsm: 160 });
+  const { pieces, threads, substitutes } = modelPatterns(demoModel(id), { scaleDenominator, paperGsm: 160 });
   const sheetSize = SHEET_SIZES[sheetSizeId as keyof typeof SHEET_SIZES];
   const units = sheetSize.id === 'letter' || sheetSize.id === 'legal' || sheetSize.id === 'tabloid' ? 'us' : 'metric';
   try {
-    const sheets = sheetPack(pieces, { sheetSize, units, copies: 1 });
+    const sheets = sheetPack(pieces, { sheetSize, units, copies: 1, substitutes });
     return {
       title: id,
       scaleDenominator,
@@ -27,6 +27,8 @@ export function demoKit(id: string, scaleDenominator: number, sheetSizeId: strin
       pieces,
       sheets,
       threads,
+      substitutes,
+      gradeBand: '6-8',
       cutList: [],
       qrUrl: 'https://kitwright.example/k/demo',
       engineVersion: 'test',

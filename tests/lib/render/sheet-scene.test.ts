@@ -17,7 +17,7 @@ import { demoModel } from '../geometry/fixtures';
 import { multiPolygonArea } from '../layout/polygon-area';
 
 function kitOf(id: string, n: number): KitLayout {
-  const { pieces, threads } = modelPatterns(demoModel(id), { scaleDenominator: n, paperGsm: 160 });
+  const { pieces, threads, substitutes } = modelPatterns(demoModel(id), { scaleDenominator: n, paperGsm: 160 });
   const sheetSize = SHEET_SIZES.letter;
   const sheets = sheetPack(pieces, { sheetSize, units: 'us', copies: 1 });
   return {
@@ -28,6 +28,8 @@ function kitOf(id: string, n: number): KitLayout {
     pieces,
     sheets,
     threads,
+    substitutes,
+    gradeBand: '6-8',
     cutList: [],
     qrUrl: 'https://kitwright.example/k',
     engineVersion: 'test',

@@ -1,0 +1,29 @@
+import { useMemo } from 'react';
+import { Quaternion, Vector3 } from 'three';
+import type { Vec3Mm } from '../../lib/geometry/types';
+import { ROD_MATERIAL } from './piece-materials';
+
+interface Props {
+  /** The rod's name (the boom it stands for), for the scene graph. */
+  name: string;
+  fromMm: Vec3Mm;
+  toMm: Vec3Mm;
+  /** Drawn diameter, mm at kit scale. */
+  diameterMm: number;
+}
+
+/** A straw, skewer or dowel standing in for a boom too thin for paper: a plain cylinder from foot to tip. */
+export default function RodMesh({ name, fromMm, toMm, diameterMm }: Props) {
+  const pose = useMemo(() => {
+    const from = new Vector3(...fromMm);
+    const axis = new Vector3(...toMm).sub(from);
+    const length = axis.length();
+    const quaternion = new Quaternion().setFromUnitVectors(new Vector3(0, 1, 0), axis.clone().normalize());
+    return { position: from.add(axis.multiplyScalar(0.5)), quaternion, length };
+  }, [fromMm, toMm]);
+  return (
+    <mesh name={name} position={pose.position} quaternion={pose.quaternion} material={ROD_MATERIAL}>
+      <cylinderGeometry args={[diameterMm / 2, diameterMm / 2, pose.length, 16]} />
+    </mesh>
+  );
+}
