@@ -197,6 +197,31 @@ describe('POST /api/kits/preview-file', () => {
   });
 });
 
+describe('the print target of the STL', () => {
+  it('builds the STL for a custom bed and says its scale in the preview; 400 with fields for a bad bed', async () => {
+    const inputs = {
+      ...INPUTS,
+      print: { bed: { kind: 'custom', widthMm: 150, depthMm: 150, heightMm: 150 }, nozzleMm: 0.25 },
+    };
+    const preview = await body(await postJson('/api/kits/preview', inputs, as(teacherCookie)));
+    expect(preview.print.bedLabel).toBe('Custom bed, 150 × 150 × 150 mm');
+    expect(preview.print.explanation).toMatch(/2 × the 0\.25 mm nozzle/);
+    const res = await postJson('/api/kits/preview-file', { inputs, output: 'stl' }, as(teacherCookie));
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-disposition')).toContain(`print-1-${preview.print.scaleDenominator}.stl`);
+    const stl = new Uint8Array(await res.arrayBuffer());
+    expect(stl.byteLength).toBe(84 + 50 * new DataView(stl.buffer).getUint32(80, true));
+    const bad = await postJson(
+      '/api/kits/preview',
+      { ...INPUTS, print: { bed: { kind: 'custom', widthMm: 10, depthMm: 150, heightMm: 150 }, nozzleMm: 0.3 } },
+      as(teacherCookie),
+    );
+    expect(bad.status).toBe(400);
+    const fields = Object.keys((await body(bad)).error.fields);
+    expect(fields).toEqual(expect.arrayContaining(['print.bed.widthMm', 'print.nozzleMm']));
+  });
+});
+
 describe('POST /api/models/patterns', () => {
   it('answers 400 for a prism with too many sides and a zero size, listing both fields', async () => {
     const model = {

@@ -128,6 +128,41 @@ describe('kit builder', () => {
     expect(await axeSerious(page)).toEqual([]);
   });
 
+  it('prints the STL for the chosen bed and nozzle: a plate that fits, named by its own scale', async () => {
+    const { page } = await signedIn();
+    await page.goto('/kits/new?model=skein-probe');
+    await hydrated(page);
+    const plate = page.getByTestId('print-plate');
+    await plate.waitFor();
+    await page.getByLabel('Print bed').selectOption('compact');
+    await page.getByLabel('Nozzle, mm').selectOption('0.6');
+    await page.waitForFunction(() =>
+      /Compact bed, 120 × 120 × 120 mm, 0\.6 mm nozzle/.test(
+        document.querySelector('[data-testid="print-plate"]')?.textContent ?? '',
+      ),
+    );
+    const scale = Number(await plate.getAttribute('data-scale'));
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Download STL for a 3D printer' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toBe(`skein-probe-print-1-${scale}.stl`);
+    // Binary STL (80-byte header, uint32 count, 50 bytes a triangle, float32 vertices from byte 96 of each).
+    const stl = await readFile((await download.path())!);
+    const view = new DataView(stl.buffer, stl.byteOffset, stl.byteLength);
+    const triangles = view.getUint32(80, true);
+    expect(stl.byteLength).toBe(84 + 50 * triangles);
+    let top = 0;
+    for (let t = 0; t < triangles; t++)
+      for (let v = 0; v < 3; v++)
+        for (let k = 0; k < 3; k++) top = Math.max(top, view.getFloat32(84 + 50 * t + 12 + 12 * v + 4 * k, true));
+    expect(top).toBeLessThanOrEqual(120 + 1e-3);
+    await page.getByLabel('Print bed').selectOption('custom');
+    await page.getByLabel('Width, mm').fill('20');
+    // The resolver validates the new bed asynchronously; the message appears under the field.
+    await page.getByText('the bed width must be at least 50 mm').waitFor();
+  });
+
   it('shows a field error and keeps the old sheets for an impossible copy count', async () => {
     const { page } = await signedIn();
     await page.goto('/kits/new');

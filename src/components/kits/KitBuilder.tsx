@@ -299,7 +299,7 @@ function KitBuilderForm(props: KitBuilderProps) {
           nozzlesMm={limits.printNozzlesMm}
           bedMinMm={limits.printBedMinMm}
           bedMaxMm={limits.printBedMaxMm}
-          errors={printErrors(err.print)}
+          errors={parsed.success ? {} : printErrors(parsed.error.issues)}
           onChange={(next, now) => change('print', next, now)}
         />
         <div className="grid grid-cols-2 gap-3">
@@ -432,12 +432,15 @@ function KitBuilderForm(props: KitBuilderProps) {
   );
 }
 
-/** The messages of the print fields' errors, by field (react-hook-form nests them as the schema does). */
-function printErrors(e: unknown): Partial<Record<'widthMm' | 'depthMm' | 'heightMm' | 'nozzleMm', string>> {
-  const tree = e as { bed?: Record<string, { message?: string }>; nozzleMm?: { message?: string } } | undefined;
+/** The messages of the print fields' errors, by field, from the form's own parse (the fields are not registered). */
+function printErrors(
+  issues: readonly { path: (string | number)[]; message: string }[],
+): Partial<Record<'widthMm' | 'depthMm' | 'heightMm' | 'nozzleMm', string>> {
   const out: Partial<Record<'widthMm' | 'depthMm' | 'heightMm' | 'nozzleMm', string>> = {};
-  for (const k of ['widthMm', 'depthMm', 'heightMm'] as const)
-    if (tree?.bed?.[k]?.message) out[k] = tree.bed[k].message;
-  if (tree?.nozzleMm?.message) out.nozzleMm = tree.nozzleMm.message;
+  for (const issue of issues) {
+    if (issue.path[0] !== 'print') continue;
+    const key = issue.path[issue.path.length - 1];
+    if (key === 'widthMm' || key === 'depthMm' || key === 'heightMm' || key === 'nozzleMm') out[key] ??= issue.message;
+  }
   return out;
 }
