@@ -18,6 +18,7 @@ import { EigenvalueDecomposition, Matrix, solve } from 'ml-matrix';
 import { z } from 'zod';
 import { InputError } from '../errors';
 import { TextSchema } from '../text-schema';
+import { readingBetween } from './reading-range';
 
 /** Largest JSON four-point request, bytes. */
 export const FOUR_POINT_JSON_MAX_BYTES = 50_000;
@@ -32,12 +33,15 @@ export const FOUR_POINT_MAX_POINTS = 100;
  */
 export const FOUR_POINT_SHAPE_REFUSE = 0.9;
 export const FOUR_POINT_SHAPE_WARN = 0.75;
+/** Farthest a sensor may be from the origin along any axis, cm (10 km: past any classroom or field). */
+export const FOUR_POINT_POSITION_MAX_CM = 1e6;
+/** Largest reading magnitude, in the reading's unit (the squares of the least squares stay finite). */
+export const FOUR_POINT_READING_MAX = 1e9;
 /** Two points closer than this fraction of the formation's size count as the same place. */
 const SAME_PLACE_FRACTION = 1e-9;
 
 type Vec3 = [number, number, number];
-const finite = (what: string) =>
-  z.number({ invalid_type_error: `${what} must be a number` }).finite(`${what} must be a finite number`);
+const position = readingBetween(-FOUR_POINT_POSITION_MAX_CM, FOUR_POINT_POSITION_MAX_CM, 'cm');
 
 export const FourPointInputSchema = z
   .object({
@@ -48,9 +52,9 @@ export const FourPointInputSchema = z
             /** A sensor's name ("A", "thermometer 2"). */
             label: TextSchema.trim().max(40).optional(),
             /** Where the sensor is, cm (x, y, z). */
-            positionCm: z.tuple([finite('x'), finite('y'), finite('z')]),
+            positionCm: z.tuple([position, position, position]),
             /** What it reads there, in `unit`. */
-            value: finite('the reading'),
+            value: readingBetween(-FOUR_POINT_READING_MAX, FOUR_POINT_READING_MAX, 'in the unit of the readings'),
           })
           .strict(),
       )

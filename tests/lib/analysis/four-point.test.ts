@@ -201,6 +201,14 @@ describe('fourPointGradient', () => {
     expect(
       FourPointInputSchema.safeParse({ points: REGULAR.map((p) => ({ positionCm: p, value: Number.NaN })) }).success,
     ).toBe(false);
+    // 1e300 squared overflows an IEEE 754 double (max ≈ 1.8e308): readings and positions are bounded first.
+    expect(
+      FourPointInputSchema.safeParse({ points: REGULAR.map((p) => ({ positionCm: p, value: 1e300 })) }).success,
+    ).toBe(false);
+    expect(
+      FourPointInputSchema.safeParse({ points: REGULAR.map((p) => ({ positionCm: [p[0] * 1e300, 0, 0], value: 1 })) })
+        .success,
+    ).toBe(false);
   });
 
   it('saves the readings along the gradient in the shared saved-result shape', () => {
