@@ -1,6 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
+import { readFileSync } from 'node:fs';
 import { browserLaunch, pageNew } from './browser';
+import { ModelContentSchema } from '../../src/lib/geometry/model-schema';
+import { HOME_EXAMPLE } from '../../src/lib/kit/home-example';
+import { solvePaperScale } from '../../src/lib/layout/scale-solver';
+
+const skein = ModelContentSchema.parse(JSON.parse(readFileSync(`content/models/${HOME_EXAMPLE.modelId}.json`, 'utf8')));
 
 let browser: Browser;
 beforeAll(async () => {
@@ -20,7 +26,15 @@ describe('home page', () => {
     expect(errors).toEqual([]);
   });
 
-  it('recomputes the scale answer when a scale button of the island is clicked', async () => {
+  it("states the worked example in the scale solver's own words", async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/');
+    const { scaleDenominator, sheetSizeId, paperGsm } = HOME_EXAMPLE;
+    const solved = solvePaperScale(skein.model, { sheetId: sheetSizeId, paperGsm, scaleDenominator });
+    expect(await page.getByTestId('scale-teaser-kit').textContent()).toBe(`The kit: ${solved.explanation}`);
+  });
+
+  it('recomputes the body size when a scale button of the island is clicked, and asks the solver for the rest', async () => {
     const { page } = await pageNew(browser);
     await page.goto('/');
     const result = page.getByTestId('scale-teaser-result');
@@ -31,8 +45,11 @@ describe('home page', () => {
     await page.waitForFunction(() =>
       document.querySelector('[data-testid="scale-teaser-result"]')?.textContent?.includes('1:5 '),
     );
-    // 2.4 m / 5 = 480 mm = 18.9 in across: wider than Letter's 8.5 in.
+    // 2.4 m / 5 = 480 mm = 18.9 in across (product.md's probe).
     expect(await result.textContent()).toContain('18.9 in');
-    expect(await result.textContent()).toContain('too wide');
+    const kit = page.getByTestId('scale-teaser-kit');
+    expect(await kit.getByRole('link', { name: 'ask the scale solver' }).getAttribute('href')).toBe(
+      '/tools/scale?sheet=letter&units=us',
+    );
   });
 });

@@ -1,22 +1,29 @@
 import { useId, useState } from 'react';
 import { lengthLabel, type UnitSystem } from '../../lib/layout/units';
-import { SHEET_MARGIN_MM, SHEET_SIZES, type SheetSizeId } from '../../lib/layout/sheet-sizes';
+import { SHEET_SIZES, type SheetSizeId } from '../../lib/layout/sheet-sizes';
 
 /** The demo probe's body, 2.4 m across the flats of its hexagon (product scenario). */
 const BODY_ACROSS_FLATS_MM = 2400;
 const RATIOS = [5, 10, 20, 25, 50] as const;
 const PAPER: SheetSizeId[] = ['letter', 'a4', 'tabloid', 'a3'];
 
-/** A one-glance answer to "how big will the model be on my paper?" for the landing page. */
-export default function ScaleTeaser() {
-  const [ratio, setRatio] = useState<number>(20);
-  const [paper, setPaper] = useState<SheetSizeId>('letter');
+interface Props {
+  /** The worked example the server solved: its scale, its paper and the solver's words for its kit. */
+  example: { scaleDenominator: number; sheetSizeId: SheetSizeId; text: string };
+}
+
+/**
+ * "How big will the model be?" for the landing page: the body's size at a scale is arithmetic; what the kit
+ * then is (sheets, whether a class can cut it) only the solver says, so the island shows the solver's words for
+ * the example it was given and sends other choices to the scale tool rather than guessing.
+ */
+export default function ScaleTeaser({ example }: Props) {
+  const [ratio, setRatio] = useState<number>(example.scaleDenominator);
+  const [paper, setPaper] = useState<SheetSizeId>(example.sheetSizeId);
   const units: UnitSystem = paper === 'letter' || paper === 'tabloid' ? 'us' : 'metric';
   const id = useId();
   const bodyMm = BODY_ACROSS_FLATS_MM / ratio;
-  const sheet = SHEET_SIZES[paper];
-  const printableMm = Math.min(sheet.widthMm, sheet.heightMm) - 2 * SHEET_MARGIN_MM;
-  const fits = bodyMm <= printableMm;
+  const isExample = ratio === example.scaleDenominator && paper === example.sheetSizeId;
 
   return (
     <div className="card" data-testid="scale-teaser">
@@ -56,16 +63,19 @@ export default function ScaleTeaser() {
           </select>
         </div>
       </div>
-      <p className="mt-4 text-lg" aria-live="polite" data-testid="scale-teaser-result">
-        At 1:{ratio} the probe body is <strong>{lengthLabel(bodyMm, units)}</strong> across:{' '}
-        {fits ? (
-          <span className="font-semibold text-fold-dark">it fits on one {sheet.label} sheet.</span>
+      <div aria-live="polite" className="mt-4 space-y-2">
+        <p className="text-lg" data-testid="scale-teaser-result">
+          At 1:{ratio} the probe body is <strong>{lengthLabel(bodyMm, units)}</strong> across.
+        </p>
+        {isExample ? (
+          <p data-testid="scale-teaser-kit">The kit: {example.text}</p>
         ) : (
-          <span className="font-semibold text-caution">
-            too wide for {sheet.label}; pick a smaller scale or tile it.
-          </span>
+          <p data-testid="scale-teaser-kit">
+            How many {SHEET_SIZES[paper].label} sheets that takes, and whether your class can cut it:{' '}
+            <a href={`/tools/scale?sheet=${paper}&units=${units}`}>ask the scale solver</a>.
+          </p>
         )}
-      </p>
+      </div>
     </div>
   );
 }

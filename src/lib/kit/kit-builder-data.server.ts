@@ -11,13 +11,10 @@ import { VENUES } from '../layout/venues';
 import { AppError } from '../errors';
 import { BUILD_GRADE_BAND_DEFAULT } from '../geometry/buildability';
 import { demoModelById, demoModels } from './demo-models.server';
-import { KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
+import { KIT_DEFAULT_PAPER_GSM, KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
 import type { KitForm } from './kit-settings';
 import type { KitBuilderProps } from '../../components/kits/builder-props';
-
-/** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
-export const KIT_DEFAULT_PAPER_GSM = 160;
 
 /** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
 export async function kitBuilderProps(

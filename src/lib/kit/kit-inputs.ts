@@ -41,6 +41,9 @@ export const KitSettingsSchema = KitSettingsBaseSchema.extend({
   gradeBand: KitSettingsBaseSchema.shape.gradeBand.default(BUILD_GRADE_BAND_DEFAULT),
 });
 
+/** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
+export const KIT_DEFAULT_PAPER_GSM = 160;
+
 const DemoModelIdSchema = z
   .string()
   .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'modelId must be a demo model id like "skein-probe"');
