@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useRef, useState } from 'react';
 
 interface Props {
   sheets: string[];
@@ -7,31 +7,127 @@ interface Props {
   stale: boolean;
 }
 
-/** Every sheet of a kit as inline SVG (our own server's output, text escaped there), scaled to the column. */
+/** Zoom steps of the full-size view, as a share of the view's width (1: the sheet fills the width). */
+const ZOOMS = [1, 1.5, 2, 3, 4] as const;
+
+const svgBody = (svg: string) => svg.replace(/^<\?xml[^>]*>\s*/, '');
+
+/**
+ * Every sheet of a kit as inline SVG (our own server's output, text escaped there), scaled to the column; a
+ * button per sheet opens it full size in a modal dialog (Escape closes it, focus stays inside) that zooms with
+ * its buttons or the + and − keys and scrolls with the arrow keys, a mouse or a finger.
+ */
 function SheetPreviews({ sheets, title, stale }: Props) {
+  const dialog = useRef<HTMLDialogElement>(null);
+  const [open, setOpen] = useState<number | null>(null);
+  const [zoom, setZoom] = useState(0);
+  const show = (i: number) => {
+    setOpen(i);
+    setZoom(0);
+    dialog.current?.showModal();
+  };
+  const step = (by: number) => setZoom((z) => Math.min(ZOOMS.length - 1, Math.max(0, z + by)));
+  const shown = open !== null && open < sheets.length ? open : null;
+  const scale = ZOOMS[zoom] ?? 1;
   return (
-    <ol
-      className={`grid gap-4 sm:grid-cols-2 ${stale ? 'opacity-60 transition-opacity' : ''}`}
-      aria-label={`Sheets of ${title}`}
-      data-testid="sheet-previews"
-      data-sheet-count={sheets.length}
-    >
-      {sheets.map((svg, i) => (
-        <li key={i} className="list-none">
-          <figure className="rounded-lg border border-ink/15 bg-white p-2 shadow-sm">
+    <>
+      <ol
+        className={`grid gap-4 sm:grid-cols-2 ${stale ? 'opacity-60 transition-opacity' : ''}`}
+        aria-label={`Sheets of ${title}`}
+        data-testid="sheet-previews"
+        data-sheet-count={sheets.length}
+      >
+        {sheets.map((svg, i) => (
+          <li key={i} className="list-none">
+            <figure className="rounded-lg border border-ink/15 bg-white p-2 shadow-sm">
+              <div
+                role="img"
+                aria-label={`Sheet ${i + 1} of ${sheets.length}`}
+                className="[&>svg]:block [&>svg]:h-auto [&>svg]:w-full"
+                dangerouslySetInnerHTML={{ __html: svgBody(svg) }}
+              />
+              <figcaption className="mt-1 flex items-center justify-between text-sm text-ink-soft">
+                <span>
+                  Sheet {i + 1} of {sheets.length}
+                </span>
+                <button type="button" className="btn-secondary px-2 py-1 text-sm" onClick={() => show(i)}>
+                  Full size<span className="sr-only"> sheet {i + 1}</span>
+                </button>
+              </figcaption>
+            </figure>
+          </li>
+        ))}
+      </ol>
+      <dialog
+        ref={dialog}
+        aria-label={shown === null ? 'Sheet' : `Sheet ${shown + 1} of ${sheets.length}, full size`}
+        className="m-auto h-[95vh] w-[95vw] max-w-none rounded-card p-0 backdrop:bg-ink/50"
+        data-testid="sheet-full"
+        data-zoom={scale}
+        onClose={() => setOpen(null)}
+      >
+        {shown !== null && (
+          <div className="flex h-full flex-col">
+            <div className="flex flex-wrap items-center gap-2 border-b border-ink/10 p-2">
+              <p className="mr-auto font-semibold">
+                Sheet {shown + 1} of {sheets.length}
+              </p>
+              <button type="button" className="btn-secondary px-3 py-1" onClick={() => step(-1)} disabled={zoom === 0}>
+                −<span className="sr-only"> Zoom out</span>
+              </button>
+              <span aria-live="polite" className="w-14 text-center text-sm">
+                {Math.round(scale * 100)} %
+              </span>
+              <button
+                type="button"
+                className="btn-secondary px-3 py-1"
+                onClick={() => step(1)}
+                disabled={zoom === ZOOMS.length - 1}
+              >
+                +<span className="sr-only"> Zoom in</span>
+              </button>
+              <button
+                type="button"
+                className="btn-secondary px-3 py-1"
+                onClick={() => show(shown - 1)}
+                disabled={shown === 0}
+              >
+                Previous sheet
+              </button>
+              <button
+                type="button"
+                className="btn-secondary px-3 py-1"
+                onClick={() => show(shown + 1)}
+                disabled={shown === sheets.length - 1}
+              >
+                Next sheet
+              </button>
+              <button type="button" className="btn-primary px-3 py-1" onClick={() => dialog.current?.close()}>
+                Close
+              </button>
+            </div>
             <div
-              role="img"
-              aria-label={`Sheet ${i + 1} of ${sheets.length}`}
-              className="[&>svg]:block [&>svg]:h-auto [&>svg]:w-full"
-              dangerouslySetInnerHTML={{ __html: svg.replace(/^<\?xml[^>]*>\s*/, '') }}
-            />
-            <figcaption className="mt-1 text-center text-sm text-ink-soft">
-              Sheet {i + 1} of {sheets.length}
-            </figcaption>
-          </figure>
-        </li>
-      ))}
-    </ol>
+              className="min-h-0 flex-1 touch-pan-x touch-pan-y touch-pinch-zoom overflow-auto bg-paper-deep p-3"
+              tabIndex={0}
+              role="region"
+              aria-label="Sheet, scroll to move around; + and − zoom"
+              onKeyDown={(e) => {
+                if (e.key === '+' || e.key === '=') step(1);
+                else if (e.key === '-' || e.key === '_') step(-1);
+                else return;
+                e.preventDefault();
+              }}
+            >
+              <div
+                className="mx-auto bg-white shadow [&>svg]:block [&>svg]:h-auto [&>svg]:w-full"
+                style={{ width: `${scale * 100}%` }}
+                dangerouslySetInnerHTML={{ __html: svgBody(sheets[shown]!) }}
+              />
+            </div>
+          </div>
+        )}
+      </dialog>
+    </>
   );
 }
 
