@@ -197,6 +197,8 @@ describe('scale tool', () => {
       'Scale it',
       'Four-point measurement',
       'Launch stack',
+      'Deployment trials',
+      'Interference hunt',
     ]) {
       expect(await page.getByRole('link', { name, exact: true }).count()).toBe(1);
     }
@@ -272,5 +274,74 @@ describe('launch stack tool', () => {
     expect(steps[0]).toMatch(/Launch adapter/);
     expect(steps.findIndex((s) => /Probe 3/.test(s))).toBeGreaterThan(steps.findIndex((s) => /Probe 1/.test(s)));
     expect(errors).toEqual([]);
+  });
+});
+
+describe('deployment tool', () => {
+  it('turns the sample trials into rates with their ranges, a comparison and the running-rate plot', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/deployment');
+    await islandReady(page, 'DeploymentTool');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Work out the success rate' }).click();
+    const summary = page.getByTestId('deployment-summary-0');
+    await summary.waitFor();
+    // Wilson 1927 score interval for 17 of 20 at 95 %: 0.6396–0.9476, i.e. 64 % and 95 %.
+    expect(await summary.textContent()).toBe(
+      '17 of 20 deployed fully: 85 %, and with this many trials the true rate is likely between 64 % and 95 %.',
+    );
+    // Textbook n = z²p(1 − p)/E² at p = 0.85, E = 0.1: 49 trials, 29 more than the 20 run.
+    expect(await page.getByTestId('deployment-more-0').textContent()).toBe('49 in all: 29 more');
+    expect(await page.getByTestId('deployment-comparison').textContent()).toMatch(
+      /cannot yet tell the two designs apart/,
+    );
+    await page.waitForSelector('[data-testid="plot"][data-ready="true"] canvas');
+    expect(await page.locator('[data-testid="plot"] figcaption').textContent()).toBe('Success rate over the trials');
+    expect(await axeSerious(page)).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+
+  it('shows a mistyped outcome next to its cell before sending anything', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools/deployment');
+    await islandReady(page, 'DeploymentTool');
+    await page.getByLabel('Design, row 1').fill('Boom');
+    const outcome = page.getByLabel('Outcome, row 1');
+    await outcome.fill('sort of');
+    await page.getByRole('button', { name: 'Work out the success rate' }).click();
+    await expect(outcome.getAttribute('aria-invalid')).resolves.toBe('true');
+    const id = (await outcome.getAttribute('aria-describedby'))!;
+    expect(await page.locator(`[id="${id}"]`).textContent()).toBe('write full, partial or none');
+  });
+});
+
+describe('interference tool', () => {
+  it('ranks the sample devices and draws one bar per device', async () => {
+    const { page, errors } = await pageNew(browser);
+    await page.goto('/tools/interference');
+    await islandReady(page, 'InterferenceTool');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Rank the devices' }).click();
+    const table = page.getByTestId('interference-ranking');
+    await table.waitFor();
+    const names = await table.locator('tbody th').allTextContents();
+    // The sample devices are dipoles; a stronger moment crosses the threshold farther out (Griffiths §5.4.3).
+    expect(names).toEqual(['Phone charger', 'Desk fan', 'Toy motor']);
+    expect(await page.getByTestId('interference-summary').textContent()).toMatch(/^Phone charger needs the most room/);
+    await page.waitForSelector('[data-testid="plot"][data-ready="true"] canvas');
+    expect(await axeSerious(page)).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+
+  it('ranks AM-radio listening distances', async () => {
+    const { page } = await pageNew(browser);
+    await page.goto('/tools/interference');
+    await islandReady(page, 'InterferenceTool');
+    await page.getByLabel('Receiver', { exact: true }).selectOption('am-radio');
+    await page.getByRole('button', { name: 'Load sample data' }).click();
+    await page.getByRole('button', { name: 'Rank the devices' }).click();
+    const table = page.getByTestId('interference-ranking');
+    await table.waitFor();
+    expect(await table.locator('tbody tr').first().textContent()).toMatch(/1Phone charger65/);
   });
 });

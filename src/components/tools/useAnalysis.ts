@@ -16,7 +16,9 @@ export type AnalysisTool =
   | 'orbit-eclipse'
   | 'equilibrium-temperature'
   | 'four-point'
-  | 'launch-stack';
+  | 'launch-stack'
+  | 'deployment'
+  | 'interference';
 
 /** What the islands send: a JSON body, or CSV text with query options. */
 export type AnalysisBody = { json: unknown } | { csv: string; query?: Record<string, string | number | undefined> };

@@ -84,6 +84,8 @@ export const InterferenceInputSchema = z
     });
   });
 export type InterferenceInput = z.infer<typeof InterferenceInputSchema>;
+/** What a client sends: background and threshold may be left out for their defaults. */
+export type InterferenceRequest = z.input<typeof InterferenceInputSchema>;
 
 export interface InterferenceDeviceResult {
   label: string;
