@@ -7,13 +7,13 @@ import tailwindcss from '@tailwindcss/vite';
 import { COMPAT_LIBRARIES, PREACT_ISLANDS, REACT_ISLANDS, islandRuntimes } from './config/island-runtimes.mjs';
 import { originAllowedHostnames } from './src/lib/http/origin-check.ts';
 import { precompress } from './config/precompress.mjs';
-import { workWorker } from './config/work-worker.mjs';
+import { serverEntries } from './config/server-entries.mjs';
 
 export default defineConfig({
   output: 'server',
   // KW_OUT_DIR lets two test runs on one machine build side by side (DEVELOPERS.md).
   outDir: process.env.KW_OUT_DIR ?? './dist',
-  // Middleware mode: scripts/serve.ts is the server (static files, compression, the socket address).
+  // Middleware mode: src/server/serve.ts is the server (static files, compression, the socket address).
   adapter: node({ mode: 'middleware' }),
   // Preact islands are tagged for their renderer (config/island-runtimes.mjs); Astro asks React first about
   // the rest, which it answers without rendering them.
@@ -34,7 +34,7 @@ export default defineConfig({
     allowedDomains: originAllowedHostnames(process.env.SITE_URL).map((hostname) => ({ hostname })),
   },
   vite: {
-    plugins: [islandRuntimes(), tailwindcss(), workWorker()],
+    plugins: [islandRuntimes(), tailwindcss(), serverEntries()],
     // The dev server's pre-bundler would bind these to React before the alias sees them.
     optimizeDeps: { exclude: COMPAT_LIBRARIES, include: ['preact/compat', 'preact/hooks', 'preact/jsx-runtime'] },
     ssr: {

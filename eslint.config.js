@@ -27,7 +27,7 @@ const PURE_RESTRICTIONS = {
 };
 
 export default tseslint.config(
-  { ignores: ['dist/', '.data/', '.astro/', 'node_modules/', 'assets/'] },
+  { ignores: ['dist*/', '.data/', '.astro/', 'node_modules/', 'assets/'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...astro.configs.recommended,

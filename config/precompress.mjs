@@ -6,7 +6,7 @@ import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 
 /**
  * Writes a brotli (`.br`) and a gzip (`.gz`) twin beside every compressible file of the client build, once, at
- * the highest levels, so the server (scripts/serve.ts, sirv) answers static assets compressed without compressing
+ * the highest levels, so the server (src/server/serve.ts, sirv) answers static assets compressed without compressing
  * per request. A twin is kept only when it is smaller than the file.
  *
  * Own code rather than a package: the Vite compression plugins hook Vite's client build, which Astro runs

@@ -7,7 +7,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
-import { PROJECT_ROOT, TEST_DATABASE, databaseReset, databaseUrl } from './lib/postgres';
+import { PROJECT_ROOT, TEST_DATABASE, databaseReset, databaseUrl, postgresRunning, postgresStop } from './lib/postgres';
 import { databaseUp } from './db';
 import { migrateLatest, seedDemoIfEmpty } from './lib/migrate';
 import { smtpFakeStart } from './lib/smtp-fake';
@@ -92,6 +92,9 @@ async function main(): Promise<void> {
   const port = Number(process.env.KW_TEST_PORT ?? 4322);
   const smtpPort = Number(process.env.KW_TEST_SMTP_PORT ?? 2526);
   const mailHttpPort = Number(process.env.KW_TEST_MAIL_HTTP_PORT ?? 2581);
+  // A build folder of this run's own (ignored by git, ESLint and Prettier), so npm start's dist and another
+  // run on another KW_TEST_PORT are never overwritten mid-run.
+  process.env.KW_OUT_DIR ??= `dist-test-${port}`;
 
   if (only.length > 0) console.log(`[test] only ${only.join(' ')}: lint and type checks skipped`);
   else {
@@ -99,6 +102,8 @@ async function main(): Promise<void> {
     step('types (astro check)', 'npm', ['run', '--silent', 'check']);
   }
 
+  // What this run starts it stops: the cluster too, unless it was already running (npm start, another run).
+  const clusterWasRunning = postgresRunning();
   await databaseUp();
   const dbUrl = databaseUrl(TEST_DATABASE);
   await databaseReset(TEST_DATABASE);
@@ -124,6 +129,7 @@ async function main(): Promise<void> {
   } finally {
     await server.stop();
     await mail.close();
+    if (!clusterWasRunning) postgresStop();
   }
 }
 

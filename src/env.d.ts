@@ -9,7 +9,7 @@ declare namespace App {
   }
 }
 
-/** The built worker thread entry's file URL; null under the dev server (config/work-worker.mjs). */
+/** The built worker thread entry's file URL; null under the dev server (config/server-entries.mjs). */
 declare module 'virtual:kitwright/work-worker' {
   const workerUrl: string | null;
   export default workerUrl;

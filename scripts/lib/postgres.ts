@@ -110,6 +110,11 @@ export function postgresEnsure(options: EnsureOptions = {}): void {
   ]);
 }
 
+/** True when the project cluster runs (always true with DATABASE_URL: that server is not ours to stop). */
+export function postgresRunning(): boolean {
+  return Boolean(process.env.DATABASE_URL) || isRunning(clusterDir());
+}
+
 /** Stops the cluster if it runs. */
 export function postgresStop(): void {
   if (process.env.DATABASE_URL) return;

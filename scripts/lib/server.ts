@@ -1,4 +1,4 @@
-/** Starts the built app behind our server entry (scripts/serve.ts) as a child process; waits until /api/health answers. */
+/** Starts the built app behind our server entry (src/server/serve.ts) as a child process; waits until /api/health answers. */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { openSync } from 'node:fs';
 import { join } from 'node:path';
@@ -14,7 +14,7 @@ export interface RunningServer {
 export async function serverStart(env: NodeJS.ProcessEnv, opts: { logFile?: string } = {}): Promise<RunningServer> {
   const out = opts.logFile ? openSync(opts.logFile, 'w') : 'inherit';
   const url = `http://${env.HOST}:${env.PORT}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', join(PROJECT_ROOT, 'scripts', 'serve.ts')], {
+  const child = spawn(process.execPath, [join(PROJECT_ROOT, process.env.KW_OUT_DIR ?? 'dist', 'server', 'serve.mjs')], {
     cwd: PROJECT_ROOT,
     env,
     stdio: ['ignore', out, out],

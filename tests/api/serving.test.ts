@@ -1,5 +1,5 @@
 /**
- * How the server entry (scripts/serve.ts) serves: Content-Encoding negotiated per RFC 9110 §12.5.3 (br, gzip or
+ * How the server entry (src/server/serve.ts) serves: Content-Encoding negotiated per RFC 9110 §12.5.3 (br, gzip or
  * none as Accept-Encoding allows) with the bodies decoded by node:zlib, build assets cached as immutable
  * (RFC 8246), and a streamed NDJSON answer decodable line by line while it is still streaming. Raw node:http
  * requests: fetch would negotiate and decode on its own.

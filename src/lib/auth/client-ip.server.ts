@@ -1,7 +1,7 @@
 /**
  * The client's IP address for rate limits. Only when TRUST_PROXY is a number N ≥ 1 (that many proxies of ours
  * in front) is X-Forwarded-For read, and then its N-th address from the right — never the leftmost one, which
- * the client writes itself. Otherwise the socket's address: the server entry (scripts/serve.ts) drops an
+ * the client writes itself. Otherwise the socket's address: the server entry (src/server/serve.ts) drops an
  * X-Forwarded-For header before Astro reads it, since Astro's node adapter would report the header's leftmost
  * entry as clientAddress (astro/dist/core/app/node.js), and a forged header must not move a caller into a
  * bucket of its own.

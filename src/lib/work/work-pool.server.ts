@@ -72,10 +72,10 @@ export function workPoolCreate(o: { filename: string; threads: number; queueMax:
   };
 }
 
-/** Threads of the app's pool: KW_WORK_THREADS, else one per core. */
+/** Threads of the app's pool: KW_WORK_THREADS, else one per core but one, which the event loop keeps. */
 function threadCount(): number {
   const set = Number(process.env.KW_WORK_THREADS);
-  return Number.isInteger(set) && set >= 1 ? set : availableParallelism();
+  return Number.isInteger(set) && set >= 1 ? set : Math.max(1, availableParallelism() - 1);
 }
 
 let appPool: WorkPool | undefined;

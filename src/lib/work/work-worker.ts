@@ -1,5 +1,5 @@
 /**
- * The entry of each worker thread of the pool (work-pool.server.ts; config/work-worker.mjs builds it beside the
+ * The entry of each worker thread of the pool (work-pool.server.ts; config/server-entries.mjs builds it beside the
  * server's entry.mjs). A task arrives with a MessagePort: stage reports go out on it as they happen, and an
  * "abort" coming in stops the task between stages, as it would on the request's thread. Modules load once per
  * thread, so the font bytes (kit/fonts.server.ts) are read once per worker, not per build.

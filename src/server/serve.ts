@@ -1,6 +1,8 @@
 /**
- * The production server (`npm start` and `npm test` run it; so can a deployment: `tsx scripts/serve.ts`).
- * node:http in front of the Astro build, which the node adapter makes in middleware mode:
+ * The production server: `node dist/server/serve.mjs` (config/server-entries.mjs builds it beside the adapter's
+ * entry.mjs; `npm start` and `npm test` run it). Plain node, no TypeScript loader: a loader's hooks would sit on
+ * every dynamic import Astro makes per request. node:http in front of the Astro build, which the node adapter
+ * makes in middleware mode:
  *
  * 1. Static files of the build (`dist/client`) through sirv, which lists the folder once at start: API and page
  *    routes never stat the disk. It answers the `.br`/`.gz` twins written at build (config/precompress.mjs) to
@@ -11,12 +13,11 @@
  *    would report its leftmost entry as clientAddress) unless TRUST_PROXY says proxies of ours put it there.
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
-import { join, resolve } from 'node:path';
-import { pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 import compression from 'compression';
 import sirv from 'sirv';
-import { trustedProxyHops } from '../src/lib/auth/client-ip.server';
-import { PROGRESS_CONTENT_TYPE } from '../src/lib/http/progress-lines';
+import { trustedProxyHops } from '../lib/auth/client-ip.server';
+import { PROGRESS_CONTENT_TYPE } from '../lib/http/progress-lines';
 
 /** Cache-Control of hashed build assets: a new build gives a changed file a new name. */
 export const IMMUTABLE_CACHE_CONTROL = 'public, max-age=31536000, immutable';
@@ -25,12 +26,12 @@ const REVALIDATE_CACHE_CONTROL = 'public, max-age=0, must-revalidate';
 
 type Handler = (req: IncomingMessage, res: ServerResponse, next?: () => void) => void | Promise<void>;
 
-const outDir = resolve(process.env.KW_OUT_DIR ?? 'dist');
-const { handler: astro } = (await import(pathToFileURL(join(outDir, 'server', 'entry.mjs')).href)) as {
-  handler: Handler;
-};
+// Both beside this file in the build: the adapter's entry, and the client folder one level up.
+const entryUrl = new URL('./entry.mjs', import.meta.url).href;
+const { handler: astro } = (await import(/* @vite-ignore */ entryUrl)) as { handler: Handler };
+const clientDir = fileURLToPath(new URL('../client/', import.meta.url));
 
-const assets = sirv(join(outDir, 'client'), {
+const assets = sirv(clientDir, {
   dev: false,
   etag: true,
   brotli: true,
@@ -75,7 +76,7 @@ const server = createServer((req, res) => {
 
 const host = process.env.HOST ?? '127.0.0.1';
 const port = Number(process.env.PORT ?? 4321);
-server.listen(port, host, () => console.log(`Kitwright serving http://${host}:${port} from ${outDir}`));
+server.listen(port, host, () => console.log(`Kitwright serving http://${host}:${port} from ${clientDir}`));
 
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
