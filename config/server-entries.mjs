@@ -10,6 +10,7 @@ import { fileURLToPath } from 'node:url';
  */
 const VIRTUAL_ID = 'virtual:kitwright/work-worker';
 const RESOLVED_ID = `\0${VIRTUAL_ID}`;
+/** @param {string} path */
 const source = (path) => fileURLToPath(new URL(`../src/${path}`, import.meta.url));
 
 /** @returns {import('vite').Plugin} */
