@@ -1,5 +1,6 @@
 import type { AssemblyStep } from '../../lib/preview/assembly-steps';
 import { tabNumbersLabel } from '../../lib/preview/assembly-steps';
+import { FOLD_WORDS, foldWordsLine } from '../../lib/render/fold-words';
 
 interface Props {
   steps: readonly AssemblyStep[];
@@ -40,6 +41,9 @@ export default function AssemblyStepList({ steps, stepIndex, onPrevious, onNext,
           {step.description}
         </p>
       </div>
+      <p className="text-sm" data-testid="fold-words">
+        {FOLD_WORDS.holding} {foldWordsLine('mountain')}. {foldWordsLine('valley')}.
+      </p>
       <ol className="flex flex-col gap-1 text-sm">
         {steps.map((s, i) => (
           <li key={s.number}>

@@ -1,6 +1,7 @@
 import { useCallback, useMemo, useRef, type KeyboardEvent, type RefObject } from 'react';
 import type { Piece } from '../../lib/geometry/types';
 import type { PreviewRod } from './fold-preview-props';
+import type { AssemblyStep } from '../../lib/preview/assembly-steps';
 import FoldScene from './FoldScene';
 import SceneCanvas from './SceneCanvas';
 import { viewCommandRun, viewKeyCommand, type ViewActions } from '../../lib/preview/view-keys';
@@ -11,7 +12,8 @@ export interface FoldCanvasProps {
   rods: readonly PreviewRod[];
   foldPercent: number;
   foldWholeKit: boolean;
-  currentAssemblyStep: number;
+  /** The step shown: its piece folds by the slider, earlier pieces stand built, later ones are ghosted. */
+  step: AssemblyStep | undefined;
   actionsRef: RefObject<ViewActions | null>;
   /** Accessible name of the view region. */
   label: string;
@@ -28,7 +30,7 @@ export default function FoldCanvas({
   rods,
   foldPercent,
   foldWholeKit,
-  currentAssemblyStep,
+  step,
   actionsRef,
   label,
   hintId,
@@ -71,7 +73,7 @@ export default function FoldCanvas({
           rods={rods}
           foldPercent={foldPercent}
           foldWholeKit={foldWholeKit}
-          currentAssemblyStep={currentAssemblyStep}
+          step={step}
           frame={frame}
           actionsRef={actionsRef}
           onRendered={onRendered}

@@ -32,14 +32,13 @@ export default function FoldPreview({
   const actionsRef = useRef<ViewActions | null>(null);
   const hintId = useId();
   const step = steps[progress.stepIndex];
-  const currentAssemblyStep = step ? pieces.find((p) => p.id === step.pieceIds[0])!.assemblyStep : 0;
 
   return (
     <div className="grid gap-6 lg:grid-cols-[3fr_2fr]" data-testid="fold-preview">
       <div className="flex flex-col gap-3">
         <div className="h-[28rem] overflow-hidden rounded-lg border border-ink/15 bg-paper">
           {webgl === false ? (
-            <StillFallback pieces={pieces} currentAssemblyStep={currentAssemblyStep} />
+            <StillFallback pieces={pieces} step={step} />
           ) : webgl ? (
             <Suspense fallback={<p className="p-4 text-ink-soft">Loading the 3D view…</p>}>
               <FoldCanvas
@@ -47,7 +46,7 @@ export default function FoldPreview({
                 rods={rods}
                 foldPercent={progress.foldPercent}
                 foldWholeKit={progress.foldWholeKit}
-                currentAssemblyStep={currentAssemblyStep}
+                step={step}
                 actionsRef={actionsRef}
                 label={`3D view of the ${title} kit at 1:${scaleDenominator}`}
                 hintId={hintId}

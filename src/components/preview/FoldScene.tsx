@@ -1,5 +1,6 @@
 import type { RefObject } from 'react';
 import type { Piece } from '../../lib/geometry/types';
+import { assemblyStepPieceState, type AssemblyStep } from '../../lib/preview/assembly-steps';
 import PieceMesh, { type PieceState } from './PieceMesh';
 import RodMesh from './RodMesh';
 import type { PreviewRod } from './fold-preview-props';
@@ -15,15 +16,14 @@ interface Props {
   foldPercent: number;
   /** Fold every piece by the slider; otherwise only the current step's, the others shown assembled. */
   foldWholeKit: boolean;
-  /** The assemblyStep value of the current step; later steps are ghosted. */
-  currentAssemblyStep: number;
+  /** The current step (from the same module as the PDF's instructions); later pieces are ghosted. */
+  step: AssemblyStep | undefined;
   frame: ViewFrame;
   actionsRef: RefObject<ViewActions | null>;
   onRendered(foldPercent: number, first: boolean): void;
 }
 
-const stateOf = (piece: Piece, current: number): PieceState =>
-  piece.assemblyStep < current ? 'built' : piece.assemblyStep === current ? 'current' : 'later';
+const stateOf = (piece: Piece, step: AssemblyStep | undefined): PieceState => assemblyStepPieceState(step, piece.id);
 
 /** The lit scene inside the canvas: every piece folded by the slider, the orbit rig and the ready signal. */
 export default function FoldScene({
@@ -31,7 +31,7 @@ export default function FoldScene({
   rods,
   foldPercent,
   foldWholeKit,
-  currentAssemblyStep,
+  step,
   frame,
   actionsRef,
   onRendered,
@@ -46,8 +46,8 @@ export default function FoldScene({
         <PieceMesh
           key={p.id}
           piece={p}
-          fraction={foldWholeKit || stateOf(p, currentAssemblyStep) === 'current' ? fraction : 1}
-          state={stateOf(p, currentAssemblyStep)}
+          fraction={foldWholeKit || stateOf(p, step) === 'current' ? fraction : 1}
+          state={stateOf(p, step)}
         />
       ))}
       {rods.map((r) => (

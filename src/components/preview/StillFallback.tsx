@@ -1,10 +1,11 @@
 import { useMemo } from 'react';
 import type { Piece, Vec2Mm } from '../../lib/geometry/types';
 import { LINE_STYLES } from '../../lib/render/line-styles';
+import { assemblyStepPieceState, type AssemblyStep } from '../../lib/preview/assembly-steps';
 
 interface Props {
   pieces: readonly Piece[];
-  currentAssemblyStep: number;
+  step: AssemblyStep | undefined;
 }
 
 const GAP_MM = 8;
@@ -48,7 +49,7 @@ const path = (pts: readonly Vec2Mm[], dx: number, dy: number) =>
   pts.map(([px, py], i) => `${i ? 'L' : 'M'}${(px + dx).toFixed(2)} ${(dy - py).toFixed(2)}`).join('') + 'Z';
 
 /** What shows instead of the 3D view when WebGL is off: the flat pieces, the current step's in teal. */
-export default function StillFallback({ pieces, currentAssemblyStep }: Props) {
+export default function StillFallback({ pieces, step }: Props) {
   const layout = useMemo(() => (pieces.length > 0 ? shelfLayout(pieces) : null), [pieces]);
   return (
     <div className="flex h-full flex-col gap-2 p-3" data-testid="still-fallback">
@@ -67,7 +68,7 @@ export default function StillFallback({ pieces, currentAssemblyStep }: Props) {
             <g key={piece.id}>
               <path
                 d={path(piece.outlineMm, dx, dy)}
-                fill={piece.assemblyStep === currentAssemblyStep ? '#d6efec' : '#ffffff'}
+                fill={assemblyStepPieceState(step, piece.id) === 'current' ? '#d6efec' : '#ffffff'}
                 stroke={LINE_STYLES.cut.color}
                 strokeWidth={LINE_STYLES.cut.widthMm}
               />

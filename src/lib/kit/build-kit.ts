@@ -102,6 +102,7 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
     smallestLabelMm: BUILDABILITY_MINIMUMS[request.gradeBand].labelMm,
     cutList: size.kind === 'stock' ? cutListRows(pieces, sheets) : [],
     qrUrl: request.qrUrl,
+    instructionsAt: request.instructionsAt,
     engineVersion: ENGINE_VERSION,
   };
   await step('layout');

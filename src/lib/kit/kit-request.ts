@@ -42,6 +42,8 @@ export const KitRequestSchema = z.object({
     .min(1, 'copies must be at least 1')
     .max(KIT_COPIES_MAX, `copies must be at most ${KIT_COPIES_MAX}`)
     .default(1),
+  /** Where the PDF's instructions pages go: before the sheets or after them. */
+  instructionsAt: z.enum(['first', 'last']).default('last'),
   /** Units for printed sizes and the check square. */
   units: z.enum(['metric', 'us']).default('metric'),
   /** The class the kit is for: anchor sizes, substitutes for parts too fine for paper, and label sizes follow it. */

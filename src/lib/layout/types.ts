@@ -98,4 +98,6 @@ export interface KitLayout {
    * default (GLUE_MARK_MIN_MM_DEFAULT, grades 6–8) when absent.
    */
   smallestLabelMm?: number;
+  /** Where the instructions pages go in the PDF: before the sheets or after them (the default). */
+  instructionsAt?: 'first' | 'last';
 }

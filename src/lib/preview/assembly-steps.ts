@@ -1,41 +1,78 @@
 /**
- * The assembly steps of a kit in order: the pieces of each step, the numbered tabs to glue (the numbers
- * printed on the sheets) and a plain-text description for screen readers.
+ * The assembly steps of a kit in order, the one source of the build order for the PDF's instructions page,
+ * the step badges printed on the pieces and the 3D preview: each step adds one piece and glues at most
+ * ASSEMBLY_STEP_JOINTS_MAX of its joints (the numbered tabs), with a plain-text description.
+ *
+ * A glue joint is a tab number: the tab on one piece and the edge with the same number on another (or the
+ * same) piece. It is glued in the step that adds the later of its two pieces, so split pieces and new joints
+ * are covered without knowing how they were made.
  */
 import type { Piece } from '../geometry/types';
+import { FOLD_WORDS } from '../render/fold-words';
+
+/** Most glue joints in one step: a class glues four tabs before it needs to check the next ones. */
+export const ASSEMBLY_STEP_JOINTS_MAX = 4; // issue 10: "steps of at most four joints each"
 
 export interface AssemblyStep {
-  /** 1-based position in the build, contiguous even if the pieces' step numbers have gaps. */
+  /** 1-based position in the build. */
   number: number;
+  /** The piece added (or still being glued) in this step. */
   pieceIds: string[];
   pieceLabels: string[];
-  /** Tab numbers to glue in this step, ascending; each number of the kit appears in exactly one step. */
+  /** Pieces fully or partly assembled before this step, in build order. */
+  builtPieceIds: string[];
+  /** Tab numbers to glue in this step, ascending, at most ASSEMBLY_STEP_JOINTS_MAX; each joint in one step. */
   tabNumbers: number[];
-  /** One or two plain sentences naming the pieces, what to do and the tab numbers. */
+  /** What to do, in one or two plain sentences with the tab numbers (the description without its prefix). */
+  action: string;
+  /** "Step n of m: piece label. action", for screen readers. */
   description: string;
 }
 
-/** The steps of `pieces`, ordered by assemblyStep then by the pieces' order; no pieces gives []. */
+/** Whether a piece is already built, being added, or still to come at a step. */
+export type AssemblyPieceState = 'built' | 'current' | 'later';
+
+/** The state of a piece at a step (no step: every piece is built). */
+export function assemblyStepPieceState(step: AssemblyStep | undefined, pieceId: string): AssemblyPieceState {
+  if (!step) return 'built';
+  if (step.pieceIds.includes(pieceId)) return 'current';
+  return step.builtPieceIds.includes(pieceId) ? 'built' : 'later';
+}
+
+/** The steps of `pieces`: pieces by assemblyStep, then in the given order; no pieces gives []. */
 export function assemblySteps(pieces: readonly Piece[]): AssemblyStep[] {
-  const byStep = new Map<number, Piece[]>();
-  for (const p of pieces) byStep.set(p.assemblyStep, [...(byStep.get(p.assemblyStep) ?? []), p]);
-  const ordered = [...byStep.keys()].sort((a, b) => a - b);
-  return ordered.map((key, i) => {
-    const group = byStep.get(key)!;
-    const tabNumbers = [...new Set(group.flatMap((p) => p.tabs.map((t) => t.number)))].sort((a, b) => a - b);
-    const actions = group.map((p) => assemblyAction(p));
-    // One piece: "Label. Action."; several: each action after its own piece's label.
-    const said =
-      group.length === 1
-        ? `${group[0]!.label}. ${actions[0]}`
-        : group.map((p, k) => `${p.label}: ${actions[k]}`).join(' ');
-    return {
-      number: i + 1,
-      pieceIds: group.map((p) => p.id),
-      pieceLabels: group.map((p) => p.label),
-      tabNumbers,
-      description: `Step ${i + 1} of ${ordered.length}: ${said}`,
-    };
+  const order = pieces
+    .map((p, i) => ({ p, i }))
+    .sort((a, b) => a.p.assemblyStep - b.p.assemblyStep || a.i - b.i)
+    .map(({ p }) => p);
+  const rank = new Map(order.map((p, i) => [p.id, i]));
+  // Each joint's two pieces: the one with the tab and the one with the edge label (the same piece for a seam).
+  const where = new Map<number, number[]>();
+  for (const p of order) {
+    for (const t of p.tabs) where.set(t.number, [...(where.get(t.number) ?? []), rank.get(p.id)!]);
+    for (const e of p.edgeLabels) where.set(e.number, [...(where.get(e.number) ?? []), rank.get(p.id)!]);
+  }
+  const joints = order.map(() => [] as number[]);
+  for (const [number, ranks] of where) joints[Math.max(...ranks)]!.push(number);
+  const raw: Omit<AssemblyStep, 'description' | 'action' | 'number'>[] = [];
+  const built: string[] = [];
+  order.forEach((piece, i) => {
+    const numbers = joints[i]!.sort((a, b) => a - b);
+    const chunks: number[][] = [];
+    for (let k = 0; k < numbers.length; k += ASSEMBLY_STEP_JOINTS_MAX)
+      chunks.push(numbers.slice(k, k + ASSEMBLY_STEP_JOINTS_MAX));
+    if (chunks.length === 0) chunks.push([]);
+    for (const tabNumbers of chunks)
+      raw.push({ pieceIds: [piece.id], pieceLabels: [piece.label], builtPieceIds: [...built], tabNumbers });
+    built.push(piece.id);
+  });
+  const byId = new Map(order.map((p) => [p.id, p]));
+  return raw.map((step, i) => {
+    const piece = byId.get(step.pieceIds[0]!)!;
+    const first = i === 0 || raw[i - 1]!.pieceIds[0] !== piece.id;
+    const action = first ? assemblyAction(piece, step.tabNumbers) : assemblyMore(step.tabNumbers);
+    const description = `Step ${i + 1} of ${raw.length}: ${piece.label}. ${action}`;
+    return { number: i + 1, ...step, action, description };
   });
 }
 
@@ -55,22 +92,22 @@ export function tabNumbersLabel(numbers: readonly number[]): string {
   return `${sorted.length === 1 ? 'tab' : 'tabs'} ${list}`;
 }
 
-function assemblyAction(piece: Piece): string {
-  const tabs = piece.tabs.map((x) => x.number).sort((a, b) => a - b);
-  const t = tabNumbersLabel(tabs);
+/** The words for a piece's later steps: only more joints to glue. */
+function assemblyMore(numbers: readonly number[]): string {
+  return `Go on: glue ${tabNumbersLabel(numbers)}, each onto the edge with the same number.`;
+}
+
+/** The words for the step that adds a piece, by the kind of part it is. */
+function assemblyAction(piece: Piece, numbers: readonly number[]): string {
+  const t = tabNumbersLabel(numbers);
+  const glue = numbers.length ? ` Glue ${t}, each onto the edge with the same number.` : '';
   switch (piece.partKind) {
     case 'body': {
-      // A body piece with no tabs of its own (a cap) is where other pieces' tabs land.
-      if (tabs.length === 0) {
-        const edges = [...new Set(piece.edgeLabels.map((e) => e.number))];
-        return edges.length > 0
-          ? `Glue it onto ${tabNumbersLabel(edges)}, matching the numbers printed along its edges.`
-          : 'Fold it along its fold lines.';
-      }
-      const fold = piece.folds.some((f) => f.tabNumber === undefined)
-        ? 'Fold along every fold line, then glue'
-        : 'Glue';
-      return `${fold} ${t}, each onto the edge printed with the same number.`;
+      const folds = piece.folds.some((f) => f.tabNumber === undefined);
+      if (folds) return `Fold along every fold line (${FOLD_WORDS.short}).${glue}`;
+      return numbers.length
+        ? `Set it in place and glue ${t}, matching the numbers printed along its edges.`
+        : 'Set it in place.';
     }
     case 'rigid-boom':
       return `Roll it into a tube and glue its overlap strip (${t}) under the edge with the same number, then stand it on the body.`;
@@ -80,10 +117,10 @@ function assemblyAction(piece: Piece): string {
       if (!piece.hinge.curved) return 'Glue the flat disc onto the body at its place, printed side out.';
       return `Curl it into a cone and glue ${t} under the edge with the same number, then glue it onto the body.`;
     case 'wire-boom-anchor':
-      return `Lay the thread where the body is printed with ${tabs.join(', ')}, fold the anchor over it and glue ${t} there.`;
+      return `Lay the thread where the body is printed with ${numbers.join(', ')}, fold the anchor over it and glue ${t} there.`;
     case 'deployable-panel':
       return `Fold the hinge strip and glue ${t} onto the body where the same number is printed.`;
     case 'solar-panel':
-      return `Glue it flat onto its face of the body${tabs.length > 0 ? `, with ${t}` : ''}.`;
+      return `Glue it flat onto its face of the body.${glue}`;
   }
 }

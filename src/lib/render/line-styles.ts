@@ -5,6 +5,7 @@
  * dashes. Widths and dashes are mm on the sheet.
  */
 import type { LineKind } from '../geometry/types';
+import { FOLD_WORDS } from './fold-words';
 
 export interface LineStyle {
   /** Name in the legend. */
@@ -21,13 +22,19 @@ export interface LineStyle {
 export const LINE_STYLES: Record<LineKind, LineStyle> = {
   cut: { label: 'Cut line', action: 'cut along it', widthMm: 0.3, color: '#1b1b1b', dashMm: [] },
   mountain: {
-    label: 'Mountain fold',
-    action: 'ridge toward you',
+    label: FOLD_WORDS.mountain.name,
+    action: FOLD_WORDS.mountain.action,
     widthMm: 0.3,
     color: '#a04a00',
     dashMm: [4.2, 1, 0.8, 1],
   },
-  valley: { label: 'Valley fold', action: 'crease away from you', widthMm: 0.35, color: '#1f5aa6', dashMm: [1.4, 1.1] },
+  valley: {
+    label: FOLD_WORDS.valley.name,
+    action: FOLD_WORDS.valley.action,
+    widthMm: 0.35,
+    color: '#1f5aa6',
+    dashMm: [1.4, 1.1],
+  },
 };
 
 /** Guides that are not cut or folded: tile edges, overlap strips and the check square. */

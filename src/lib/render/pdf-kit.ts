@@ -12,7 +12,8 @@ import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { pieceLines } from './piece-lines';
 import { pdfFontsAdd, pdfFontUse } from './pdf-fonts';
 import type { PdfFonts } from './pdf-fonts';
-import { sheetScene } from './sheet-scene';
+import { sheetScene, type SceneText } from './sheet-scene';
+import { instructionsPages, type InstructionsPage } from './instructions-page';
 
 export type { PdfFonts } from './pdf-fonts';
 const PT_PER_MM = 72 / 25.4;
@@ -34,10 +35,28 @@ export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
     subject: `Paper model kit, scale 1:${kit.scaleDenominator}`,
     creator: `Kitwright engine ${kit.engineVersion}`,
   });
-  kit.sheets.forEach((sheet, index) => {
-    if (index > 0) doc.addPage(pageFormat(sheet), 'portrait');
+  const measure = (text: string, sizeMm: number, bold: boolean) => {
+    pdfFontUse(doc, bold);
+    doc.setFontSize(sizeMm * PT_PER_MM);
+    return doc.getTextWidth(text);
+  };
+  const pageSize = first ?? kit.sheetSize;
+  const instructions = instructionsPages(kit.title, kit.pieces, pageSize, measure);
+  let pages = 0;
+  const addPage = (format: [number, number]) => {
+    if (pages++ > 0) doc.addPage(format, 'portrait');
+  };
+  const drawInstructions = () =>
+    instructions.forEach((page) => {
+      addPage(pageFormat(pageSize));
+      pdfInstructionsPage(doc, page);
+    });
+  if (kit.instructionsAt === 'first') drawInstructions();
+  kit.sheets.forEach((sheet) => {
+    addPage(pageFormat(sheet));
     pdfSheet(doc, kit, sheet);
   });
+  if (kit.instructionsAt !== 'first') drawInstructions();
   return new Uint8Array(doc.output('arraybuffer'));
 }
 
@@ -73,8 +92,12 @@ function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
     for (const r of fill.rects) doc.rect(r.xMm, r.yMm, r.widthMm, r.heightMm, 'F');
   }
   for (const stroke of scene.strokes) pdfPolylines(doc, [stroke.points], stroke);
+  pdfTexts(doc, scene.texts);
+}
+
+function pdfTexts(doc: jsPDF, texts: readonly SceneText[]) {
   doc.setTextColor(TEXT_COLOR);
-  for (const t of scene.texts) {
+  for (const t of texts) {
     pdfFontUse(doc, t.bold);
     doc.setFontSize(t.sizeMm * PT_PER_MM);
     const half = t.anchor === 'middle' ? doc.getTextWidth(t.text) / 2 : 0;
@@ -83,6 +106,25 @@ function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
     // jspdf turns text counter-clockwise on the page; the scene's angles are clockwise.
     doc.text(t.text, x, y, { baseline: 'middle', angle: t.angleRad ? (-t.angleRad * 180) / Math.PI : 0 });
   }
+}
+
+/** One instructions page: the step drawings' shapes, then the texts. */
+function pdfInstructionsPage(doc: jsPDF, page: InstructionsPage) {
+  doc.setLineJoin('round');
+  doc.setLineDashPattern([], 0);
+  for (const shape of page.shapes) {
+    if (shape.points.length < 2) continue;
+    doc.setDrawColor(shape.stroke);
+    doc.setLineWidth(shape.widthMm);
+    doc.moveTo(shape.points[0]![0], shape.points[0]![1]);
+    for (let i = 1; i < shape.points.length; i++) doc.lineTo(shape.points[i]![0], shape.points[i]![1]);
+    if (shape.closed) doc.close();
+    if (shape.fill) {
+      doc.setFillColor(shape.fill);
+      doc.fillStroke();
+    } else doc.stroke();
+  }
+  pdfTexts(doc, page.texts);
 }
 
 function pdfPolylines(

@@ -15,6 +15,7 @@ import {
 import { LABEL_LINE_CLEARANCE_MM, LabelObstacles, labelBoxGrown, labelBoxNearestPoint } from './label-obstacles';
 import { GLUE_MARK_UNDERLINE_EM, glueMarkSizesMm, glueMarkUnderlined } from './glue-marks';
 import { pieceLines } from './piece-lines';
+import { assemblySteps } from '../preview/assembly-steps';
 import type { LabelMeasure } from './label-placement';
 import { textWidthMm } from './text-width';
 import { polygonArea } from '../geometry/vec';
@@ -44,6 +45,8 @@ export interface SceneText {
   group: 'labels' | 'furniture';
   /** Present on a glue mark: its number, which side of the joint it is on, and the piece it is printed on. */
   mark?: SceneMark;
+  /** True on a piece's step badge. */
+  badge?: boolean;
   /** Present on a mark printed beside its piece: the point on the piece its leader line ends at, mm. */
   calloutMm?: Vec2Mm;
 }
@@ -100,9 +103,15 @@ export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMe
   const onFreePaper = sceneFreePaper(sheet, byId);
   for (const c of callouts)
     if (!labels.tryCallout(c.callout, c.targets, (b) => c.fits(b) && onFreePaper(b))) labels.reserve(c.fallback);
+  const badges = sceneStepBadges(kit.pieces);
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);
     if (piece) scenePieceName(labels, piece, placement);
+  }
+  for (const placement of sheet.placements) {
+    const piece = byId.get(placement.pieceId);
+    const badge = piece && badges.get(piece.id);
+    if (piece && badge) sceneStepBadge(labels, piece, placement, badge, markSizes);
   }
   for (const mark of sheet.alignmentMarks)
     scene.strokes.push(...sceneAlignmentCross(mark.atMm).map((points) => ({ ...ALIGNMENT_STYLE, points })));
@@ -147,15 +156,18 @@ function sceneAlignmentCross([x, y]: Vec2Mm): Vec2Mm[][] {
   ];
 }
 
-/** A registration cross's letter in the first free quarter round the cross (above right first). */
+/** A registration cross's letter in the first clear spot round the cross. */
 function sceneAlignmentLetter(labels: SceneLabels, at: Vec2Mm, letter: string) {
-  const d = ALIGNMENT_ARM_MM + 0.6;
-  const homes: [Vec2Mm, SceneText['anchor']][] = [
-    [[at[0] + d, at[1] - d], 'start'],
-    [[at[0] + d, at[1] + d], 'start'],
-    [[at[0] - d - 1.8, at[1] - d], 'start'],
-    [[at[0] - d - 1.8, at[1] + d], 'start'],
-  ];
+  // Above right first, then the other quarters, then farther out.
+  const homes: [Vec2Mm, SceneText['anchor']][] = [0.6, 2.5, 5].flatMap((gap) => {
+    const d = ALIGNMENT_ARM_MM + gap;
+    return [
+      [[at[0] + d, at[1] - d], 'start'],
+      [[at[0] + d, at[1] + d], 'start'],
+      [[at[0] - d, at[1] - d], 'middle'],
+      [[at[0] - d, at[1] + d], 'middle'],
+    ] as [Vec2Mm, SceneText['anchor']][];
+  });
   const candidates = homes.map(([p, anchor]) => text(letter, p, NUMBER_SIZE_MM, 'labels', { bold: true, anchor }));
   if (!labels.tryPlace(candidates)) labels.reserve(candidates[0]!);
 }
@@ -469,6 +481,49 @@ function scenePieceName(labels: SceneLabels, piece: Piece, placement: Placement)
         const candidates = points.map((p) => text(name, p, size, 'labels', { bold: true, angleRad }));
         if (labels.tryPlace(candidates, within)) return;
       }
+}
+
+/**
+ * The step badge of a placed piece ("Step 3", "Steps 2–4"): the instructions page's step numbers, printed
+ * inside the piece's faces clear of its name, its marks and every line; left off when nothing is clear.
+ */
+function sceneStepBadge(labels: SceneLabels, piece: Piece, placement: Placement, badge: string, sizesMm: number[]) {
+  const window = sceneNameWindow(placement);
+  const spots = sceneNameRegions(piece).map(({ region, points }) => ({
+    within: sceneInside(
+      region.map((p) => placementApply(placement, p)),
+      window,
+    ),
+    points: points.map((p) => placementApply(placement, p)).filter((p) => inside(p, window)),
+  }));
+  for (const size of sizesMm)
+    for (const angleRad of [0, -Math.PI / 2])
+      for (const { within, points } of spots) {
+        const candidates = points.map((p) => text(badge, p, size, 'labels', { angleRad, badge: true }));
+        if (labels.tryPlace(candidates, within)) return;
+      }
+}
+
+/** The badge words for a piece's steps: "Step 3", "Steps 2–4" (a run) or "Steps 2, 5". */
+export function sceneStepBadgeText(stepNumbers: readonly number[]): string {
+  if (stepNumbers.length === 0) return '';
+  if (stepNumbers.length === 1) return `Step ${stepNumbers[0]}`;
+  const run = stepNumbers.every((n, i) => i === 0 || n === stepNumbers[i - 1]! + 1);
+  return run ? `Steps ${stepNumbers[0]}–${stepNumbers.at(-1)}` : `Steps ${stepNumbers.join(', ')}`;
+}
+
+const stepBadgeCache = new WeakMap<readonly Piece[], Map<string, string>>();
+
+/** Each piece's badge text from the kit's assembly steps (computed once per kit). */
+function sceneStepBadges(pieces: readonly Piece[]): Map<string, string> {
+  let badges = stepBadgeCache.get(pieces);
+  if (badges) return badges;
+  const numbers = new Map<string, number[]>();
+  for (const step of assemblySteps(pieces))
+    for (const id of step.pieceIds) numbers.set(id, [...(numbers.get(id) ?? []), step.number]);
+  badges = new Map([...numbers].map(([id, ns]) => [id, sceneStepBadgeText(ns)]));
+  stepBadgeCache.set(pieces, badges);
+  return badges;
 }
 
 const nameRegionCache = new WeakMap<Piece, { region: Vec2Mm[]; points: Vec2Mm[] }[]>();

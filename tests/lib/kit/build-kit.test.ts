@@ -2,6 +2,8 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { PDFDocument } from 'pdf-lib';
+import { instructionsPages } from '../../../src/lib/render/instructions-page';
+import { textWidthMm } from '../../../src/lib/render/text-width';
 import { describe, expect, test } from 'vitest';
 import { InputError } from '../../../src/lib/errors';
 import { buildKit } from '../../../src/lib/kit/build-kit';
@@ -47,10 +49,12 @@ describe('buildKit', () => {
     }
   });
 
-  test('builds the Skein probe at 1:20 on Letter with the model engine: PDF pages = sheets = SVGs', async () => {
+  test('builds the Skein probe at 1:20 on Letter with the model engine: PDF pages = sheets + instructions = SVGs + instructions', async () => {
     const kit = await buildKit(request(), fonts);
     const pdf = await PDFDocument.load(kit.pdf!);
-    expect(pdf.getPageCount()).toBe(kit.layout.sheets.length);
+    const instructions = instructionsPages(kit.layout.title, kit.layout.pieces, kit.layout.sheetSize, textWidthMm);
+    expect(instructions.length).toBeGreaterThan(0);
+    expect(pdf.getPageCount()).toBe(kit.layout.sheets.length + instructions.length);
     expect(kit.svgSheets).toHaveLength(kit.layout.sheets.length);
     expect(kit.layout.pieces.length).toBeGreaterThan(0);
     // Binary STL: 84-byte header and count, then 50 bytes per triangle.

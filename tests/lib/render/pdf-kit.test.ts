@@ -2,6 +2,8 @@ import { getDocument, OPS } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { PDFDocument } from 'pdf-lib';
 import { describe, expect, test } from 'vitest';
 import { pdfKit } from '../../../src/lib/render/pdf-kit';
+import { instructionsPages } from '../../../src/lib/render/instructions-page';
+import { textWidthMm } from '../../../src/lib/render/text-width';
 import { fixtureFonts, fixtureKit } from '../../fixtures/pieces/kit-layout';
 
 const fonts = fixtureFonts();
@@ -26,18 +28,19 @@ async function pathBoxes(
 describe('pdfKit', () => {
   // ISO 32000-1:2008 §8.3.2.3: default user space unit 1/72 in; Letter (ASME Y14.1 ANSI A, 8.5 × 11 in) is
   // 612 × 792 pt and A4 (ISO 216, 210 × 297 mm) 595.276 × 841.890 pt. jspdf writes the MediaBox to 0.01 pt.
-  test('has one Letter page per sheet, 612 × 792 pt, read back by pdf.js and pdf-lib', async () => {
+  test('has one Letter page per sheet and per instructions page, 612 × 792 pt, read back by pdf.js and pdf-lib', async () => {
     const kit = fixtureKit('letter', 'us');
     const bytes = pdfKit(kit, fonts);
     const doc = await pdfjsPages(bytes);
-    expect(doc.numPages).toBe(kit.sheets.length);
+    const pages = kit.sheets.length + instructionsPages(kit.title, kit.pieces, kit.sheetSize, textWidthMm).length;
+    expect(doc.numPages).toBe(pages);
     for (let n = 1; n <= doc.numPages; n++) {
       const [x0, y0, x1, y1] = (await doc.getPage(n)).view;
       expect(x1! - x0!).toBeCloseTo(612, 2);
       expect(y1! - y0!).toBeCloseTo(792, 2);
     }
     const lib = await PDFDocument.load(bytes);
-    expect(lib.getPageCount()).toBe(kit.sheets.length);
+    expect(lib.getPageCount()).toBe(pages);
     expect(lib.getPage(0).getSize().width).toBeCloseTo(612, 2);
   });
 
@@ -62,8 +65,10 @@ describe('pdfKit', () => {
       ['us', 144],
       ['metric', (50 * 72) / 25.4],
     ] as const) {
-      const doc = await pdfjsPages(pdfKit(fixtureKit('letter', units), fonts));
-      for (let n = 1; n <= doc.numPages; n++) {
+      const kit = fixtureKit('letter', units);
+      const doc = await pdfjsPages(pdfKit(kit, fonts));
+      // The sheets come first; the instructions pages after them carry no check square.
+      for (let n = 1; n <= kit.sheets.length; n++) {
         const boxes = await pathBoxes(await doc.getPage(n));
         const squares = boxes.filter(
           ([a, b, c, d]) => Math.abs(c! - a! - side) < 0.01 && Math.abs(d! - b! - side) < 0.01,
