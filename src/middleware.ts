@@ -9,6 +9,7 @@ import { actorResolve } from './lib/auth/actor-resolve.server';
 import { originAllowedHostnames, originVerdict } from './lib/http/origin-check';
 import { errorResponse, errorToResponse } from './lib/http/respond';
 import { requestIdNew } from './lib/http/request-id';
+import { cspStyleHashesDropped, pageSecurityHeaders } from './lib/http/security-headers';
 import { routeMethodsAllowed, routeModulePaths, routeUrlMalformed } from './lib/http/route-methods';
 import { InputError, MethodNotAllowedError, NotFoundError } from './lib/errors';
 
@@ -17,13 +18,14 @@ const API_MODULES = import.meta.glob<Record<string, unknown>>('./pages/api/**/*.
 
 // Read once, as astro.config.mjs does for the adapter's host handling: a bad SITE_URL fails at start, not per request.
 const ALLOWED_HOSTNAMES = originAllowedHostnames(process.env.SITE_URL);
+const PAGE_SECURITY_HEADERS = Object.entries(pageSecurityHeaders(process.env.SITE_URL));
 
 export const onRequest = defineMiddleware(async (context, next) => {
   const requestId = requestIdNew();
   context.locals.requestId = requestId;
   const isApi = context.url.pathname.startsWith('/api/');
   const unrouted = isApi ? apiUnrouted(context.url, context.request.method, context.routePattern) : null;
-  if (unrouted) return withRequestId(errorToResponse(unrouted, requestId), requestId);
+  if (unrouted) return answerStamped(errorToResponse(unrouted, requestId), requestId);
   const verdict = originVerdict(
     { method: context.request.method, url: context.url, headers: context.request.headers },
     ALLOWED_HOSTNAMES,
@@ -36,7 +38,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
     // Astro answers a method the route does not export with an empty 404 and then renders the HTML 404 page.
     if (isApi && response.status === 404 && response.body === null)
       response = errorToResponse(await methodNotAllowed(context.request.method, context.routePattern), requestId);
-    return withRequestId(response, requestId);
+    return answerStamped(response, requestId);
   } catch (err) {
     if (isApi) return errorToResponse(err, requestId);
     console.error(`[${requestId}] unexpected error on ${context.url.pathname}`, err);
@@ -47,8 +49,15 @@ export const onRequest = defineMiddleware(async (context, next) => {
   }
 });
 
-function withRequestId(response: Response, requestId: string): Response {
+/**
+ * Stamps the request id and the security headers of src/lib/http/security-headers.ts on an answer (a header a
+ * route set itself wins); on a page, the CSP Astro wrote loses its style hashes so style attributes may apply.
+ */
+function answerStamped(response: Response, requestId: string): Response {
   response.headers.set('x-request-id', requestId);
+  for (const [name, value] of PAGE_SECURITY_HEADERS) if (!response.headers.has(name)) response.headers.set(name, value);
+  const csp = response.headers.get('content-security-policy');
+  if (csp) response.headers.set('content-security-policy', cspStyleHashesDropped(csp));
   return response;
 }
 

@@ -118,7 +118,7 @@ describe('fold preview', () => {
     const { page } = await pageNew(browser);
     await previewOpen(page);
     const require = createRequire(import.meta.url);
-    await page.addScriptTag({ content: readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8') });
+    await page.evaluate(readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8'));
     const violations = await page.evaluate(async () => {
       const axe = (window as unknown as { axe: { run(): Promise<{ violations: { id: string; impact: string }[] }> } })
         .axe;
