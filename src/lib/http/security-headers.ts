@@ -7,7 +7,7 @@
  */
 
 /** CSP directives other than script-src and style-src (Astro writes those two with its hashes). */
-export const CSP_DIRECTIVES: readonly string[] = [
+export const CSP_DIRECTIVES = [
   "default-src 'self'",
   // Sheet previews and QR codes are data: URLs; the 3D preview and downloads make blob: URLs.
   "img-src 'self' data: blob:",
@@ -18,7 +18,7 @@ export const CSP_DIRECTIVES: readonly string[] = [
   "base-uri 'self'",
   "form-action 'self'",
   "frame-ancestors 'none'",
-];
+] as const;
 
 /** Sources of scripts besides Astro's hashed inline ones: this site's own files only. */
 export const CSP_SCRIPT_SOURCES: readonly string[] = ["'self'"];
