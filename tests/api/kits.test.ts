@@ -5,6 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PDFDocument } from 'pdf-lib';
+import { kitPdfPageKinds } from '../fixtures/pdf-text';
 import type { Knex } from 'knex';
 import { testKnex } from '../db/database';
 import { api, postJson } from './harness';
@@ -167,13 +168,15 @@ describe('POST /api/kits/preview', () => {
 });
 
 describe('POST /api/kits/preview-file', () => {
-  it('answers the PDF of unsaved settings, one page per sheet (read back with pdf-lib)', async () => {
+  it('answers the PDF of unsaved settings, one page per sheet and the instructions (read back with pdf.js)', async () => {
     const preview = await body(await postJson('/api/kits/preview', INPUTS, as(teacherCookie)));
     const res = await postJson('/api/kits/preview-file', { inputs: INPUTS, output: 'pdf' }, as(teacherCookie));
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
-    const pdf = await PDFDocument.load(new Uint8Array(await res.arrayBuffer()));
-    expect(pdf.getPageCount()).toBe(preview.sheetCount);
+    const pages = await kitPdfPageKinds(new Uint8Array(await res.arrayBuffer()));
+    expect(pages.sheets).toBe(preview.sheetCount);
+    expect(pages.instructions.length).toBeGreaterThan(0);
+    expect(pages.instructions[0]).toMatch(/^How to build it/);
   });
 
   it('streams patterns, layout and PDF, then the same PDF base64 in the last line', async () => {
@@ -322,14 +325,18 @@ describe('saved kits', () => {
     expect((await send(`/api/kits/${inA.id}`, 'DELETE', student)).status).toBe(403);
   });
 
-  it('serves a PDF whose page count is the layout’s sheet count, read back with pdf-lib', async () => {
+  it('serves a PDF with a page per sheet of the layout and the instructions, read back with pdf.js and pdf-lib', async () => {
     const kit = await kitSaved(teacherCookie, classA, { ...INPUTS, copies: 2 });
     const res = await api(`/api/kits/${kit.id}.pdf`, { headers: as(teacherCookie) });
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
     expect(res.headers.get('content-disposition')).toMatch(/attachment; filename=".+-1-20-letter\.pdf"/);
-    const pdf = await PDFDocument.load(new Uint8Array(await res.arrayBuffer()));
-    expect(pdf.getPageCount()).toBe(kit.sheetCount);
+    const bytes = new Uint8Array(await res.arrayBuffer());
+    const pages = await kitPdfPageKinds(bytes);
+    expect(pages.sheets).toBe(kit.sheetCount);
+    expect(pages.instructions.length).toBeGreaterThan(0);
+    const pdf = await PDFDocument.load(bytes);
+    expect(pdf.getPageCount()).toBe(kit.sheetCount + pages.instructions.length);
     // US Letter is 8.5 × 11 in = 612 × 792 pt (ASME Y14.1; 1 pt = 1/72 in, ISO 32000-1 §8.3.2.3).
     const { width, height } = pdf.getPage(0).getSize();
     expect([width, height].map((v) => Math.round(v))).toEqual([612, 792]);

@@ -9,6 +9,7 @@ import { gzipSync } from 'node:zlib';
 import type { Browser, Page } from 'playwright-core';
 import type { Knex } from 'knex';
 import { PDFDocument } from 'pdf-lib';
+import { kitPdfPageKinds } from '../fixtures/pdf-text';
 import { axeSerious, BASE_URL, browserLaunch, hydrated, kitSaveRequest, pageNew } from './browser';
 import { testKnex } from '../db/database';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
@@ -46,7 +47,8 @@ describe('kit builder', () => {
     const { page, errors } = await signedIn();
     await page.goto('/kits/new?model=skein-probe');
     await hydrated(page);
-    await page.getByRole('button', { name: '1:25', exact: true }).click();
+    // 1:25 is the suggested scale for grades 6–8 (its button is named "1:25 (suggested)").
+    await page.getByRole('button', { name: /^1:25( \(suggested\))?$/ }).click();
     await page.waitForFunction(
       () => document.querySelector('[data-testid="kit-summary"]')?.getAttribute('data-scale') === '25',
     );
@@ -182,8 +184,10 @@ describe('kit page', () => {
       page.waitForEvent('download'),
       page.getByRole('link', { name: 'Download the PDF to print' }).click(),
     ]);
-    const pdf = await PDFDocument.load(await readFile((await download.path())!));
-    expect(pdf.getPageCount()).toBe(sheets);
+    const bytes = new Uint8Array(await readFile((await download.path())!));
+    const pages = await kitPdfPageKinds(bytes);
+    expect(pages.sheets).toBe(sheets);
+    expect((await PDFDocument.load(bytes)).getPageCount()).toBe(sheets + pages.instructions.length);
   });
 
   it('has no serious or critical axe violations', async () => {

@@ -1,5 +1,5 @@
-import { useMemo } from 'react';
-import { Quaternion, Vector3 } from 'three';
+import { useEffect, useMemo } from 'react';
+import { CylinderGeometry, Quaternion, Vector3 } from 'three';
 import type { Vec3Mm } from '../../lib/geometry/types';
 import { ROD_MATERIAL } from './piece-materials';
 
@@ -21,9 +21,19 @@ export default function RodMesh({ name, fromMm, toMm, diameterMm }: Props) {
     const quaternion = new Quaternion().setFromUnitVectors(new Vector3(0, 1, 0), axis.clone().normalize());
     return { position: from.add(axis.multiplyScalar(0.5)), quaternion, length };
   }, [fromMm, toMm]);
+  // A geometry object, not a <cylinderGeometry> element: SceneCanvas registers only the classes it needs.
+  const geometry = useMemo(
+    () => new CylinderGeometry(diameterMm / 2, diameterMm / 2, pose.length, 16),
+    [diameterMm, pose.length],
+  );
+  useEffect(() => () => geometry.dispose(), [geometry]);
   return (
-    <mesh name={name} position={pose.position} quaternion={pose.quaternion} material={ROD_MATERIAL}>
-      <cylinderGeometry args={[diameterMm / 2, diameterMm / 2, pose.length, 16]} />
-    </mesh>
+    <mesh
+      name={name}
+      position={pose.position}
+      quaternion={pose.quaternion}
+      geometry={geometry}
+      material={ROD_MATERIAL}
+    />
   );
 }

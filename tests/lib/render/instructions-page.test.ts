@@ -1,4 +1,3 @@
-import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, test } from 'vitest';
 import { assemblySteps, assemblyStepPieceState } from '../../../src/lib/preview/assembly-steps';
 import { instructionsPages } from '../../../src/lib/render/instructions-page';
@@ -7,22 +6,12 @@ import { pieceTabsFold } from '../../../src/lib/preview/tab-fold';
 import { stepDrawing, STEP_DRAWING_COLOURS } from '../../../src/lib/render/step-drawing';
 import { textWidthMm } from '../../../src/lib/render/text-width';
 import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
+import { pdfPageTexts } from '../../fixtures/pdf-text';
 import { demoKit } from './demo-kits';
 import { DEMO_IDS } from '../geometry/fixtures';
 
 const fonts = fixtureFonts();
 const BOX = { xMm: 0, yMm: 0, widthMm: 44, heightMm: 44 };
-
-/** Page texts in reading order, read back by pdf.js (an independent PDF reader). */
-async function pdfPageTexts(bytes: Uint8Array): Promise<string[]> {
-  const doc = await getDocument({ data: bytes.slice(), disableFontFace: true, useSystemFonts: false }).promise;
-  const pages: string[] = [];
-  for (let n = 1; n <= doc.numPages; n++) {
-    const content = await (await doc.getPage(n)).getTextContent();
-    pages.push(content.items.map((i) => ('str' in i ? i.str : '')).join('\n'));
-  }
-  return pages;
-}
 
 describe('instructionsPages', () => {
   test.each(DEMO_IDS)('puts every step of %s on the pages once, in order', (id) => {
