@@ -4,6 +4,7 @@
  * dot paths). Each answer is checked for its status and the shared error body { error: { code, message } }.
  */
 import type { Knex } from 'knex';
+import { KIT_SETTINGS } from '../fixtures/kit-settings';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { api, BASE_URL, postJson } from './harness';
@@ -13,14 +14,7 @@ let knex: Knex;
 let cookie = '';
 let classId = '';
 
-const SETTINGS = {
-  scaleDenominator: 20,
-  sheetSizeId: 'letter',
-  paperGsm: 160,
-  copies: 1,
-  units: 'metric',
-  venue: { kind: 'preset', id: 'classroom' },
-} as const;
+const SETTINGS = KIT_SETTINGS;
 const cylinder = (facets: number, name = 'Drum') => ({
   schemaVersion: 1,
   name,

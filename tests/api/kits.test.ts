@@ -4,6 +4,7 @@
  * only its class's kits), and downloads read back with reference libraries (pdf-lib for the PDF).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { SKEIN_KIT_INPUTS } from '../fixtures/kit-settings';
 import { PDFDocument } from 'pdf-lib';
 import { kitPdfPageKinds } from '../fixtures/pdf-text';
 import type { Knex } from 'knex';
@@ -27,15 +28,7 @@ let classA: string;
 let classB: string;
 let otherClass: string;
 
-const INPUTS = {
-  modelId: 'skein-probe',
-  scaleDenominator: 20,
-  sheetSizeId: 'letter',
-  paperGsm: 160,
-  copies: 1,
-  units: 'metric',
-  venue: { kind: 'preset', id: 'classroom' },
-} as const;
+const INPUTS = SKEIN_KIT_INPUTS;
 
 // Response bodies are read loosely; each test checks the fields it needs.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any

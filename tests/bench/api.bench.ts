@@ -10,6 +10,7 @@
  * Ports: PORT (app, 4321) and KW_BENCH_BASELINE_PORT (baseline, 4323); the project's PostgreSQL (KW_PG_PORT).
  */
 import { spawn } from 'node:child_process';
+import { SKEIN_KIT_INPUTS } from '../fixtures/kit-settings';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
@@ -62,16 +63,7 @@ function buildersRun(base: string, cookie: string) {
         headers: { cookie, origin: base, 'content-type': 'application/json' },
         body: JSON.stringify({
           output: 'pdf',
-          inputs: {
-            modelId: 'skein-probe',
-            title: `Bench ${n}-${i}-${Date.now()}`,
-            scaleDenominator: 20,
-            sheetSizeId: 'letter',
-            paperGsm: 160,
-            copies: 1,
-            units: 'metric',
-            venue: { kind: 'preset', id: 'classroom' },
-          },
+          inputs: { ...SKEIN_KIT_INPUTS, title: `Bench ${n}-${i}-${Date.now()}` },
         }),
       });
       await res.arrayBuffer();
