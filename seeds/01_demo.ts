@@ -13,6 +13,7 @@ import { kitFonts } from '../src/lib/kit/fonts.server';
 import { KitInputsSchema, kitRequestOf } from '../src/lib/kit/kit-inputs';
 import { ModelContentSchema } from '../src/lib/geometry/model-schema';
 import { DEMO_ACCOUNTS } from './data/demo-accounts';
+import { seedDemoEvents } from './data/demo-events';
 
 const SCHOOLS = [
   {
@@ -193,21 +194,15 @@ export async function seed(knex: Knex): Promise<void> {
     },
   ]);
 
-  await knex('events').insert({
-    title: 'Skein probe life-size build',
-    kind: 'big_build',
-    school_id: schoolId('Fennel Valley STEM Academy'),
-    venue: 'School football field',
-    starts_at: new Date(now + 21 * 86_400_000),
-    attendee_count: 120,
-    notes: 'Booms laid out with string on the field; body from foam-board panels.',
-    created_by: coordinator.id,
+  const engineeringKit = await knex('kits')
+    .where({ class_id: classBy('Engineering Club').id })
+    .first('id');
+  await seedDemoEvents(knex, {
+    coordinatorId: coordinator.id,
+    schoolId,
+    userByEmail: userBy,
+    kitId: engineeringKit?.id ?? null,
   });
-
-  await knex('live_links').insert([
-    { code: 'skein', title: 'Skein activity bookmark', target_url: '/activities', created_by: coordinator.id },
-    { code: 'bigbuild', title: 'Big build poster', target_url: '/', created_by: coordinator.id },
-  ]);
 }
 
 interface DemoKit {
