@@ -233,7 +233,7 @@ async function seedKits(
     const content = ModelContentSchema.parse(JSON.parse(readFileSync(file, 'utf8')));
     const id = randomUUID();
     const qrUrl = `${siteUrl}/kits/${id}`;
-    const build = await buildKit(kitRequestOf(inputs, content.model, qrUrl), fonts, { outputs: ['svg'] });
+    const build = await buildKit(kitRequestOf(inputs, content, qrUrl), fonts, { outputs: ['svg'] });
     await knex('kits').insert({
       id,
       class_id: owner.id,

@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SKEIN_KIT_INPUTS } from '../fixtures/kit-settings';
 import { PDFDocument } from 'pdf-lib';
-import { kitPdfPageKinds } from '../fixtures/pdf-text';
+import { kitPdfPageKinds, pdfPageTexts } from '../fixtures/pdf-text';
 import type { Knex } from 'knex';
 import { testKnex } from '../db/database';
 import { api, postJson } from './harness';
@@ -170,6 +170,35 @@ describe('POST /api/kits/preview-file', () => {
     expect(pages.sheets).toBe(preview.sheetCount);
     expect(pages.instructions.length).toBeGreaterThan(0);
     expect(pages.instructions[0]).toMatch(/^How to build it/);
+  });
+
+  it('puts the instructions first when asked, headed with the model title the builder lists (pdf.js)', async () => {
+    const inputs = { ...INPUTS, modelId: 'wren-3u', scaleDenominator: 5, instructionsAt: 'first' };
+    const res = await postJson('/api/kits/preview-file', { inputs, output: 'pdf' }, as(teacherCookie));
+    expect(res.status).toBe(200);
+    const texts = await pdfPageTexts(new Uint8Array(await res.arrayBuffer()));
+    expect(texts[0]).toMatch(/^How to build it: Wren 3U small satellite/);
+    expect(texts.at(-1)).toMatch(/Sheet \d+ of \d+/);
+    const last = await postJson(
+      '/api/kits/preview-file',
+      { inputs: { ...inputs, instructionsAt: 'last' }, output: 'pdf' },
+      as(teacherCookie),
+    );
+    const lastTexts = await pdfPageTexts(new Uint8Array(await last.arrayBuffer()));
+    expect(lastTexts[0]).toMatch(/Sheet 1 of \d+/);
+    expect(lastTexts.at(-1)).not.toMatch(/Sheet \d+ of \d+/);
+  });
+
+  it('refuses a place for the instructions other than first or last, naming the field', async () => {
+    const res = await postJson(
+      '/api/kits/preview-file',
+      { inputs: { ...INPUTS, instructionsAt: 'middle' }, output: 'pdf' },
+      as(teacherCookie),
+    );
+    expect(res.status).toBe(400);
+    const err = (await body(res)).error;
+    expect(err.code).toBe('invalid_input');
+    expect(Object.keys(err.fields ?? {}).join(' ')).toMatch(/instructionsAt/);
   });
 
   it('streams patterns, layout and PDF, then the same PDF base64 in the last line', async () => {

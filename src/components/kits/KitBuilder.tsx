@@ -338,6 +338,19 @@ function KitBuilderForm(props: KitBuilderProps) {
           </div>
         </div>
         <div>
+          <label className="field-label" htmlFor="kit-instructions">
+            Instructions pages in the PDF
+          </label>
+          <select
+            id="kit-instructions"
+            className="field-input"
+            {...register('instructionsAt', { onChange: () => (immediate.current = true) })}
+          >
+            <option value="last">After the sheets</option>
+            <option value="first">Before the sheets</option>
+          </select>
+        </div>
+        <div>
           <label className="field-label" htmlFor="kit-title">
             Title on the sheets (optional)
           </label>

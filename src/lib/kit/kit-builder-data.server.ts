@@ -13,7 +13,7 @@ import { BUILD_GRADE_BAND_DEFAULT } from '../geometry/buildability';
 import { demoModelById, demoModels } from './demo-models.server';
 import { KIT_DEFAULT_PAPER_GSM, KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
-import type { KitForm } from './kit-settings';
+import { INSTRUCTIONS_PLACE_DEFAULT, type KitForm } from './kit-settings';
 import type { KitBuilderProps } from '../../components/kits/builder-props';
 
 /** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
@@ -52,6 +52,7 @@ export async function kitBuilderProps(
     scaleDenominator: solve?.suggestedScaleDenominator ?? 20,
     copies: 1,
     print: PRINT_CHOICE_DEFAULT,
+    instructionsAt: INSTRUCTIONS_PLACE_DEFAULT,
     ...(activity ? { activitySlug: activity.slug } : {}),
   } satisfies KitForm & KitInputs;
   const preview = await kitPreview(initial).catch((err: unknown) => {

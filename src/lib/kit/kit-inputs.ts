@@ -17,7 +17,7 @@ import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { CustomVenueSchema, VENUES, venueCustom, type Venue, type VenueId } from '../layout/venues';
 import { parseInput } from '../validation';
 import { KIT_COPIES_MAX, KitRequestSchema, type KitRequest } from './kit-request';
-import { kitSettingsSchema, type KitSettingsLimits } from './kit-settings';
+import { INSTRUCTIONS_PLACE_DEFAULT, kitSettingsSchema, type KitSettingsLimits } from './kit-settings';
 
 const VENUE_IDS = Object.keys(VENUES) as [VenueId, ...VenueId[]];
 
@@ -36,9 +36,13 @@ export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[numb
 };
 
 const KitSettingsBaseSchema = kitSettingsSchema(KIT_SETTINGS_LIMITS);
-/** The settings as the API takes them: a request without a grade band is for the default band. */
+/**
+ * The settings as the API takes them: a request without a grade band is for the default band, one without
+ * a place for the instructions (and every kit saved before there was a choice) has them last.
+ */
 export const KitSettingsSchema = KitSettingsBaseSchema.extend({
   gradeBand: KitSettingsBaseSchema.shape.gradeBand.default(BUILD_GRADE_BAND_DEFAULT),
+  instructionsAt: KitSettingsBaseSchema.shape.instructionsAt.default(INSTRUCTIONS_PLACE_DEFAULT),
 });
 
 /** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
@@ -91,17 +95,21 @@ export function kitVenue(choice: KitInputs['venue']): Venue {
   return venueCustom(parseInput(CustomVenueSchema, { lengthM: choice.lengthM, widthM: choice.widthM }, 'venue'));
 }
 
-/** The engine request for parsed inputs, the resolved model and the URL the QR code points at (null: no page yet). */
+/**
+ * The engine request for parsed inputs, the resolved model (with the title it is listed under, printed when
+ * the kit has no title of its own) and the URL the QR code points at (null: no page yet).
+ */
 export function kitRequestOf(
-  inputs: Omit<KitInputs, 'modelId' | 'model' | 'venue'>,
-  model: Model,
+  inputs: Omit<KitInputs, 'modelId' | 'model' | 'venue' | 'instructionsAt'> &
+    Partial<Pick<KitInputs, 'instructionsAt'>>,
+  resolved: { model: Model; title: string },
   qrUrl: string | null,
 ): KitRequest {
   return parseInput(
     KitRequestSchema,
     {
-      model,
-      ...(inputs.title ? { title: inputs.title } : {}),
+      model: resolved.model,
+      title: inputs.title ?? resolved.title,
       scaleDenominator: inputs.scaleDenominator,
       sheetSizeId: inputs.sheetSizeId,
       paperGsm: inputs.paperGsm,
@@ -109,6 +117,7 @@ export function kitRequestOf(
       units: inputs.units,
       ...(inputs.print ? { print: inputs.print } : {}),
       gradeBand: inputs.gradeBand,
+      ...(inputs.instructionsAt ? { instructionsAt: inputs.instructionsAt } : {}),
       qrUrl,
     },
     'kit',

@@ -41,8 +41,9 @@ export interface KitPreview {
 
 /** Sheets and summary of an unsaved kit; it has no page yet, so its sheets print a note where the QR code goes. */
 export async function kitPreview(inputs: KitInputs, options: KitOutputBuildOptions = {}): Promise<KitPreview> {
-  const { model } = demoModelResolve(inputs);
-  const request = kitRequestOf(inputs, model, null);
+  const resolved = demoModelResolve(inputs);
+  const { model } = resolved;
+  const request = kitRequestOf(inputs, resolved, null);
   const venue = kitVenue(inputs.venue);
   const { build, timingsMs } = await kitOutputBuild(request, 'svg', options);
   const size = sheetSize(request.sheetSizeId);
@@ -80,20 +81,19 @@ function kitPreviewPrint(request: KitRequest): KitPrintView | { error: string } 
  * Returns the request it was built from too, which names the file.
  */
 export async function kitPreviewFile(inputs: KitInputs, output: KitOutput, options: KitOutputBuildOptions = {}) {
-  const { model } = demoModelResolve(inputs);
-  const request = kitRequestOf(inputs, model, null);
+  const request = kitRequestOf(inputs, demoModelResolve(inputs), null);
   return { request, build: (await kitOutputBuild(request, output, options)).build };
 }
 
 /** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */
 export function kitPatterns(input: z.infer<typeof PatternsRequestSchema>) {
-  const { model } = demoModelResolve(input);
-  const result = modelPatterns(model, {
+  const resolved = demoModelResolve(input);
+  const result = modelPatterns(resolved.model, {
     scaleDenominator: input.scaleDenominator,
     paperGsm: input.paperGsm,
     gradeBand: input.gradeBand,
   });
-  kitScaleGuard(kitRequestOf({ ...input, copies: 1, units: 'metric' }, model, null), result.pieces);
+  kitScaleGuard(kitRequestOf({ ...input, copies: 1, units: 'metric' }, resolved, null), result.pieces);
   return result;
 }
 

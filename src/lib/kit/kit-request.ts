@@ -10,7 +10,7 @@ import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
 import { PRINT_CHOICE_DEFAULT, PRINT_CHOICE_LIMITS, type PrintChoice } from '../layout/print-plate';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
-import { printChoiceSchema } from './kit-settings';
+import { INSTRUCTIONS_PLACE_DEFAULT, INSTRUCTIONS_PLACES, printChoiceSchema } from './kit-settings';
 import { BUILD_GRADE_BAND_DEFAULT, BUILD_GRADE_BANDS } from '../geometry/buildability';
 
 /** Kits per class: one per team; 40 teams is more than any class has (common practice, no source). */
@@ -43,7 +43,7 @@ export const KitRequestSchema = z.object({
     .max(KIT_COPIES_MAX, `copies must be at most ${KIT_COPIES_MAX}`)
     .default(1),
   /** Where the PDF's instructions pages go: before the sheets or after them. */
-  instructionsAt: z.enum(['first', 'last']).default('last'),
+  instructionsAt: z.enum(INSTRUCTIONS_PLACES).default(INSTRUCTIONS_PLACE_DEFAULT),
   /** Units for printed sizes and the check square. */
   units: z.enum(['metric', 'us']).default('metric'),
   /** The class the kit is for: anchor sizes, substitutes for parts too fine for paper, and label sizes follow it. */

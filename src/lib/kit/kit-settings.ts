@@ -27,6 +27,11 @@ export interface KitSettingsLimits<S extends string = string, V extends string =
 const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
 export const KIT_TITLE_MAX_LENGTH = 80;
 
+/** Where the PDF's instructions pages go: before the sheets or after them (the default). */
+export const INSTRUCTIONS_PLACES = ['first', 'last'] as const;
+export type InstructionsPlace = (typeof INSTRUCTIONS_PLACES)[number];
+export const INSTRUCTIONS_PLACE_DEFAULT: InstructionsPlace = 'last';
+
 /** A kit's title, as sent on build, rename and duplicate. */
 export const KitTitleSchema = TextSchema.trim()
   .min(1, 'the title must not be empty')
@@ -112,6 +117,10 @@ export function kitSettingsSchema<S extends string, V extends string, G extends 
     venue: venueChoiceSchema(limits.venueIds),
     /** Bed and nozzle of the STL; the standard bed and a 0.4 mm nozzle when left out. */
     print: printChoiceSchema(limits).optional(),
+    /** Where the PDF's instructions pages go. */
+    instructionsAt: z.enum(INSTRUCTIONS_PLACES, {
+      errorMap: () => ({ message: `the instructions go ${INSTRUCTIONS_PLACES.join(' or ')}` }),
+    }),
     /** The class the kit is for: the solver's minimums and the substitutes follow it. */
     gradeBand: z.enum(limits.gradeBands as [G, ...G[]], {
       errorMap: () => ({ message: `the grade band must be one of ${limits.gradeBands.join(', ')}` }),

@@ -53,7 +53,7 @@ export function kitRequestForRow(row: KitRow): KitRequest {
   if (!model && !demoModelById(modelId ?? '')) {
     throw new ConflictError(`The demo model "${modelId}" of this kit is no longer in the library; build a new kit.`);
   }
-  return kitRequestOf(settings, demoModelResolve({ modelId, model }).model, qrUrl);
+  return kitRequestOf(settings, demoModelResolve({ modelId, model }), qrUrl);
 }
 
 /** The kit if the actor may see it; NotFoundError otherwise. */
@@ -77,7 +77,7 @@ export async function kitSave(actor: Actor, classId: string, inputs: KitInputs, 
   const resolved = demoModelResolve(inputs);
   const id = randomUUID();
   const stored: KitStoredInputs = { ...inputs, qrUrl: kitPageUrl(siteUrl, id) };
-  const request = kitRequestOf(inputs, resolved.model, stored.qrUrl);
+  const request = kitRequestOf(inputs, resolved, stored.qrUrl);
   // Building once proves the kit can be made (sheet limit, piece sizes) and counts its sheets.
   const { build } = await kitOutputBuild(request, 'svg');
   await kitInsert({
