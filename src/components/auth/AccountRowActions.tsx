@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { ROLES, type Role } from '../../lib/auth/actor';
-import { apiSend } from './api-post';
+import { apiSettle } from '../../lib/http/client';
 
 interface Props {
   accountId: string;
@@ -22,18 +22,17 @@ export default function AccountRowActions({ accountId, email, role: initialRole,
   async function change(body: { role?: Role; active?: boolean }) {
     setBusy(true);
     setStatus(null);
-    const result = await apiSend<{ account: { role: Role; active: boolean } }>(
-      'PATCH',
-      `/api/admin/accounts/${accountId}`,
+    const result = await apiSettle<{ account: { role: Role; active: boolean } }>(`/api/admin/accounts/${accountId}`, {
+      method: 'PATCH',
       body,
-    );
+    });
     setBusy(false);
     if (result.ok) {
       setRole(result.data.account.role);
       setActive(result.data.account.active);
       setStatus('Saved.');
     } else {
-      setStatus(result.message);
+      setStatus(result.error.message);
     }
   }
   return (

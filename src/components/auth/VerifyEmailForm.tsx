@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { apiSend } from './api-post';
+import { apiSettle } from '../../lib/http/client';
 import { FormAlert } from './FormAlert';
 
 interface Props {
@@ -17,12 +17,12 @@ export default function VerifyEmailForm({ token }: Props) {
     event.preventDefault();
     setState('busy');
     setError(null);
-    const result = await apiSend<{ message: string }>('POST', '/api/auth/verify-email', { token });
+    const result = await apiSettle<{ message: string }>('/api/auth/verify-email', { body: { token } });
     if (result.ok) {
       setState('done');
       return;
     }
-    setError(result.message);
+    setError(result.error.message);
     setState('idle');
   }
   if (state === 'done') {

@@ -7,11 +7,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
 import type { ZodType, ZodTypeDef } from 'zod';
-import { apiSend } from './api-post';
+import { apiSettle, type ApiInit } from '../../lib/http/client';
 
 interface Options<In extends FieldValues, Out, Res> {
   schema: ZodType<Out, ZodTypeDef, In>;
-  method?: string;
+  method?: ApiInit['method'];
   path: string;
   defaultValues?: DefaultValues<In>;
   /** Extra fields sent with the form's values (a token from the link). */
@@ -32,18 +32,22 @@ export function useApiForm<In extends FieldValues, Out, Res = { message?: string
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
     setSuccess(null);
-    const result = await apiSend<Res>(o.method ?? 'POST', o.path, { ...(values as object), ...o.extra });
+    const result = await apiSettle<Res>(o.path, {
+      method: o.method ?? 'POST',
+      body: { ...(values as object), ...o.extra },
+    });
     if (result.ok) {
       const message = (result.data as { message?: string } | null)?.message;
       if (message) setSuccess(message);
       o.onSuccess?.(result.data, values);
       return;
     }
-    const fieldNames = Object.keys(result.fields).filter((name) => name !== '' && name in (form.getValues() as object));
+    const { fields, status, message } = result.error;
+    const fieldNames = Object.keys(fields).filter((name) => name !== '' && name in (form.getValues() as object));
     for (const name of fieldNames) {
-      form.setError(name as Path<In>, { type: 'server', message: result.fields[name]![0] }, { shouldFocus: true });
+      form.setError(name as Path<In>, { type: 'server', message: fields[name]![0] }, { shouldFocus: true });
     }
-    if (fieldNames.length === 0 || result.status === 429) setFormError(result.message);
+    if (fieldNames.length === 0 || status === 429) setFormError(message);
   });
 
   return { form, onSubmit, formError, success };

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { classCodeFormat, classJoinUrl } from '../../lib/auth/class-code';
-import { apiSend } from '../auth/api-post';
+import { apiSettle } from '../../lib/http/client';
 import { FormAlert } from '../auth/FormAlert';
 
 interface Props {
@@ -18,16 +18,15 @@ export default function RotateCodeButton({ classId, code: initial, siteUrl }: Pr
   async function rotate() {
     if (!window.confirm('Make a new code? Students who joined with the old code will need the new one.')) return;
     setBusy(true);
-    const result = await apiSend<{ joinCode: string; sessionsEnded: number }>(
-      'POST',
-      `/api/classes/${classId}/rotate-code`,
-    );
+    const result = await apiSettle<{ joinCode: string; sessionsEnded: number }>(`/api/classes/${classId}/rotate-code`, {
+      method: 'POST',
+    });
     setBusy(false);
     if (result.ok) {
       setCode(result.data.joinCode);
       setMessage({ kind: 'success', text: `New code ready; ${result.data.sessionsEnded} open device(s) were closed.` });
     } else {
-      setMessage({ kind: 'error', text: result.message });
+      setMessage({ kind: 'error', text: result.error.message });
     }
   }
   return (

@@ -28,35 +28,6 @@ export interface AnalysisAnswer<R> {
   savedResult: SavedResult;
 }
 
-/**
- * CSV bodies: the shared client sends JSON only, so this posts text/csv and maps an error answer to the
- * same ApiError.
- */
-async function csvPost<T>(
-  path: string,
-  csv: string,
-  query: Record<string, string | number | undefined> = {},
-): Promise<T> {
-  const params = new URLSearchParams();
-  for (const [k, v] of Object.entries(query)) if (v !== undefined && v !== '') params.set(k, String(v));
-  let res: Response;
-  try {
-    res = await fetch(params.size ? `${path}?${params}` : path, {
-      method: 'POST',
-      headers: { 'content-type': 'text/csv' },
-      body: csv,
-      credentials: 'same-origin',
-    });
-  } catch {
-    throw new ApiError(0, 'network', 'We could not reach Kitwright. Check your connection and try again.');
-  }
-  const data = (await res.json().catch(() => null)) as
-    (T & { error?: { code?: string; message?: string; fields?: Record<string, string[]> } }) | null;
-  if (res.ok && data) return data;
-  const e = data?.error;
-  throw new ApiError(res.status, e?.code ?? 'unknown', e?.message ?? `The server answered ${res.status}.`, e?.fields);
-}
-
 // Analysis answers depend only on what was sent: nothing to cache or retry.
 const queryClient = new QueryClient({ defaultOptions: { mutations: { retry: false } } });
 
@@ -68,7 +39,10 @@ export function useAnalysis<R>(tool: AnalysisTool) {
       mutationFn: (body) =>
         'json' in body
           ? api<AnalysisAnswer<R>>(`/api/analysis/${tool}`, { method: 'POST', body: body.json })
-          : csvPost<AnalysisAnswer<R>>(`/api/analysis/${tool}`, body.csv, body.query),
+          : api<AnalysisAnswer<R>>(`/api/analysis/${tool}`, {
+              text: { contentType: 'text/csv', data: body.csv },
+              query: body.query,
+            }),
     },
     queryClient,
   );

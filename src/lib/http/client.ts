@@ -1,18 +1,24 @@
 import { PROGRESS_CONTENT_TYPE, type ProgressLine, type StageReport, type StreamedFile } from './progress-lines';
+import type { ErrorBody } from './respond';
 
 /**
- * The islands' small HTTP client for the JSON API: same-site requests with cookies, and any error answer
- * (the shared `{ error: { code, message, fields? } }` body) thrown as an ApiError, so TanStack Query sees
- * a failure and a form can show `fields` next to its inputs. Cancels with an AbortSignal.
+ * The islands' one HTTP client for the API: same-site requests with cookies, and any error answer (the
+ * server's `ErrorBody`, respond.ts) thrown as an ApiError, so TanStack Query sees a failure and a form can
+ * show `fields` next to its inputs. Cancels with an AbortSignal. `apiSettle` gives the same answer as a value
+ * for event handlers that branch on success.
  */
 
-/** A failed API call: HTTP status (0 when the network failed), error code, message and per-field messages. */
+/**
+ * A failed API call: HTTP status (0 when the network failed), error code, message, per-field messages and,
+ * on 429 or 503, how many seconds to wait before trying again.
+ */
 export class ApiError extends Error {
   constructor(
     readonly status: number,
     readonly code: string,
     message: string,
     readonly fields: Record<string, string[]> = {},
+    readonly retryAfterSeconds?: number,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -23,40 +29,67 @@ export interface ApiInit {
   method?: 'GET' | 'POST' | 'PATCH' | 'DELETE';
   /** Sent as JSON. */
   body?: unknown;
+  /** Sent as is with its content type, instead of a JSON body (a CSV file for the data tools). */
+  text?: { contentType: string; data: string };
+  /** Query parameters; empty and undefined values are left out. */
+  query?: Record<string, string | number | undefined>;
   signal?: AbortSignal;
   /** Extra request headers. */
   headers?: Record<string, string>;
 }
 
+const NETWORK_MESSAGE = 'We could not reach Kitwright. Check your connection and try again.';
+
+function withQuery(path: string, query: ApiInit['query']): string {
+  const params = new URLSearchParams();
+  for (const [k, v] of Object.entries(query ?? {})) if (v !== undefined && v !== '') params.set(k, String(v));
+  return params.size ? `${path}?${params}` : path;
+}
+
 async function send(path: string, init: ApiInit): Promise<Response> {
+  const hasBody = init.body !== undefined || init.text !== undefined;
+  const contentType = init.text ? init.text.contentType : 'application/json';
   let res: Response;
   try {
-    res = await fetch(path, {
-      method: init.method ?? (init.body === undefined ? 'GET' : 'POST'),
-      headers: { ...(init.body === undefined ? {} : { 'content-type': 'application/json' }), ...init.headers },
-      body: init.body === undefined ? undefined : JSON.stringify(init.body),
+    res = await fetch(withQuery(path, init.query), {
+      method: init.method ?? (hasBody ? 'POST' : 'GET'),
+      headers: { ...(hasBody ? { 'content-type': contentType } : {}), ...init.headers },
+      body: init.text ? init.text.data : init.body === undefined ? undefined : JSON.stringify(init.body),
       credentials: 'same-origin',
       signal: init.signal,
     });
   } catch (err) {
     if (init.signal?.aborted) throw err;
-    throw new ApiError(0, 'network', 'We could not reach Kitwright. Check your connection and try again.');
+    throw new ApiError(0, 'network', NETWORK_MESSAGE);
   }
   if (res.ok) return res;
-  const data = (await res.json().catch(() => null)) as {
-    error?: { code?: string; message?: string; fields?: Record<string, string[]> };
-  } | null;
+  const error = ((await res.json().catch(() => null)) as Partial<ErrorBody> | null)?.error;
+  const retry = Number(res.headers.get('retry-after'));
   throw new ApiError(
     res.status,
-    data?.error?.code ?? 'unknown',
-    data?.error?.message ?? `The server answered ${res.status}.`,
-    data?.error?.fields ?? {},
+    error?.code ?? 'unknown',
+    error?.message ?? `The server answered ${res.status}.`,
+    error?.fields ?? {},
+    Number.isFinite(retry) && retry > 0 ? retry : undefined,
   );
 }
 
 /** Calls a JSON endpoint and returns its parsed body; throws ApiError on an error answer. */
 export async function api<T>(path: string, init: ApiInit = {}): Promise<T> {
   return (await (await send(path, init)).json()) as T;
+}
+
+/** An API answer as a value: the data, or the ApiError the call would have thrown. */
+export type ApiSettled<T> = { ok: true; data: T } | { ok: false; error: ApiError };
+
+/** Calls a JSON endpoint like `api`, but answers errors as a value instead of throwing them. */
+export async function apiSettle<T>(path: string, init: ApiInit = {}): Promise<ApiSettled<T>> {
+  try {
+    return { ok: true, data: await api<T>(path, init) };
+  } catch (err) {
+    if (err instanceof ApiError) return { ok: false, error: err };
+    throw err;
+  }
 }
 
 /**
