@@ -38,7 +38,14 @@ export default tseslint.config(
     },
   },
   {
-    files: ['src/lib/geometry/**', 'src/lib/layout/**', 'src/lib/render/**', 'src/lib/analysis/**', 'src/lib/kit/**'],
+    files: [
+      'src/lib/geometry/**',
+      'src/lib/layout/**',
+      'src/lib/render/**',
+      'src/lib/analysis/**',
+      'src/lib/kit/**',
+      'src/lib/journal/**',
+    ],
     ignores: ['**/*.server.ts'],
     rules: { 'no-restricted-imports': ['error', PURE_RESTRICTIONS] },
   },
