@@ -11,7 +11,7 @@
  */
 import { fileTypeFromBuffer } from 'file-type';
 import pLimit from 'p-limit';
-import sharp from 'sharp';
+import sharp, { type Sharp } from 'sharp';
 import { InputError } from '../errors';
 import {
   PHOTO_ACCEPTED_SENTENCE,
@@ -107,7 +107,7 @@ export function polyglotSignatureFind(bytes: Buffer): string | null {
   return POLYGLOT_SIGNATURES.find((s) => text.includes(s)) ?? null;
 }
 
-async function copyOf(pipeline: sharp.Sharp, maxPx: number, quality: number): Promise<PhotoCopy> {
+async function copyOf(pipeline: Sharp, maxPx: number, quality: number): Promise<PhotoCopy> {
   const { data, info } = await pipeline
     .resize({ width: maxPx, height: maxPx, fit: 'inside', withoutEnlargement: true })
     .jpeg({ quality })
