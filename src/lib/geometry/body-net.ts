@@ -12,9 +12,10 @@ import { bodyFaces, type BodyFace } from './body-shape';
 import { faceFrame, pieceFromNet, type NetFace, type NetTab } from './piece-builder';
 import { netEdgeLabel, netGluePair, tabFoldAngle, type NetEdge } from './net-glue';
 import { paperTabDepthMm } from './paper';
-import { BUILD_GRADE_BAND_FLOOR, BUILDABILITY_MINIMUMS } from './buildability';
+import { BUILD_GRADE_BAND_FLOOR, BUILDABILITY_MINIMUMS, type BuildGradeBand } from './buildability';
 import { bodyRingTeeth } from './body-ring';
-import type { EdgeLabel, Piece, PlaneFrame, Vec2Mm } from './types';
+import { bodyPatternShape } from './body-pattern-facets';
+import type { EdgeLabel, Piece, PlaneFrame, Vec2Mm, Vec3Mm } from './types';
 import { pointsBounds, vec2Length, vec2Sub, vec3Dot, vec3Sub } from './vec';
 
 /** Most sides for which the caps hinge to the wall strip (one-piece net); above it caps are separate pieces. */
@@ -27,23 +28,37 @@ export const BODY_HINGED_CAP_SIDES_MAX = 8;
  */
 export const BODY_ONE_PIECE_MAX_MM = [190, 259.4] as const;
 
+export interface BodySpot {
+  piece: Piece;
+  frame: PlaneFrame;
+}
+
 export interface BodyNet {
   /** The wall strip (the whole net when the caps hinge to it) first, then the separate caps if any. */
   pieces: Piece[];
-  /** Where each body face lies ("side:0", "top", …): its piece and the flat ↦ model frame of that face. */
-  faceSpots: Map<string, { piece: Piece; frame: PlaneFrame }>;
+  /** Where each face of the pattern lies ("side:0", "top", …): its piece and the flat ↦ model frame of it. */
+  faceSpots: Map<string, BodySpot>;
+  /** The model's own faces (full facet count), where appendages stand. */
   faces: BodyFace[];
+  /** The pattern face holding `pointMm` (model mm) of the model's face `ref`, for marks glued there. */
+  faceSpotAt(ref: string, pointMm: Vec3Mm): BodySpot;
 }
 
-/** The body pattern at 1:scaleDenominator on paper of `gsm`; tab numbers come from `nextNumber`, in order. */
+/**
+ * The body pattern at 1:scaleDenominator on paper of `gsm` for a class of `band`, with a cylinder's facets
+ * capped by bodyPatternFacets; tab numbers come from `nextNumber`, in order.
+ */
 export function bodyNet(
   body: Body,
   scaleDenominator: number,
   gsm: number,
+  band: BuildGradeBand,
   nextNumber: () => number,
   assemblyStep: number,
 ): BodyNet {
-  const faces = bodyFaces(body, scaleDenominator);
+  const shape = bodyPatternShape(body, scaleDenominator, band);
+  const faces = bodyFaces(shape, scaleDenominator);
+  const modelFaces = shape === body ? faces : bodyFaces(body, scaleDenominator);
   const n = faces.length - 2;
   const hinged = n <= BODY_HINGED_CAP_SIDES_MAX ? bodyNetHinged(faces, gsm, assemblyStep) : null;
   const built =
@@ -60,9 +75,15 @@ export function bodyNet(
     edgeLabels: p.edgeLabels.map((l) => ({ ...l, number: global.get(l.number)! })),
   });
   const pieces = built.pieces.map(renumber);
-  const faceSpots = new Map<string, { piece: Piece; frame: PlaneFrame }>();
+  const faceSpots = new Map<string, BodySpot>();
   built.spots.forEach((s, i) => faceSpots.set(faces[i]!.ref, { piece: pieces[s.piece]!, frame: s.frame }));
-  return { pieces, faceSpots, faces };
+  const faceSpotAt = (ref: string, pointMm: Vec3Mm): BodySpot => {
+    if (shape === body || !ref.startsWith('side:')) return faceSpots.get(ref)!;
+    // Pattern wall j spans azimuths (2j ∓ 1)π/n about its centre 2jπ/n (bodyBaseM's corners).
+    const j = Math.round((Math.atan2(pointMm[1], pointMm[0]) * n) / (2 * Math.PI));
+    return faceSpots.get(`side:${((j % n) + n) % n}`)!;
+  };
+  return { pieces, faceSpots, faces: modelFaces, faceSpotAt };
 }
 
 interface BuiltNet {

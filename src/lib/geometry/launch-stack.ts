@@ -9,6 +9,7 @@ import { STACK_DRUM_FACETS } from './model-schema';
 import { bodyBaseM, bodyFaces } from './body-shape';
 import { bodyNet } from './body-net';
 import type { Piece, Vec3Mm } from './types';
+import type { BuildGradeBand } from './buildability';
 
 export type StackPartRole = 'adapter' | 'ring' | 'probe';
 
@@ -56,13 +57,16 @@ export function launchStackParts(probe: Body, stack: LaunchStack): StackPart[] {
   return parts;
 }
 
-/** Every piece of a stack model at 1:scaleDenominator: each part's body net lifted to its place, bottom first. */
-export function launchStackPieces(model: Model, scaleDenominator: number, gsm: number): Piece[] {
+/**
+ * Every piece of a stack model at 1:scaleDenominator for a class of `band`: each part's body net lifted to its
+ * place, bottom first.
+ */
+export function launchStackPieces(model: Model, scaleDenominator: number, gsm: number, band: BuildGradeBand): Piece[] {
   const k = 1000 / scaleDenominator;
   let number = 0;
   const next = () => ++number;
   return launchStackParts(model.body, model.stack!).flatMap((part, i) =>
-    bodyNet(part.body, scaleDenominator, gsm, next, i + 1).pieces.map((p): Piece => ({
+    bodyNet(part.body, scaleDenominator, gsm, band, next, i + 1).pieces.map((p): Piece => ({
       ...p,
       id: `${part.id}-${p.id}`,
       partId: part.id,

@@ -53,17 +53,17 @@ export interface ModelPatterns {
 /** Every piece and thread of a parsed model at options.scaleDenominator on options.paperGsm paper. */
 export function modelPatterns(model: Model, options: PatternOptions): ModelPatterns {
   const { scaleDenominator: N, paperGsm: gsm } = options;
-  if (model.stack) return { pieces: launchStackPieces(model, N, gsm), threads: [], substitutes: [] };
   const band = options.gradeBand ?? BUILD_GRADE_BAND_DEFAULT;
+  if (model.stack) return { pieces: launchStackPieces(model, N, gsm, band), threads: [], substitutes: [] };
   const k = 1000 / N;
   const substitutes: PartSubstitute[] = [];
   let number = 0;
   const next = () => ++number;
-  const body = bodyNet(model.body, N, gsm, next, 1);
+  const body = bodyNet(model.body, N, gsm, band, next, 1);
   const pieces: Piece[] = [...body.pieces];
   // Marks for parts glued onto a body face go on whichever body piece holds that face.
   const markFace = (ref: string, pointMm: Vec3Mm, num: number) => {
-    const spot = body.faceSpots.get(ref)!;
+    const spot = body.faceSpotAt(ref, pointMm);
     spot.piece.edgeLabels.push(panelBodyLabel(spot.frame, pointMm, num));
   };
   const threads: WireBoomThread[] = [];

@@ -56,6 +56,8 @@ describe('bodyNet (through modelPatterns)', () => {
       const m = model({ body: { kind: 'cylinder', diameterM: 0.5, heightM: 0.15, facets } });
       const [wall, top] = bodyPieces(m, 5);
       const H = wall!.hinge.faces[0]!.polygonMm[2]![1];
+      // Teeth per wall the pattern uses: at 1:5 the 64- and 256-facet cylinders are capped (bodyPatternFacets).
+      const n = wall!.hinge.faces.length;
       const cap = top!.hinge.faces[0]!.polygonMm.map(
         (p) => [Math.round(p[0] * 1e6) / 1e6, Math.round(p[1] * 1e6) / 1e6] as [number, number],
       );
@@ -63,7 +65,7 @@ describe('bodyNet (through modelPatterns)', () => {
       // away from it it goes toward the cap centre (cap flat = model x, y about the axis).
       const teeth = wall!.hinge.faces.map((f, j) => {
         const [x0, x1] = [f.polygonMm[0]![0], f.polygonMm[1]![0]];
-        const [a, b] = [cap[j]!, cap[(j + 1) % facets]!];
+        const [a, b] = [cap[j]!, cap[(j + 1) % n]!];
         const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
         const u = [(b[0] - a[0]) / len, (b[1] - a[1]) / len];
         const inward = [-u[1]!, u[0]!];
@@ -81,9 +83,9 @@ describe('bodyNet (through modelPatterns)', () => {
             ] as [number, number],
         );
       });
-      for (let j = 0; j < facets; j++) {
+      for (let j = 0; j < n; j++) {
         const tooth = teeth[j]!,
-          next = teeth[(j + 1) % facets]!;
+          next = teeth[(j + 1) % n]!;
         expect(
           areaOf(polygonClipping.intersection(clip(tooth), clip(next))),
           `${facets}: teeth ${j}, ${j + 1}`,
