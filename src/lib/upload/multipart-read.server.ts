@@ -101,8 +101,10 @@ export async function multipartRead<T>(
       if (failure !== undefined) return;
       failure = err;
       source.unpipe(parser);
-      source.destroy();
       for (const stream of open) stream.destroy(err instanceof Error ? err : undefined);
+      // Read the rest of the body and drop it (the data listener still stops it past the request limit), so the
+      // client gets the error answer on a connection that stays usable instead of a reset mid-upload.
+      source.resume();
       reject(err);
     };
 
@@ -110,6 +112,7 @@ export async function multipartRead<T>(
       received += chunk.byteLength;
       if (received > limits.requestBytesMax) {
         fail(new PayloadTooLargeError(requestTooLargeMessage(limits.requestBytesMax, noun)));
+        source.destroy();
       }
     });
     source.on('error', (err) => fail(new InputError(`The upload was cut off before it ended (${err.message}).`)));
