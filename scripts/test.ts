@@ -95,6 +95,9 @@ async function main(): Promise<void> {
   // A build folder of this run's own (ignored by git, ESLint and Prettier), so npm start's dist and another
   // run on another KW_TEST_PORT are never overwritten mid-run.
   process.env.KW_OUT_DIR ??= `dist-test-${port}`;
+  // Uploaded photos of this run, beside its fresh database (the seed, the server and the tests all read it).
+  process.env.KW_STORAGE_DIR ??= join(PROJECT_ROOT, '.data', `uploads-test-${port}`);
+  rmSync(process.env.KW_STORAGE_DIR, { recursive: true, force: true });
 
   if (only.length > 0) console.log(`[test] only ${only.join(' ')}: lint and type checks skipped`);
   else {

@@ -165,6 +165,29 @@ const ROWS: Row[] = [
     path: `/api/kits/${MISSING}/duplicate`,
     expect: accounts(404, 404, 403, 403),
   },
+  // Photos. A missing entry or photo id: admitted visitors get 404 (or 400 for an invalid body), the rest 401/403.
+  // (Who sees an unpublished entry's photos, with real photos, is tested in tests/api/photos.test.ts.)
+  {
+    route: '/api/entries/[id]/photos',
+    method: 'POST',
+    path: `/api/entries/${MISSING}/photos`,
+    expect: { ...accounts(404, 404, 403, 403), classSession: 404 },
+  },
+  { route: '/api/photos/[id]', method: 'GET', path: `/api/photos/${MISSING}`, expect: all(404) },
+  {
+    route: '/api/photos/[id]',
+    method: 'PATCH',
+    path: `/api/photos/${MISSING}`,
+    body: {},
+    expect: { ...accounts(400, 400, 403, 403), classSession: 400 },
+  },
+  {
+    route: '/api/photos/[id]',
+    method: 'DELETE',
+    path: `/api/photos/${MISSING}`,
+    expect: { ...accounts(404, 404, 403, 403), classSession: 404 },
+  },
+  { route: '/api/photos/[id]/thumbnail', method: 'GET', path: `/api/photos/${MISSING}/thumbnail`, expect: all(404) },
 ];
 
 const API_DIR = join(process.cwd(), 'src', 'pages', 'api');

@@ -54,7 +54,10 @@ export interface EntryPhotoView {
   id: string;
   entryId: string;
   altText: string;
+  /** The stored copies' type (JPEG). */
   contentType: string;
+  /** What the upload really was, from its bytes. */
+  sourceType: string;
   widthPx: number;
   heightPx: number;
   thumbnailWidthPx: number;
