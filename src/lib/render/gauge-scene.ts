@@ -7,7 +7,7 @@ import { CUT_GAUGE_HEIGHT_MM, CUT_GAUGE_TEXT_MM, cutGaugeCaption } from '../layo
 import type { LaidOutSheet } from '../layout/types';
 import type { Vec2Mm } from '../geometry/types';
 import { TEXT_COLOR } from './line-styles';
-import type { SceneStroke, SceneText } from './sheet-scene';
+import type { SceneStroke, SceneText } from './scene-types';
 
 const TICK_MM = 1.6;
 const TICK_LONG_MM = 2.6;

@@ -8,7 +8,8 @@ import type { RectMm } from '../layout/types';
 import { assemblySteps } from '../preview/assembly-steps';
 import { FOLD_WORDS, foldWordsLine } from './fold-words';
 import type { LabelMeasure } from './label-placement';
-import { sceneWrapWords, type SceneText } from './sheet-scene';
+import { sceneWrapWords } from './scene-footer';
+import type { SceneText } from './scene-types';
 import { stepDrawing, type StepDrawingShape } from './step-drawing';
 
 export interface InstructionsPage {

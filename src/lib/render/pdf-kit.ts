@@ -12,7 +12,8 @@ import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { pieceLines } from './piece-lines';
 import { pdfFontsAdd, pdfFontUse } from './pdf-fonts';
 import type { PdfFonts } from './pdf-fonts';
-import { sheetScene, type SceneText } from './sheet-scene';
+import { sheetScene } from './sheet-scene';
+import type { SceneText } from './scene-types';
 import { instructionsPages, type InstructionsPage } from './instructions-page';
 
 export type { PdfFonts } from './pdf-fonts';

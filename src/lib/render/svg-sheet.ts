@@ -12,7 +12,7 @@ import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { pieceLines } from './piece-lines';
 import type { PiecePointTransform } from './piece-lines';
 import { sheetScene } from './sheet-scene';
-import type { SceneStroke } from './sheet-scene';
+import type { SceneStroke } from './scene-types';
 import { textWidthMm } from './text-width';
 
 /**

@@ -5,7 +5,7 @@ import { placementApply } from '../../../src/lib/layout/placement';
 import { glueMarkTurned, glueMarkUnderlined } from '../../../src/lib/render/glue-marks';
 import { LABEL_BOX_HEIGHT_EM, labelBox, labelPointInside } from '../../../src/lib/render/label-placement';
 import { sheetScene } from '../../../src/lib/render/sheet-scene';
-import type { SceneText } from '../../../src/lib/render/sheet-scene';
+import type { SceneText } from '../../../src/lib/render/scene-types';
 import { textWidthMm } from '../../../src/lib/render/text-width';
 import { multiPolygonArea, ringArea } from '../layout/polygon-area';
 import { SWEEP_CASES, SWEEP_MARKS_TOO_SMALL, demoKit } from './demo-kits';

@@ -8,7 +8,7 @@ import { LABEL_BOX_HEIGHT_EM, labelBox } from '../../../src/lib/render/label-pla
 import { LINE_STYLES } from '../../../src/lib/render/line-styles';
 import { pieceLines } from '../../../src/lib/render/piece-lines';
 import { sheetScene } from '../../../src/lib/render/sheet-scene';
-import type { SceneText } from '../../../src/lib/render/sheet-scene';
+import type { SceneText } from '../../../src/lib/render/scene-types';
 import { textWidthMm } from '../../../src/lib/render/text-width';
 import { multiPolygonArea } from '../layout/polygon-area';
 import { SWEEP_CASES, SWEEP_CLEARANCE_TOO_SMALL, demoKit } from './demo-kits';

@@ -5,13 +5,9 @@ import { sheetPack } from '../../../src/lib/layout/sheet-packer';
 import { SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
 import type { KitLayout } from '../../../src/lib/layout/types';
 import { LABEL_BOX_HEIGHT_EM, labelBox } from '../../../src/lib/render/label-placement';
-import {
-  QR_CAPTION,
-  QR_PREVIEW_NOTE,
-  sceneLabelAbbreviations,
-  sceneWrapWords,
-  sheetScene,
-} from '../../../src/lib/render/sheet-scene';
+import { sheetScene } from '../../../src/lib/render/sheet-scene';
+import { QR_CAPTION, QR_PREVIEW_NOTE, sceneWrapWords } from '../../../src/lib/render/scene-footer';
+import { sceneLabelAbbreviations } from '../../../src/lib/render/scene-piece-labels';
 import { textWidthMm } from '../../../src/lib/render/text-width';
 import { demoModel } from '../geometry/fixtures';
 import { multiPolygonArea } from '../layout/polygon-area';
