@@ -45,6 +45,7 @@ export default tseslint.config(
       'src/lib/analysis/**',
       'src/lib/kit/**',
       'src/lib/journal/**',
+      'src/lib/reach/**',
     ],
     ignores: ['**/*.server.ts'],
     rules: { 'no-restricted-imports': ['error', PURE_RESTRICTIONS] },

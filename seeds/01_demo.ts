@@ -14,6 +14,7 @@ import { KitInputsSchema, kitRequestOf } from '../src/lib/kit/kit-inputs';
 import { ModelContentSchema } from '../src/lib/geometry/model-schema';
 import { DEMO_ACCOUNTS } from './data/demo-accounts';
 import { seedDemoEvents } from './data/demo-events';
+import { seedDemoReach } from './data/demo-reach';
 
 const SCHOOLS = [
   {
@@ -203,6 +204,8 @@ export async function seed(knex: Knex): Promise<void> {
     userByEmail: userBy,
     kitId: engineeringKit?.id ?? null,
   });
+
+  await seedDemoReach(knex);
 }
 
 interface DemoKit {

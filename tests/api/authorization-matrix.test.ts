@@ -57,6 +57,7 @@ const accounts = (teacher: number, otherTeacher: number, coordinator: number, ad
   admin,
 });
 const adminOnly = (status: number) => accounts(403, 403, 403, status);
+const staffOnly = (status: number) => accounts(403, 403, status, status);
 /** A well-formed id that no row has. */
 const MISSING = '00000000-0000-4000-8000-000000000000';
 
@@ -91,6 +92,23 @@ const ROWS: Row[] = [
   { route: '/api/admin/audit', method: 'GET', expect: adminOnly(200) },
   // Schools
   { route: '/api/schools', method: 'GET', expect: all(200) },
+  { route: '/api/schools/directory', method: 'GET', expect: staffOnly(200) },
+  { route: '/api/schools/proposals', method: 'GET', expect: staffOnly(200) },
+  { route: '/api/schools/[id]', method: 'GET', path: `/api/schools/${MISSING}`, expect: staffOnly(404) },
+  { route: '/api/schools/[id]', method: 'PATCH', path: `/api/schools/${MISSING}`, body: {}, expect: staffOnly(400) },
+  {
+    route: '/api/schools/[id]/merge',
+    method: 'POST',
+    path: `/api/schools/${MISSING}/merge`,
+    body: {},
+    expect: staffOnly(400),
+  },
+  // Reach: coordinators and admins; without a period the query is invalid
+  ...['figures', 'breakdown', 'breakdown.csv', 'rows', 'rows.csv'].map((name): Row => ({
+    route: `/api/reach/${name}`,
+    method: 'GET',
+    expect: staffOnly(400),
+  })),
   // Classes
   { route: '/api/classes', method: 'GET', expect: accounts(200, 200, 200, 200) },
   { route: '/api/classes', method: 'POST', body: {}, expect: accounts(400, 400, 403, 403) },

@@ -3,6 +3,7 @@
  * student devices. Cookies are HttpOnly, SameSite=Lax, Secure outside local development, path "/".
  */
 import type { APIContext, AstroCookieSetOptions } from 'astro';
+import { accountSignInDayRecord } from '../db/account-sign-in-days';
 import { classSessionDelete, classSessionInsert } from '../db/classes';
 import { CLASS_SESSION_COOKIE, CLASS_SESSION_HOURS, cookieSecure } from './cookies';
 import { lucia } from './lucia.server';
@@ -14,9 +15,10 @@ function luciaCookieSet(context: CookieContext, cookie: { name: string; value: s
   context.cookies.set(cookie.name, cookie.value, cookie.attributes as AstroCookieSetOptions);
 }
 
-/** Opens a lucia session for the account and sets its cookie; returns the session id. */
+/** Opens a lucia session for the account, notes the day for reach, sets its cookie; returns the session id. */
 export async function userSessionStart(context: CookieContext, userId: string): Promise<string> {
   const session = await lucia().createSession(userId, {});
+  await accountSignInDayRecord(userId);
   luciaCookieSet(context, lucia().createSessionCookie(session.id));
   return session.id;
 }

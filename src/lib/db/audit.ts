@@ -14,6 +14,9 @@ export type AuditAction =
   | 'invitation.sent'
   | 'invitation.accepted'
   | 'school.proposed'
+  | 'school.updated'
+  | 'school.accepted'
+  | 'school.merged'
   | 'class.created'
   | 'class.updated'
   | 'class.code_rotated';

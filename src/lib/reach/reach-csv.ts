@@ -1,0 +1,38 @@
+/**
+ * CSV exports of the reach tables: papaparse's unparse, a header row, UTF-8 with a byte-order mark (so a
+ * spreadsheet opens accented names correctly), and papaparse's escapeFormulae so a cell starting with
+ * = + - @ (or a tab or carriage return) is prefixed with ' and read as text, not run as a formula
+ * (OWASP, "CSV Injection").
+ */
+import Papa from 'papaparse';
+import { REACH_FIGURES } from './figures';
+
+export const CSV_BOM = '\uFEFF';
+
+/** A CSV file of the header and rows. */
+export function csvFile(header: string[], rows: (string | number)[][]): string {
+  return CSV_BOM + Papa.unparse({ fields: header, data: rows }, { escapeFormulae: true, newline: '\r\n' });
+}
+
+/** The breakdown table as CSV: the group column as the table names it, then every figure by its label. */
+export function reachBreakdownCsv(
+  groupHeading: string,
+  rows: { groupLabel: string; values: Record<string, number> }[],
+): string {
+  return csvFile(
+    [groupHeading, ...REACH_FIGURES.map((f) => f.label)],
+    rows.map((r) => [r.groupLabel, ...REACH_FIGURES.map((f) => r.values[f.id] ?? 0)]),
+  );
+}
+
+/** The drill-down table as CSV. */
+export function reachRowsCsv(
+  amountHeading: string | null,
+  rows: { at: string; item: string; amount: number; schoolName: string | null }[],
+): string {
+  const header = ['Date (UTC)', 'What', 'School', ...(amountHeading ? [amountHeading] : [])];
+  return csvFile(
+    header,
+    rows.map((r) => [r.at.slice(0, 10), r.item, r.schoolName ?? '', ...(amountHeading ? [r.amount] : [])]),
+  );
+}
