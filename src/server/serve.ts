@@ -11,6 +11,9 @@
  *    streamed NDJSON answer so each stage line reaches the client when it happens, then into Astro.
  * 3. The client's address is the socket's: an X-Forwarded-For header is dropped before Astro reads it (Astro
  *    would report its leftmost entry as clientAddress) unless TRUST_PROXY says proxies of ours put it there.
+ * 4. Under /api/ every answer is JSON, also where Astro is never asked (src/lib/http/raw-target.ts): a target whose
+ *    encoded dot segments climb out of /api/ is a JSON 404, and a request node:http cannot parse a JSON 400/431.
+ *    An absolute-form target (`GET http://host/path`) is served as its path; one that is no path at all is a 400.
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import { fileURLToPath } from 'node:url';
@@ -18,6 +21,15 @@ import compression from 'compression';
 import sirv from 'sirv';
 import { trustedProxyHops } from '../lib/auth/client-ip.server';
 import { PROGRESS_CONTENT_TYPE } from '../lib/http/progress-lines';
+import {
+  clientErrorAnswer,
+  rawTargetAnswer,
+  rawTargetLeavesApi,
+  rawTargetOriginForm,
+  rawTargetUnusable,
+} from '../lib/http/raw-target';
+import { requestIdNew } from '../lib/http/request-id';
+import { pageSecurityHeaders } from '../lib/http/security-headers';
 
 /** Cache-Control of hashed build assets: a new build gives a changed file a new name. */
 export const IMMUTABLE_CACHE_CONTROL = 'public, max-age=31536000, immutable';
@@ -63,15 +75,57 @@ function flushStreamedLines(res: ServerResponse & { flush?: () => void }): void 
   }) as ServerResponse['write'];
 }
 
+const SECURITY_HEADERS = pageSecurityHeaders(process.env.SITE_URL);
+
+/**
+ * Puts the request-target in origin-form (an absolute-form target becomes its path, its authority the Host), and
+ * answers a target that is no path, or an /api/ target that climbs out of /api/, with the API's JSON error; true
+ * when it answered.
+ */
+function targetRefused(req: IncomingMessage, res: ServerResponse): boolean {
+  const absolute = rawTargetOriginForm(req.url ?? '');
+  if (absolute) {
+    req.url = absolute.path;
+    req.headers.host = absolute.host;
+  }
+  const target = req.url ?? '';
+  const requestId = requestIdNew();
+  const refusal = !target.startsWith('/')
+    ? rawTargetUnusable(target, requestId)
+    : rawTargetLeavesApi(target)
+      ? rawTargetAnswer(target, requestId)
+      : null;
+  if (!refusal) return false;
+  const { status, body } = refusal;
+  res.writeHead(status, {
+    ...SECURITY_HEADERS,
+    'content-type': 'application/json; charset=utf-8',
+    'cache-control': 'no-store',
+    'x-request-id': requestId,
+  });
+  res.end(body);
+  return true;
+}
+
 const hops = trustedProxyHops();
 const server = createServer((req, res) => {
   if (hops === 0) delete req.headers['x-forwarded-for'];
+  if (targetRefused(req, res)) return;
   assets(req, res, () => {
     compress(req as Parameters<typeof compress>[0], res as Parameters<typeof compress>[1], () => {
       flushStreamedLines(res);
       void astro(req, res);
     });
   });
+});
+
+// A request node cannot parse: a JSON 400 (431 for an oversize head) instead of node's empty one.
+server.on('clientError', (err: NodeJS.ErrnoException, socket) => {
+  if (err.code === 'ECONNRESET' || !socket.writable) {
+    socket.destroy();
+    return;
+  }
+  socket.end(clientErrorAnswer(err.code, requestIdNew()));
 });
 
 const host = process.env.HOST ?? '127.0.0.1';

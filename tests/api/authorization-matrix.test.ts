@@ -11,12 +11,11 @@
  * changes, while a visitor the route does not admit gets 401 (anonymous), 403 (wrong role or a class
  * session) or 404 (someone else's class). Every request gets fresh sessions, so sign-out rows do no harm.
  */
-import { readdirSync, readFileSync } from 'node:fs';
-import { join, relative } from 'node:path';
 import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { api, BASE_URL } from './harness';
+import { routesOnDisk } from './routes-on-disk';
 import {
   accountCreate,
   classCreateDirect,
@@ -109,6 +108,8 @@ const ROWS: Row[] = [
     method: 'GET',
     expect: staffOnly(400),
   })),
+  // Activities: the library, open to anyone
+  { route: '/api/activities', method: 'GET', expect: all(200) },
   // Classes
   { route: '/api/classes', method: 'GET', expect: accounts(200, 200, 200, 200) },
   { route: '/api/classes', method: 'POST', body: {}, expect: accounts(400, 400, 403, 403) },
@@ -207,30 +208,6 @@ const ROWS: Row[] = [
   },
   { route: '/api/photos/[id]/thumbnail', method: 'GET', path: `/api/photos/${MISSING}/thumbnail`, expect: all(404) },
 ];
-
-const API_DIR = join(process.cwd(), 'src', 'pages', 'api');
-const METHOD_EXPORT = /export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE|ALL)\b/g;
-
-/** Every route file under src/pages/api as Astro names it, with the methods it exports. */
-function routesOnDisk(): { route: string; method: string }[] {
-  const found: { route: string; method: string }[] = [];
-  const walk = (dir: string) => {
-    for (const entry of readdirSync(dir, { withFileTypes: true })) {
-      // Astro leaves files and folders whose name starts with "_" out of routing.
-      if (entry.name.startsWith('_')) continue;
-      const full = join(dir, entry.name);
-      if (entry.isDirectory()) walk(full);
-      else if (/\.(ts|js|mjs)$/.test(entry.name) && !entry.name.endsWith('.d.ts')) {
-        const route = ('/api/' + relative(API_DIR, full).replace(/\\/g, '/'))
-          .replace(/\.(ts|js|mjs)$/, '')
-          .replace(/\/index$/, '');
-        for (const m of readFileSync(full, 'utf8').matchAll(METHOD_EXPORT)) found.push({ route, method: m[1]! });
-      }
-    }
-  };
-  walk(API_DIR);
-  return found;
-}
 
 let knex: Knex;
 let fixtures: Fixtures;

@@ -1,9 +1,12 @@
 /**
- * Deletes expired account sessions, class sessions and old rate-limit counters now and then, so the tables
+ * Deletes expired account sessions, class sessions, old rate-limit counters and long-idle sign-in lockout rows
+ * (sign-in-lockout.ts) now and then, so the tables
  * stay small without a scheduler: about one sign-in or join in HOUSEKEEPING_EVERY runs it, in the background.
  */
 import { db } from '../db/knex';
 import { rateLimitPrune } from '../db/rate-limits';
+import { signInLockoutPrune } from '../db/sign-in-lockouts';
+import { SIGN_IN_LOCKOUT_FORGET_SECONDS } from './sign-in-lockout';
 import { lucia } from './lucia.server';
 
 const HOUSEKEEPING_EVERY = 200;
@@ -20,5 +23,6 @@ export function housekeepingMaybe(requestId: string, random: () => number = Math
     await lucia().deleteExpiredSessions();
     await db()('class_sessions').where('expires_at', '<=', db().fn.now()).delete();
     await rateLimitPrune(COUNTER_MAX_AGE_SECONDS);
+    await signInLockoutPrune(SIGN_IN_LOCKOUT_FORGET_SECONDS);
   })().catch((err: unknown) => console.error(`[${requestId}] housekeeping failed`, err));
 }

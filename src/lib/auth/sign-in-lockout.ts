@@ -16,6 +16,12 @@ export const SIGN_IN_FIRST_LOCK_SECONDS = 60;
 /** The longest lock, seconds (a day): a reset-by-mail ends it at once. */
 export const SIGN_IN_LONGEST_LOCK_SECONDS = 24 * 60 * 60;
 
+/**
+ * A row with no wrong password for this long, and no lock still running, is forgotten by housekeeping: the table
+ * keeps only addresses guessed at lately. A week is seven times the longest lock. // common practice, no source
+ */
+export const SIGN_IN_LOCKOUT_FORGET_SECONDS = 7 * 24 * 60 * 60;
+
 /** How long sign-in stays locked after the given count of consecutive failures (0: not locked). */
 export function signInLockSeconds(failures: number): number {
   if (failures < SIGN_IN_FREE_FAILURES) return 0;

@@ -40,3 +40,11 @@ export async function signInFailureRecord(
 export async function signInLockoutClear(email: string, trx: Knex = db()): Promise<void> {
   await trx('sign_in_lockouts').where({ email }).delete();
 }
+
+/** Deletes rows idle longer than idleSeconds whose lock (if any) has ended; returns how many went. */
+export async function signInLockoutPrune(idleSeconds: number, trx: Knex = db()): Promise<number> {
+  return trx('sign_in_lockouts')
+    .where('updated_at', '<', trx.raw('now() - make_interval(secs => ?)', [idleSeconds]))
+    .andWhere((q) => q.whereNull('locked_until').orWhere('locked_until', '<=', trx.fn.now()))
+    .delete();
+}
