@@ -46,6 +46,7 @@ export default tseslint.config(
       'src/lib/kit/**',
       'src/lib/journal/**',
       'src/lib/reach/**',
+      'src/lib/mesh/**',
     ],
     ignores: ['**/*.server.ts'],
     rules: { 'no-restricted-imports': ['error', PURE_RESTRICTIONS] },
