@@ -207,6 +207,70 @@ const ROWS: Row[] = [
     expect: { ...accounts(404, 404, 403, 403), classSession: 404 },
   },
   { route: '/api/photos/[id]/thumbnail', method: 'GET', path: `/api/photos/${MISSING}/thumbnail`, expect: all(404) },
+  // Journal entries and review. Rows with [id] use an entry id that does not exist: admitted visitors get 404.
+  // (Who sees which real entry is tested in tests/api/entries.test.ts.)
+  {
+    route: '/api/entries',
+    method: 'GET',
+    expect: { anonymous: 401, classSession: 200, teacher: 200, otherTeacher: 200, coordinator: 400, admin: 400 },
+  },
+  { route: '/api/entries', method: 'POST', body: {}, expect: { ...accounts(400, 400, 403, 403), classSession: 400 } },
+  { route: '/api/entries/[id]', method: 'GET', path: `/api/entries/${MISSING}`, expect: all(404) },
+  {
+    route: '/api/entries/[id]',
+    method: 'PATCH',
+    path: `/api/entries/${MISSING}`,
+    body: {},
+    expect: { ...accounts(400, 400, 403, 403), classSession: 400 },
+  },
+  {
+    route: '/api/entries/[id]',
+    method: 'DELETE',
+    path: `/api/entries/${MISSING}`,
+    expect: { ...accounts(404, 404, 403, 403), classSession: 404 },
+  },
+  {
+    route: '/api/entries/[id]/submit',
+    method: 'POST',
+    path: `/api/entries/${MISSING}/submit`,
+    body: {},
+    expect: { ...accounts(404, 404, 403, 403), classSession: 404 },
+  },
+  {
+    route: '/api/entries/[id]/approve',
+    method: 'POST',
+    path: `/api/entries/${MISSING}/approve`,
+    body: {},
+    expect: accounts(404, 404, 403, 403),
+  },
+  {
+    route: '/api/entries/[id]/withdraw',
+    method: 'POST',
+    path: `/api/entries/${MISSING}/withdraw`,
+    expect: accounts(404, 404, 403, 403),
+  },
+  {
+    route: '/api/entries/[id]/results',
+    method: 'POST',
+    path: `/api/entries/${MISSING}/results`,
+    body: {},
+    expect: { ...accounts(400, 400, 403, 403), classSession: 400 },
+  },
+  {
+    route: '/api/entries/[id]/audit',
+    method: 'GET',
+    path: `/api/entries/${MISSING}/audit`,
+    expect: accounts(404, 404, 404, 404),
+  },
+  { route: '/api/review/queue', method: 'GET', expect: accounts(403, 403, 200, 200) },
+  {
+    route: '/api/review/[id]/decision',
+    method: 'POST',
+    path: `/api/review/${MISSING}/decision`,
+    body: {},
+    expect: accounts(403, 403, 400, 400),
+  },
+  { route: '/api/review/bulk-publish', method: 'POST', body: {}, expect: accounts(403, 403, 400, 400) },
 ];
 
 let knex: Knex;

@@ -19,7 +19,16 @@ export type AuditAction =
   | 'school.merged'
   | 'class.created'
   | 'class.updated'
-  | 'class.code_rotated';
+  | 'class.code_rotated'
+  | 'entry.created'
+  | 'entry.deleted'
+  | 'entry.submit'
+  | 'entry.team_submitted'
+  | 'entry.approve'
+  | 'entry.withdraw'
+  | 'entry.publish'
+  | 'entry.return'
+  | 'entry.decline';
 
 export interface AuditEvent {
   id: string;

@@ -276,3 +276,9 @@ export async function publishedEntries(
   }
   return (await query) as EntryJoined[];
 }
+
+/** How many photos an entry has. */
+export async function entryPhotoCount(entryId: string, trx: Knex = db()): Promise<number> {
+  const row = await trx('entry_photos').where({ entry_id: entryId }).count<{ count: string }[]>({ count: '*' }).first();
+  return Number(row?.count ?? 0);
+}
