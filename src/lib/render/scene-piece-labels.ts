@@ -29,6 +29,9 @@ const MARK_SHIFTS_MM = [0, 1.5, -1.5, 3, -3, 4.5, -4.5, 6, -6];
 const TAB_MARK_ACROSS_MM = [0, 0.8, -0.8];
 const EDGE_MARK_INSET_MM = [0, 1, 2, 3.5, -0.8];
 
+/** How far inside its tab or face a callout's leader ends, mm (common practice, no source: a hair past rounding). */
+const LEADER_END_INSET_MM = 0.05;
+
 /** A mark its piece had no room for, to print beside the piece once every piece's own marks are placed. */
 export interface SceneCallout {
   /** Points on the piece the leader may end at, best first (the mark's home first). */
@@ -88,12 +91,20 @@ export function scenePieceMarks(
     const at = placementApply(placement, home);
     const smallest = sizesMm[sizesMm.length - 1]!;
     const targets: Vec2Mm[] = [];
-    // A leader may end a little either side of the home (a part's mark on a face can sit on its edge).
+    // A leader may end a little either side of the home (a part's mark on a face can sit on its edge), at a
+    // point inside its place by LEADER_END_INSET_MM each way: an edge mark's home lies on the edge itself,
+    // where rounding can put the leader's end a hair outside the face.
+    const e = LEADER_END_INSET_MM;
+    const clearlyWithin = (p: Vec2Mm) =>
+      [p, [p[0] + e, p[1]], [p[0] - e, p[1]], [p[0], p[1] + e], [p[0], p[1] - e]].every((q) => within(q as Vec2Mm));
+    const near: Vec2Mm[] = [];
     for (const a of [...across, ...across.map((x) => -x)])
       for (const d of MARK_SHIFTS_MM) {
         const flat: Vec2Mm = [home[0] + c * d + acrossDir[0] * a, home[1] + s * d + acrossDir[1] * a];
-        if (within(flat)) targets.push(placementApply(placement, flat));
+        if (clearlyWithin(flat)) targets.push(placementApply(placement, flat));
+        else if (within(flat)) near.push(placementApply(placement, flat));
       }
+    targets.push(...near);
     callouts.push({
       targets: targets.length ? targets : [at],
       callout: text(value, at, smallest, 'labels', { angleRad: 0, mark }),
