@@ -103,7 +103,7 @@ const ROWS: Row[] = [
     expect: staffOnly(400),
   },
   // Reach: coordinators and admins; without a period the query is invalid
-  ...['figures', 'breakdown', 'breakdown.csv', 'rows', 'rows.csv'].map((name): Row => ({
+  ...['figures', 'breakdown', 'breakdown.csv', 'rows', 'rows.csv', 'report.pdf'].map((name): Row => ({
     route: `/api/reach/${name}`,
     method: 'GET',
     expect: staffOnly(400),

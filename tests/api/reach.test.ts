@@ -11,6 +11,7 @@ import { REACH_FIGURE_IDS, type ReachFigureId } from '../../src/lib/reach/figure
 import { monthShift, periodPrevious, quarterOf, quarterPeriod, type ReachPeriod } from '../../src/lib/reach/period';
 import { REACH_GROUPINGS, type ReachGrouping } from '../../src/lib/reach/reach-query';
 import { testKnex } from '../db/database';
+import { pdfPageTexts } from '../fixtures/pdf-text';
 import { accountCreate, userSessionCookie } from './auth-helpers';
 import { api } from './harness';
 
@@ -278,5 +279,24 @@ describe('reach query validation', () => {
       const body = (await res.json()) as { error: { code: string; fields?: object } };
       expect(body.error.code).toBe('invalid_input');
     }
+  });
+});
+
+describe('GET /api/reach/report.pdf', () => {
+  it('reads back with pdf.js: its pages say "Page n of m" and page 1 states the dashboard figures', async () => {
+    const quarter = quarterOf(PERIODS['last whole quarter']!.from);
+    const res = await api(`/api/reach/report.pdf?quarter=${quarter}`, { headers: { cookie } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    const pages = await pdfPageTexts(new Uint8Array(await res.arrayBuffer()));
+    expect(pages.length).toBeGreaterThanOrEqual(1);
+    pages.forEach((text, i) => expect(text).toContain(`Page ${i + 1} of ${pages.length}`));
+    const summary = await getJson<Summary & { figures: { label: string }[] }>(`/api/reach/figures?quarter=${quarter}`);
+    const page1 = pages[0]!.replace(/\n/g, ' ');
+    for (const f of summary.figures) expect(page1, f.label).toContain(`${f.label}: ${f.value.toLocaleString('en-US')}`);
+  });
+
+  it('answers a malformed quarter with 400', async () => {
+    expect((await api('/api/reach/report.pdf?quarter=2026-Q9', { headers: { cookie } })).status).toBe(400);
   });
 });

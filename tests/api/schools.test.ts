@@ -226,6 +226,7 @@ describe('every reach and schools directory route', () => {
       '/api/reach/breakdown.csv?quarter=2026-Q1',
       '/api/reach/rows?quarter=2026-Q1&figure=kits',
       '/api/reach/rows.csv?quarter=2026-Q1&figure=kits',
+      '/api/reach/report.pdf?quarter=2026-Q1',
       '/api/schools/directory',
       '/api/schools/proposals',
     ];

@@ -28,9 +28,16 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
     ACTIVITIES,
     TOOLS,
   ],
-  coordinator: [{ href: '/kits', label: 'Kits' }, { href: '/classes', label: 'Classes' }, ACTIVITIES, TOOLS],
+  coordinator: [
+    { href: '/reach', label: 'Reach' },
+    { href: '/kits', label: 'Kits' },
+    { href: '/classes', label: 'Classes' },
+    ACTIVITIES,
+    TOOLS,
+  ],
   admin: [
     { href: '/admin/accounts', label: 'Accounts' },
+    { href: '/reach', label: 'Reach' },
     { href: '/kits', label: 'Kits' },
     { href: '/classes', label: 'Classes' },
     ACTIVITIES,
