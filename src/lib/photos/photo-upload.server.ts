@@ -1,13 +1,14 @@
 /**
  * Reads an upload of journal photos: a multipart form with files in the field "photo" and, in the same order,
  * one "altText" field per photo. Each file is read (at most 10 MB) and processed while the rest of the request
- * waits, so an upload holds one original photo in memory at a time.
+ * waits; photoProcessStream reads a photo only when a decode slot is free, so the originals in memory stay few
+however many uploads arrive together.
  */
 import { InputError } from '../errors';
-import { multipartRead, streamReadCapped } from '../upload/multipart-read.server';
+import { multipartRead } from '../upload/multipart-read.server';
 import { parseInput } from '../validation';
 import type { PhotoToSave } from './entry-photos.server';
-import { photoProcess } from './photo-process.server';
+import { photoProcessStream } from './photo-process.server';
 import {
   ENTRY_PHOTOS_MAX,
   PHOTO_ACCEPTED_SENTENCE,
@@ -39,8 +40,7 @@ export async function photoUploadRead(request: Request): Promise<PhotoToSave[]> 
       if (part.field !== PHOTO_FILE_FIELD) {
         throw new InputError(`Send photos in the form field "${PHOTO_FILE_FIELD}", not "${part.field}".`);
       }
-      const bytes = await streamReadCapped(part.stream, PHOTO_BYTES_MAX, name);
-      return photoProcess(bytes, name);
+      return photoProcessStream(part.stream, name);
     },
   );
   if (files.length === 0) throw new InputError(`Attach at least one photo. ${PHOTO_ACCEPTED_SENTENCE}`);
