@@ -31,6 +31,8 @@ export interface ApiInit {
   body?: unknown;
   /** Sent as is with its content type, instead of a JSON body (a CSV file for the data tools). */
   text?: { contentType: string; data: string };
+  /** Sent as multipart/form-data (file uploads); the browser sets the content type with its boundary. */
+  form?: FormData;
   /** Query parameters; empty and undefined values are left out. */
   query?: Record<string, string | number | undefined>;
   signal?: AbortSignal;
@@ -47,14 +49,14 @@ function withQuery(path: string, query: ApiInit['query']): string {
 }
 
 async function send(path: string, init: ApiInit): Promise<Response> {
-  const hasBody = init.body !== undefined || init.text !== undefined;
+  const hasBody = init.body !== undefined || init.text !== undefined || init.form !== undefined;
   const contentType = init.text ? init.text.contentType : 'application/json';
   let res: Response;
   try {
     res = await fetch(withQuery(path, init.query), {
       method: init.method ?? (hasBody ? 'POST' : 'GET'),
-      headers: { ...(hasBody ? { 'content-type': contentType } : {}), ...init.headers },
-      body: init.text ? init.text.data : init.body === undefined ? undefined : JSON.stringify(init.body),
+      headers: { ...(hasBody && !init.form ? { 'content-type': contentType } : {}), ...init.headers },
+      body: init.form ?? (init.text ? init.text.data : init.body === undefined ? undefined : JSON.stringify(init.body)),
       credentials: 'same-origin',
       signal: init.signal,
     });

@@ -75,3 +75,31 @@ export function photoUrl(photoId: string): string {
 export function photoThumbnailUrl(photoId: string): string {
   return `/api/photos/${photoId}/thumbnail`;
 }
+
+/** Room left in each upload request for the multipart framing and the alt-text fields, bytes. */
+const PHOTO_REQUEST_FRAMING_BYTES = 64_000; // common practice, no source: generous for 6 parts' headers and alt text
+
+/**
+ * Groups photos (by their sizes in bytes, in order) into upload requests that each stay under the request limit,
+ * keeping the order: the indexes of each request's photos. A photo over the photo limit still gets a request of
+ * its own, so the server can say what is wrong with it.
+ */
+export function photoUploadBatches(sizesBytes: readonly number[]): number[][] {
+  const batches: number[][] = [];
+  let current: number[] = [];
+  let total = 0;
+  for (const [i, size] of sizesBytes.entries()) {
+    if (
+      current.length > 0 &&
+      (total + size > PHOTO_REQUEST_BYTES_MAX - PHOTO_REQUEST_FRAMING_BYTES || current.length === ENTRY_PHOTOS_MAX)
+    ) {
+      batches.push(current);
+      current = [];
+      total = 0;
+    }
+    current.push(i);
+    total += size;
+  }
+  if (current.length > 0) batches.push(current);
+  return batches;
+}
