@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import knexFactory, { type Knex } from 'knex';
 import config from '../../knexfile';
+import { jobSchemaMigrate } from '../../src/lib/jobs/worker.server';
 import { PROJECT_ROOT } from './postgres';
 
 const MIGRATIONS_DIR = join(PROJECT_ROOT, 'migrations');
@@ -31,11 +32,12 @@ export function knexFor(url: string): Knex {
   });
 }
 
-/** Brings the schema up to date; returns the names of migrations that ran. */
+/** Brings the schema and the job queue's schema up to date; returns the names of our migrations that ran. */
 export async function migrateLatest(url: string): Promise<string[]> {
   const knex = knexFor(url);
   try {
     const [, ran] = (await knex.migrate.latest()) as [number, string[]];
+    await jobSchemaMigrate(url);
     return ran;
   } finally {
     await knex.destroy();

@@ -20,6 +20,7 @@ import { fileURLToPath } from 'node:url';
 import compression from 'compression';
 import sirv from 'sirv';
 import { trustedProxyHops } from '../lib/auth/client-ip.server';
+import { jobWorkerStart } from '../lib/jobs/worker.server';
 import { PROGRESS_CONTENT_TYPE } from '../lib/http/progress-lines';
 import {
   clientErrorAnswer,
@@ -132,8 +133,15 @@ const host = process.env.HOST ?? '127.0.0.1';
 const port = Number(process.env.PORT ?? 4321);
 server.listen(port, host, () => console.log(`Kitwright serving http://${host}:${port} from ${clientDir}`));
 
+// The job queue's worker (mail delivery, event reminders) runs in every app instance; KW_JOBS=off leaves it out.
+const jobs =
+  process.env.KW_JOBS === 'off' || !process.env.DATABASE_URL
+    ? null
+    : await jobWorkerStart({ connectionString: process.env.DATABASE_URL });
+
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
+    void jobs?.stop();
     server.close(() => process.exit(0));
     server.closeAllConnections();
   });

@@ -110,6 +110,53 @@ const ROWS: Row[] = [
   })),
   // Activities: the library, open to anyone
   { route: '/api/activities', method: 'GET', expect: all(200) },
+  // Events: the public list for anyone, changes for staff; a missing event is 404 to those admitted
+  { route: '/api/events', method: 'GET', expect: all(200) },
+  { route: '/api/events', method: 'POST', body: {}, expect: accounts(403, 403, 400, 400) },
+  { route: '/api/events/[id]', method: 'GET', path: `/api/events/${MISSING}`, expect: all(404) },
+  {
+    route: '/api/events/[id]',
+    method: 'PATCH',
+    path: `/api/events/${MISSING}`,
+    body: {},
+    expect: accounts(403, 403, 404, 404),
+  },
+  { route: '/api/events/[id].ics', method: 'GET', path: `/api/events/${MISSING}.ics`, expect: all(404) },
+  {
+    route: '/api/events/[id]/registrations',
+    method: 'GET',
+    path: `/api/events/${MISSING}/registrations`,
+    expect: accounts(403, 403, 404, 404),
+  },
+  {
+    route: '/api/events/[id]/registrations',
+    method: 'POST',
+    path: `/api/events/${MISSING}/registrations`,
+    body: {},
+    // A teacher registers as themselves (no body read): the event is missing; anyone else's {} is invalid
+    expect: { anonymous: 400, classSession: 400, teacher: 404, otherTeacher: 404, coordinator: 400, admin: 400 },
+  },
+  {
+    route: '/api/events/[id]/registrations.csv',
+    method: 'GET',
+    path: `/api/events/${MISSING}/registrations.csv`,
+    expect: accounts(403, 403, 404, 404),
+  },
+  {
+    route: '/api/events/[id]/attendance',
+    method: 'GET',
+    path: `/api/events/${MISSING}/attendance`,
+    expect: accounts(403, 403, 404, 404),
+  },
+  {
+    route: '/api/events/[id]/attendance',
+    method: 'PUT',
+    path: `/api/events/${MISSING}/attendance`,
+    body: {},
+    expect: accounts(403, 403, 404, 404),
+  },
+  { route: '/api/events/registrations/confirm', method: 'POST', body: {}, expect: all(400) },
+  { route: '/api/events/registrations/cancel', method: 'POST', body: {}, expect: all(400) },
   // Classes
   { route: '/api/classes', method: 'GET', expect: accounts(200, 200, 200, 200) },
   { route: '/api/classes', method: 'POST', body: {}, expect: accounts(400, 400, 403, 403) },

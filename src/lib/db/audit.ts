@@ -28,7 +28,12 @@ export type AuditAction =
   | 'entry.withdraw'
   | 'entry.publish'
   | 'entry.return'
-  | 'entry.decline';
+  | 'entry.decline'
+  | 'event.created'
+  | 'event.updated'
+  | 'event.attendance_recorded'
+  | 'link.created'
+  | 'link.updated';
 
 export interface AuditEvent {
   id: string;

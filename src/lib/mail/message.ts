@@ -7,6 +7,14 @@ export interface MailMessage {
   subject: string;
   text: string;
   html: string;
+  /** Text files sent with the message (a calendar file); JSON-safe so the message can wait on the job queue. */
+  attachments?: MailAttachment[];
+}
+
+export interface MailAttachment {
+  filename: string;
+  contentType: string;
+  content: string;
 }
 
 /** Escapes text for HTML element content and attribute values. */

@@ -1,0 +1,29 @@
+import { STAFF } from '../../../../lib/auth/actor';
+import { siteUrl } from '../../../../lib/auth/site-url';
+import { registrationList } from '../../../../lib/db/events';
+import { eventVisible } from '../../../../lib/events/event-access.server';
+import { RegistrationCreateSchema } from '../../../../lib/events/event-schemas';
+import { registrationCreateByEmail, registrationCreateForTeacher } from '../../../../lib/events/registration.server';
+import { endpoint } from '../../../../lib/http/endpoint';
+import { json, readJson } from '../../../../lib/http/respond';
+import { parseInput } from '../../../../lib/validation';
+
+/** The event's registrations (staff). */
+export const GET = endpoint({ access: STAFF }, async ({ locals, params }) => {
+  const event = await eventVisible(locals.actor, params.id ?? '');
+  return { registrations: await registrationList(event.id) };
+});
+
+/**
+ * Registers for a published event: a signed-in teacher as themselves (no body needed); anyone else with a name
+ * and school e-mail, confirmed by a mailed link. 201 with the state: confirmed, waitlisted or pending.
+ */
+export const POST = endpoint({ access: ['anyone'] }, async ({ locals, params, request, url }) => {
+  const site = siteUrl(url);
+  const actor = locals.actor;
+  if (actor.kind === 'user' && actor.role === 'teacher') {
+    return json({ registration: await registrationCreateForTeacher(params.id ?? '', actor, site) }, 201);
+  }
+  const input = parseInput(RegistrationCreateSchema, await readJson(request, 4_000), 'registration');
+  return json({ registration: await registrationCreateByEmail(params.id ?? '', input, site) }, 201);
+});
