@@ -76,7 +76,7 @@ function reportCharts(flow: PdfFlow, input: ReachReportInput): void {
   const { doc } = flow;
   const gap = 6;
   const width = (pdfFlowTextWidth(flow) - gap * (CHART_COLUMNS - 1)) / CHART_COLUMNS;
-  const rowHeight = CHART_HEIGHT_MM + 14;
+  const rowHeight = CHART_HEIGHT_MM + 17;
   input.figures.forEach((f, i) => {
     const col = i % CHART_COLUMNS;
     if (col === 0) pdfFlowEnsure(flow, rowHeight);
@@ -88,7 +88,8 @@ function reportCharts(flow: PdfFlow, input: ReachReportInput): void {
     doc.setFontSize(8);
     doc.setTextColor('#1b2330');
     doc.text(`${f.label} (max ${max})`, x0, top, { baseline: 'top' });
-    const base = top + 5 + CHART_HEIGHT_MM;
+    // Room under the title for the value printed above the tallest bar.
+    const base = top + 8 + CHART_HEIGHT_MM;
     const slot = width / Math.max(1, values.length);
     doc.setDrawColor('#46505f');
     doc.setLineWidth(0.2);
@@ -98,6 +99,8 @@ function reportCharts(flow: PdfFlow, input: ReachReportInput): void {
     doc.setFontSize(7);
     values.forEach((v, j) => {
       const h = (v / max) * CHART_HEIGHT_MM;
+      // jspdf's text drawing changes the fill colour: set it again for every bar.
+      doc.setFillColor(BAR);
       if (h > 0) doc.rect(x0 + j * slot + slot * 0.2, base - h, slot * 0.6, h, 'F');
       doc.text(String(v), x0 + j * slot + slot / 2, base - h - 0.8, { align: 'center', baseline: 'bottom' });
       doc.text(input.months[j] ?? '', x0 + j * slot + slot / 2, base + 1, { align: 'center', baseline: 'top' });
