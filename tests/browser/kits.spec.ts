@@ -9,7 +9,8 @@ import { gzipSync } from 'node:zlib';
 import type { Browser, Page } from 'playwright-core';
 import type { Knex } from 'knex';
 import { PDFDocument } from 'pdf-lib';
-import { kitPdfPageKinds } from '../fixtures/pdf-text';
+import { kitPdfPageKinds, pdfPageTexts } from '../fixtures/pdf-text';
+import { QR_CAPTION, QR_PREVIEW_NOTE } from '../../src/lib/render/scene-footer';
 import { axeSerious, BASE_URL, browserLaunch, hydrated, kitSaveRequest, pageNew } from './browser';
 import { testKnex } from '../db/database';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
@@ -18,6 +19,7 @@ import { SAFETY_GENERAL_NOTE } from '../../src/lib/activities/safety';
 let browser: Browser;
 let knex: Knex;
 let teacherCookie: string;
+let teacherAccount: Awaited<ReturnType<typeof accountCreate>>;
 let classCode: string;
 let kitPath = '';
 
@@ -25,6 +27,7 @@ beforeAll(async () => {
   browser = await browserLaunch();
   knex = testKnex();
   const teacher = await accountCreate(knex, { role: 'teacher', label: 'kits-browser' });
+  teacherAccount = teacher;
   teacherCookie = await userSessionCookie(knex, teacher.id);
   classCode = (await classCreateDirect(knex, teacher, 'Browser kits class')).code;
 });
@@ -107,6 +110,52 @@ describe('kit builder', () => {
     );
     expect(await page.getByTestId('kit-summary').textContent()).toContain('for 30 teams');
     expect(errors).toEqual([]);
+  });
+
+  it('follows the class chosen to save to, then shows the saved kit’s sheets with its QR code', async () => {
+    // A newer class of the same teacher, for grades 3–5: the builder starts from it (the newest class), and
+    // choosing the older grades 6–8 class in the save panel sets the grade band to 6–8.
+    const younger = await classCreateDirect(knex, teacherAccount, 'Browser kits younger class');
+    await knex('classes').where({ id: younger.id }).update({ grade_band: '3-5' });
+    const { page, errors } = await signedIn();
+    await page.goto('/kits/new?model=skein-probe');
+    await hydrated(page);
+    expect(await page.getByLabel('Who builds it').inputValue()).toBe('3-5');
+    await page.getByText('From your class Browser kits younger class.').waitFor();
+    await page.getByLabel('Save to class').selectOption({ label: 'Browser kits class' });
+    expect(await page.getByLabel('Who builds it').inputValue()).toBe('6-8');
+    await page.getByText('From your class Browser kits class.').waitFor();
+    await page.getByLabel('Instructions pages in the PDF').selectOption('first');
+    const idle = () =>
+      page.waitForFunction(
+        () => document.querySelector('[data-testid="build-status"]')?.getAttribute('data-building') === 'false',
+      );
+    await idle();
+    // Unsaved: the first sheet says where the QR code goes (sheet-scene.ts's note), and no QR code is drawn.
+    const previews = page.getByTestId('sheet-previews');
+    expect(await previews.getAttribute('data-qr')).toBe('note');
+    expect(await previews.locator('li').first().textContent()).toContain(QR_PREVIEW_NOTE[0]);
+    await page.getByRole('button', { name: 'Save kit' }).click();
+    await page.getByTestId('kit-saved').waitFor();
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="sheet-previews"]')?.getAttribute('data-qr') === 'saved',
+    );
+    const first = previews.locator('li').first();
+    expect(await first.textContent()).not.toContain(QR_PREVIEW_NOTE[0]);
+    expect(await first.textContent()).toContain(QR_CAPTION);
+    // The saved kit is in the chosen class, for its band, with the instructions first (read back by pdf.js).
+    const kitHref = (await page.getByRole('link', { name: 'Open the kit page' }).getAttribute('href'))!;
+    const kit = await knex('kits')
+      .where({ id: kitHref.split('/').pop() })
+      .first();
+    expect(kit.class_id).not.toBe(younger.id);
+    expect(kit.inputs.gradeBand).toBe('6-8');
+    expect(kit.inputs.instructionsAt).toBe('first');
+    const pdf = await page.request.get(`/api${kitHref}.pdf`);
+    const texts = await pdfPageTexts(new Uint8Array(await pdf.body()));
+    expect(texts[0]).toMatch(/^How to build it: Skein probe/);
+    expect(errors).toEqual([]);
+    await knex('classes').where({ id: younger.id }).delete();
   });
 
   it('ships at most 60 kB of JavaScript (gzip) before the 3D island', async () => {

@@ -4,7 +4,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { keepPreviousData, useQuery, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
 import { kitFormSchema, type KitForm } from '../../lib/kit/kit-settings';
-import { kitPreviewQueryOptions, scaleSolveQueryOptions, type KitView } from '../../lib/kit/kit-queries';
+import {
+  kitPreviewQueryOptions,
+  kitSheetsQueryOptions,
+  scaleSolveQueryOptions,
+  type KitView,
+} from '../../lib/kit/kit-queries';
 import type { KitBuilderProps } from './builder-props';
 import DownloadButtons from './DownloadButtons';
 import KitAtThisScale from './KitAtThisScale';
@@ -15,6 +20,9 @@ import ScaleAdvice from './ScaleAdvice';
 import SheetPreviews from './SheetPreviews';
 import { useBuildStages } from './useBuildStages';
 import { useSettledSettings } from './useSettledSettings';
+
+/** Stands in for the saved kit while there is none (its sheets query is disabled then). */
+const PENDING_KIT = { id: '', contentHash: '', links: { svgSheets: [] as string[] } } as const;
 
 const errorText = (err: unknown) => (err instanceof ApiError ? err.message : err ? 'Something went wrong.' : null);
 
@@ -34,6 +42,8 @@ export default function KitBuilderForm(props: KitBuilderProps) {
   const { settled, validKey, nextChangeNow, settleNow } = useSettledSettings(initial, valid);
   const stages = useBuildStages();
   const preview = useQuery({ ...kitPreviewQueryOptions(settled, stages.listener), placeholderData: keepPreviousData });
+  const data = preview.data;
+  const building = preview.isFetching;
   const solveParams = {
     modelId: settled.modelId,
     sheetSizeId: settled.sheetSizeId,
@@ -45,15 +55,23 @@ export default function KitBuilderForm(props: KitBuilderProps) {
   const solve = useQuery({ ...scaleSolveQueryOptions(solveParams), placeholderData: keepPreviousData });
   const [saved, setSaved] = useState<KitView | null>(null);
   useEffect(() => setSaved(null), [validKey]);
+  // After saving, the sheets shown are the saved kit's own: its first sheet carries the kit's QR code.
+  const savedSheets = useQuery({ ...kitSheetsQueryOptions(saved ?? PENDING_KIT), enabled: saved !== null });
+  const [classId, setClassId] = useState(props.gradeClassId ?? classes[0]?.id ?? '');
+  const gradeClass = classes.find((c) => c.id === classId);
 
   const change = <K extends keyof KitForm>(name: K, value: KitForm[K], now = true) => {
     nextChangeNow(now);
     // react-hook-form's path typing cannot follow a generic key into the discriminated venue union.
     setValue(name, value as never, { shouldValidate: true, shouldDirty: true });
   };
+  const chooseClass = (id: string) => {
+    setClassId(id);
+    const band = classes.find((c) => c.id === id)?.gradeBand;
+    if (band && limits.gradeBands.includes(band)) change('gradeBand', band);
+  };
   const model = props.models.find((m) => m.id === values.modelId);
-  const data = preview.data;
-  const building = preview.isFetching;
+  const sheets = saved && savedSheets.data ? savedSheets.data : (data?.sheets ?? []);
 
   return (
     <div className="grid gap-8 lg:grid-cols-[22rem_1fr]">
@@ -72,6 +90,7 @@ export default function KitBuilderForm(props: KitBuilderProps) {
           change={change}
           settleNow={settleNow}
           suggestedScale={solve.data?.suggestedScaleDenominator ?? null}
+          gradeBandFrom={gradeClass && values.gradeBand === gradeClass.gradeBand ? gradeClass.name : null}
         />
       </form>
 
@@ -111,6 +130,8 @@ export default function KitBuilderForm(props: KitBuilderProps) {
           </h2>
           <SaveKitPanel
             classes={classes}
+            classId={classId}
+            onClassChange={chooseClass}
             form={valid}
             modelTitle={model?.title ?? ''}
             sheetCount={data?.sheetCount ?? 0}
@@ -122,8 +143,13 @@ export default function KitBuilderForm(props: KitBuilderProps) {
           <h2 id="kit-sheets-h" className="mb-3 text-lg font-bold">
             Sheets
           </h2>
-          {data && data.sheets.length > 0 ? (
-            <SheetPreviews sheets={data.sheets} title={data.title} stale={building} />
+          {data && sheets.length > 0 ? (
+            <SheetPreviews
+              sheets={sheets}
+              title={data.title}
+              stale={building || (saved !== null && savedSheets.isFetching)}
+              qr={saved && savedSheets.data ? 'saved' : 'note'}
+            />
           ) : (
             <p className="text-ink-soft">{building ? 'Building…' : 'No sheets yet.'}</p>
           )}

@@ -26,7 +26,7 @@ interface Props extends StaticProps {
   settleNow: () => void;
   /** The solver's suggested scale, or null while it works. */
   suggestedScale: number | null;
-  /** The class the grade band came from, shown while the band is unchanged. */
+  /** The class whose grade band the form holds, or null (said beside the band). */
   gradeBandFrom: string | null;
 }
 
@@ -86,9 +86,7 @@ export default function KitSettingsFields(props: Props) {
         value={values.gradeBand}
         options={limits.gradeBands.map((g) => ({ value: g, label: limits.gradeBandWords[g] ?? g }))}
         hint={`${
-          props.gradeBandFrom && values.gradeBand === initial.gradeBand
-            ? `From your class ${props.gradeBandFrom}. `
-            : ''
+          props.gradeBandFrom ? `From your class ${props.gradeBandFrom}. ` : ''
         }The scale keeps every piece, tab and fold big enough for them.`}
         onChange={(band) => change('gradeBand', band)}
       />

@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { useId } from 'react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
 import { kitSave, kitsListOptimistic, type KitView } from '../../lib/kit/kit-queries';
@@ -6,6 +6,9 @@ import type { KitForm } from '../../lib/kit/kit-settings';
 
 interface Props {
   classes: { id: string; name: string }[];
+  /** The class chosen to save to, and a new choice (the builder follows its grade band). */
+  classId: string;
+  onClassChange: (classId: string) => void;
   form: KitForm | null;
   modelTitle: string;
   sheetCount: number;
@@ -13,10 +16,17 @@ interface Props {
 }
 
 /** Saves the current settings to one of the teacher's classes; the kits list shows the kit at once (optimistic). */
-export default function SaveKitPanel({ classes, form, modelTitle, sheetCount, onSaved }: Props) {
+export default function SaveKitPanel({
+  classes,
+  classId,
+  onClassChange,
+  form,
+  modelTitle,
+  sheetCount,
+  onSaved,
+}: Props) {
   const client = useQueryClient();
   const id = useId();
-  const [classId, setClassId] = useState(classes[0]?.id ?? '');
   const save = useMutation({
     mutationFn: (vars: { classId: string; form: KitForm }) => kitSave(vars.classId, vars.form),
     onMutate: (vars) => {
@@ -57,7 +67,7 @@ export default function SaveKitPanel({ classes, form, modelTitle, sheetCount, on
             id={`${id}-class`}
             className="field-input"
             value={classId}
-            onChange={(e) => setClassId(e.target.value)}
+            onChange={(e) => onClassChange(e.target.value)}
           >
             {classes.map((c) => (
               <option key={c.id} value={c.id}>

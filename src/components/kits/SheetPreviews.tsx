@@ -5,6 +5,8 @@ interface Props {
   title: string;
   /** Dims the sheets while newer ones build. */
   stale: boolean;
+  /** The saved kit's sheets (its QR code on the first) or an unsaved kit's (a note where the QR code goes). */
+  qr: 'saved' | 'note';
 }
 
 /** Zoom steps of the full-size view, as a share of the view's width (1: the sheet fills the width). */
@@ -17,7 +19,7 @@ const svgBody = (svg: string) => svg.replace(/^<\?xml[^>]*>\s*/, '');
  * button per sheet opens it full size in a modal dialog (Escape closes it, focus stays inside) that zooms with
  * its buttons or the + and − keys and scrolls with the arrow keys, a mouse or a finger.
  */
-function SheetPreviews({ sheets, title, stale }: Props) {
+function SheetPreviews({ sheets, title, stale, qr }: Props) {
   const dialog = useRef<HTMLDialogElement>(null);
   const [open, setOpen] = useState<number | null>(null);
   const [zoom, setZoom] = useState(0);
@@ -31,11 +33,17 @@ function SheetPreviews({ sheets, title, stale }: Props) {
   const scale = ZOOMS[zoom] ?? 1;
   return (
     <>
+      <p className="mb-2 text-sm text-ink-soft" data-testid="sheet-qr-note">
+        {qr === 'saved'
+          ? 'The saved kit’s sheets: the QR code on sheet 1 opens its kit page.'
+          : 'Not saved yet: sheet 1 shows where the QR code will print once you save the kit.'}
+      </p>
       <ol
         className={`grid gap-4 sm:grid-cols-2 ${stale ? 'opacity-60 transition-opacity' : ''}`}
         aria-label={`Sheets of ${title}`}
         data-testid="sheet-previews"
         data-sheet-count={sheets.length}
+        data-qr={qr}
       >
         {sheets.map((svg, i) => (
           <li key={i} className="list-none">

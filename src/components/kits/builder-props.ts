@@ -18,6 +18,6 @@ export interface KitBuilderProps {
   initialSolve: ScaleSolution | null;
   /** Message when the first preview could not be built on the server. */
   initialError: string | null;
-  /** The class whose grade band the builder starts from, or null (the default band). */
-  gradeBandFrom: string | null;
+  /** The class the builder starts from (its grade band; the save panel's class), or null (the default band). */
+  gradeClassId: string | null;
 }

@@ -76,6 +76,11 @@ async function send(path: string, init: ApiInit): Promise<Response> {
   );
 }
 
+/** Fetches a text file (an SVG sheet) from the app; throws ApiError on an error answer. */
+export async function apiText(path: string, init: ApiInit = {}): Promise<string> {
+  return (await send(path, init)).text();
+}
+
 /** Calls a JSON endpoint and returns its parsed body; throws ApiError on an error answer. */
 export async function api<T>(path: string, init: ApiInit = {}): Promise<T> {
   return (await (await send(path, init)).json()) as T;

@@ -73,6 +73,6 @@ export async function kitBuilderProps(
     initialPreview: preview,
     initialSolve: solve,
     initialError,
-    gradeBandFrom: gradeClass ? gradeClass.name : null,
+    gradeClassId: gradeClass ? gradeClass.id : null,
   };
 }

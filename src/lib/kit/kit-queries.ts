@@ -3,7 +3,7 @@
  * query key means the same data everywhere. Types of answers come from the server modules (type-only).
  */
 import { queryOptions, type QueryClient } from '@tanstack/react-query';
-import { api, apiProgress } from '../http/client';
+import { api, apiProgress, apiText } from '../http/client';
 import type { StageReport } from '../http/progress-lines';
 import type { KitPreview, ScaleSolution } from './kit-preview.server';
 import type { KitForm } from './kit-settings';
@@ -42,6 +42,19 @@ export function scaleSolveQueryOptions(params: ScaleSolveParams) {
   return queryOptions({
     queryKey: ['scale-solve', params] as const,
     queryFn: ({ signal }) => api<ScaleSolution>('/api/scale/solve', { body: params, signal }),
+    staleTime: Infinity,
+  });
+}
+
+/** The SVG sheets of a saved kit, in order: its first sheet carries the kit's own QR code. */
+export function kitSheetsQueryOptions(kit: {
+  id: string;
+  contentHash: string;
+  links: { svgSheets: readonly string[] };
+}) {
+  return queryOptions({
+    queryKey: ['kit-sheets', kit.id, kit.contentHash] as const,
+    queryFn: ({ signal }) => Promise.all(kit.links.svgSheets.map((url) => apiText(`${url}&inline=1`, { signal }))),
     staleTime: Infinity,
   });
 }

@@ -60,7 +60,10 @@ export function sceneFurniture(scene: SheetScene, kit: KitLayout, sheet: LaidOut
 /** Caption under the QR code of a saved kit. */
 export const QR_CAPTION = 'Kit page';
 /** Printed where the QR code goes while a kit has no page yet: a heading, then a line wrapped to the box. */
-export const QR_PREVIEW_NOTE = ['Preview only', 'Save the kit to give it a QR code.'] as const;
+export const QR_PREVIEW_NOTE = [
+  'QR code goes here',
+  'It prints in this square once you save the kit; it opens the kit page.',
+] as const;
 const QR_NOTE_HEADING_MM = 2.8;
 const QR_NOTE_SIZE_MM = 2.4;
 /** Line pitch of the note, in em (common practice, no source: about 1.3 × the size for short captions). */
