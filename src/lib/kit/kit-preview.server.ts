@@ -17,6 +17,7 @@ import {
 } from './kit-inputs';
 import { kitOutputBuild, kitScaleGuard, type KitOutputBuildOptions, type KitTimingsMs } from './kit-build.server';
 import { KitCache } from './kit-cache.server';
+import { workRun } from '../work/work-pool.server';
 import { kitSummary, type KitSummary } from './kit-summary';
 import type { KitOutput } from './build-kit';
 import { kitPrintScale, kitPrintView, type KitPrintView } from './kit-print';
@@ -86,7 +87,11 @@ export async function kitPreviewFile(inputs: KitInputs, output: KitOutput, optio
 }
 
 /** Flat pieces and wire boom threads at a scale; 400 when a piece or tab would be too small to cut. */
-export function kitPatterns(input: z.infer<typeof PatternsRequestSchema>) {
+export type KitPatternsInput = z.infer<typeof PatternsRequestSchema>;
+export type KitScaleSolveInput = z.infer<typeof ScaleSolveRequestSchema>;
+
+/** Flat pieces of a model at a scale, checked against the scale guard (CPU work: the pool runs it). */
+export function kitPatterns(input: KitPatternsInput) {
   const resolved = demoModelResolve(input);
   const result = modelPatterns(resolved.model, {
     scaleDenominator: input.scaleDenominator,
@@ -109,31 +114,35 @@ export interface ScaleSolution {
 const solveCache = new KitCache<ScaleSolution>(() => 20_000);
 
 /** The solver's answer with explanations; 400 when a requested scale makes parts too small. */
-export async function kitScaleSolve(input: z.infer<typeof ScaleSolveRequestSchema>): Promise<ScaleSolution> {
+export async function kitScaleSolve(input: KitScaleSolveInput): Promise<ScaleSolution> {
+  const { model } = demoModelResolve(input);
+  const key = await contentHash({ ...input, model, solver: 2 });
+  return solveCache.get(key, async () => (await workRun({ kind: 'kit-scale-solve', input })) as ScaleSolution);
+}
+
+/** The scale search itself (CPU work: the pool runs it; kitScaleSolve caches its answers). */
+export function kitScaleSolveCompute(input: KitScaleSolveInput): ScaleSolution {
   const { model } = demoModelResolve(input);
   const venue = kitVenue(input.venue);
-  const key = await contentHash({ ...input, model, solver: 2 });
-  return solveCache.get(key, async () => {
-    const req = {
-      sheetId: input.sheetSizeId,
-      paperGsm: input.paperGsm,
-      ratios: input.ratios,
-      gradeBand: input.gradeBand,
-      units: input.units,
-    };
-    const kit = solveKitScale(model, req, venue, input.units);
-    const checked =
-      input.scaleDenominator === undefined
-        ? null
-        : solvePaperScale(model, { ...req, scaleDenominator: input.scaleDenominator });
-    const suggested = kit.scaleDenominator ?? kit.paper.scaleDenominator;
-    const summary = kitSummary({
-      model,
-      scaleDenominator: input.scaleDenominator ?? suggested,
-      sheetLabel: sheetSize(input.sheetSizeId).label,
-      venue,
-      units: input.units,
-    });
-    return { suggestedScaleDenominator: suggested, kit, checked, summary };
+  const req = {
+    sheetId: input.sheetSizeId,
+    paperGsm: input.paperGsm,
+    ratios: input.ratios,
+    gradeBand: input.gradeBand,
+    units: input.units,
+  };
+  const kit = solveKitScale(model, req, venue, input.units);
+  const checked =
+    input.scaleDenominator === undefined
+      ? null
+      : solvePaperScale(model, { ...req, scaleDenominator: input.scaleDenominator });
+  const suggested = kit.scaleDenominator ?? kit.paper.scaleDenominator;
+  const summary = kitSummary({
+    model,
+    scaleDenominator: input.scaleDenominator ?? suggested,
+    sheetLabel: sheetSize(input.sheetSizeId).label,
+    venue,
+    units: input.units,
   });
+  return { suggestedScaleDenominator: suggested, kit, checked, summary };
 }

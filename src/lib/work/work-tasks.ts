@@ -12,9 +12,19 @@ import type { UnitSystem } from '../layout/units';
 import type { Venue } from '../layout/venues';
 import type { SheetSizeId } from '../layout/sheet-sizes';
 import { scaleExplain } from '../tools/scale-explain';
+import { analysisRun, type AnalysisCall } from '../analysis/analysis-run';
+import {
+  kitPatterns,
+  kitScaleSolveCompute,
+  type KitPatternsInput,
+  type KitScaleSolveInput,
+} from '../kit/kit-preview.server';
 
 export type WorkTask =
   | { kind: 'kit-output'; request: KitRequest; output: KitOutput }
+  | { kind: 'analysis'; call: AnalysisCall }
+  | { kind: 'kit-patterns'; input: KitPatternsInput }
+  | { kind: 'kit-scale-solve'; input: KitScaleSolveInput }
   | {
       kind: 'scale-explain';
       model: Model;
@@ -28,6 +38,12 @@ export function workTaskRun(task: WorkTask, onStage: StageReport, signal: AbortS
   switch (task.kind) {
     case 'kit-output':
       return kitOutputMake(task.request, task.output, { onStage, signal });
+    case 'analysis':
+      return Promise.resolve(analysisRun(task.call));
+    case 'kit-patterns':
+      return Promise.resolve(kitPatterns(task.input));
+    case 'kit-scale-solve':
+      return Promise.resolve(kitScaleSolveCompute(task.input));
     case 'scale-explain':
       return Promise.resolve(scaleExplain(task.model, task.req, task.venue, task.units));
   }

@@ -4,13 +4,18 @@
  * { result, savedResult }.
  */
 import { endpoint } from '../../../lib/http/endpoint';
+import { workRun } from '../../../lib/work/work-pool.server';
 import { readJson } from '../../../lib/http/respond';
-import { DEPLOYMENT_JSON_MAX_BYTES, DeploymentInputSchema, deploymentAnalyse } from '../../../lib/analysis/deployment';
+import {
+  DEPLOYMENT_JSON_MAX_BYTES,
+  DeploymentInputSchema,
+  type DeploymentResult,
+} from '../../../lib/analysis/deployment';
 import { deploymentSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {
   const input = parseInput(DeploymentInputSchema, await readJson(request, DEPLOYMENT_JSON_MAX_BYTES));
-  const result = deploymentAnalyse(input);
+  const result = (await workRun({ kind: 'analysis', call: { tool: 'deployment', input } })) as DeploymentResult;
   return { result, savedResult: deploymentSavedResult(result) };
 });

@@ -4,17 +4,18 @@
  * { result, savedResult }.
  */
 import { endpoint } from '../../../lib/http/endpoint';
+import { workRun } from '../../../lib/work/work-pool.server';
 import { readJson } from '../../../lib/http/respond';
 import {
   LAUNCH_STACK_JSON_MAX_BYTES,
   LaunchStackInputSchema,
-  launchStackAnalyse,
+  type LaunchStackResult,
 } from '../../../lib/analysis/launch-stack';
 import { launchStackSavedResult } from '../../../lib/analysis/saved-result-tools';
 import { parseInput } from '../../../lib/validation';
 
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {
   const input = parseInput(LaunchStackInputSchema, await readJson(request, LAUNCH_STACK_JSON_MAX_BYTES));
-  const result = launchStackAnalyse(input);
+  const result = (await workRun({ kind: 'analysis', call: { tool: 'launch-stack', input } })) as LaunchStackResult;
   return { result, savedResult: launchStackSavedResult(input, result) };
 });

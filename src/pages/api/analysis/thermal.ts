@@ -4,8 +4,9 @@
  * { result, savedResult }.
  */
 import { endpoint } from '../../../lib/http/endpoint';
+import { workRun } from '../../../lib/work/work-pool.server';
 import { thermalSavedResult } from '../../../lib/analysis/saved-result-tools';
-import { THERMAL_JSON_MAX_BYTES, ThermalInputSchema, thermalAnalyse } from '../../../lib/analysis/thermal';
+import { THERMAL_JSON_MAX_BYTES, ThermalInputSchema, type ThermalResult } from '../../../lib/analysis/thermal';
 import { THERMAL_CSV_MAX_BYTES, thermalInputFromCsv } from '../../../lib/analysis/thermal-csv';
 import { parseInput } from '../../../lib/validation';
 import { analysisBodyRead } from './_request-body';
@@ -13,6 +14,6 @@ import { analysisBodyRead } from './_request-body';
 export const POST = endpoint({ access: ['anyone'] }, async ({ request }) => {
   const body = await analysisBodyRead(request, { jsonBytes: THERMAL_JSON_MAX_BYTES, csvBytes: THERMAL_CSV_MAX_BYTES });
   const input = body.kind === 'json' ? parseInput(ThermalInputSchema, body.body) : thermalInputFromCsv(body.text);
-  const result = thermalAnalyse(input);
+  const result = (await workRun({ kind: 'analysis', call: { tool: 'thermal', input } })) as ThermalResult;
   return { result, savedResult: thermalSavedResult(input, result) };
 });

@@ -5,12 +5,13 @@
  * 413. Answers { result, savedResult }.
  */
 import { endpoint } from '../../../lib/http/endpoint';
+import { workRun } from '../../../lib/work/work-pool.server';
 import { vibrationSavedResult } from '../../../lib/analysis/saved-result-tools';
 import {
   VIBRATION_JSON_MAX_BYTES,
   VibrationInputSchema,
   VibrationOptionsSchema,
-  vibrationAnalyse,
+  type VibrationResult,
 } from '../../../lib/analysis/vibration';
 import { VIBRATION_CSV_MAX_BYTES, vibrationInputFromCsv } from '../../../lib/analysis/vibration-csv';
 import { parseInput } from '../../../lib/validation';
@@ -22,7 +23,8 @@ export const POST = endpoint({ access: ['anyone'] }, async ({ request, url }) =>
     csvBytes: VIBRATION_CSV_MAX_BYTES,
   });
   if (body.kind === 'json') {
-    const result = vibrationAnalyse(parseInput(VibrationInputSchema, body.body));
+    const input = parseInput(VibrationInputSchema, body.body);
+    const result = (await workRun({ kind: 'analysis', call: { tool: 'vibration', input } })) as VibrationResult;
     return { result, savedResult: vibrationSavedResult(result) };
   }
   const segment = url.searchParams.get('segmentLength');
@@ -35,6 +37,9 @@ export const POST = endpoint({ access: ['anyone'] }, async ({ request, url }) =>
     'query',
   );
   const { input, unitSource } = vibrationInputFromCsv(body.text, options);
-  const result = vibrationAnalyse(input, unitSource);
+  const result = (await workRun({
+    kind: 'analysis',
+    call: { tool: 'vibration', input, unitSource },
+  })) as VibrationResult;
   return { result, savedResult: vibrationSavedResult(result) };
 });

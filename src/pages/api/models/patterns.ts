@@ -1,5 +1,5 @@
 import { PatternsRequestSchema } from '../../../lib/kit/kit-inputs';
-import { kitPatterns } from '../../../lib/kit/kit-preview.server';
+import { workRun } from '../../../lib/work/work-pool.server';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
@@ -8,5 +8,5 @@ import { KIT_VIEWERS } from '../kits/_access';
 /** Flat pieces (outline, folds, tabs, hinge tree) and wire boom threads of a model at a scale on a paper weight. */
 export const POST = endpoint({ access: KIT_VIEWERS }, async (context) => {
   const input = parseInput(PatternsRequestSchema, await readJson(context.request, 200_000), 'patterns request');
-  return kitPatterns(input);
+  return workRun({ kind: 'kit-patterns', input });
 });
