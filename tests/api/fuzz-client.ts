@@ -11,6 +11,9 @@ import { BASE_URL } from './harness';
 /** The fuzz suite's own source address on the loopback network (127.0.0.0/8 all reaches this host). */
 export const FUZZ_LOCAL_ADDRESS = '127.0.0.73';
 
+/** Longest wait for an answer before the case fails (far above the 2 s the suite asserts). */
+const ANSWER_WAIT_MS = 15_000;
+
 const target = new URL(BASE_URL);
 const agent = new Agent({ keepAlive: true, maxSockets: 8, localAddress: FUZZ_LOCAL_ADDRESS });
 
@@ -48,6 +51,10 @@ export function fuzzSend(r: FuzzRequest): Promise<FuzzAnswer> {
         const chunks: Buffer[] = [];
         res.on('data', (c: Buffer) => chunks.push(c));
         res.on('error', reject);
+        // A connection closed before the answer's end is a failure, not a wait forever.
+        res.on('close', () => {
+          if (!res.complete) reject(new Error(`${r.method} ${r.path.slice(0, 120)}: connection closed mid-answer`));
+        });
         res.on('end', () =>
           resolve({
             status: res.statusCode ?? 0,
@@ -59,6 +66,9 @@ export function fuzzSend(r: FuzzRequest): Promise<FuzzAnswer> {
       },
     );
     req.on('error', reject);
+    req.setTimeout(ANSWER_WAIT_MS, () =>
+      req.destroy(new Error(`${r.method} ${r.path.slice(0, 120)}: no answer within ${ANSWER_WAIT_MS} ms`)),
+    );
     req.end(r.body);
   });
 }
