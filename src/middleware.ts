@@ -33,7 +33,10 @@ export const onRequest = defineMiddleware(async (context, next) => {
   if (!verdict.allowed)
     return crossSiteResponse(context.request.method, context.url, verdict.received, isApi, requestId);
   try {
-    context.locals.actor = await actorResolve(context);
+    // A printed live link answers without a session lookup (its page reads no actor).
+    context.locals.actor = context.url.pathname.startsWith('/go/')
+      ? { kind: 'anonymous' }
+      : await actorResolve(context);
     let response = await next();
     // Astro answers a method the route does not export with an empty 404 and then renders the HTML 404 page.
     if (isApi && response.status === 404 && response.body === null)

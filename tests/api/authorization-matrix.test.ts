@@ -155,6 +155,23 @@ const ROWS: Row[] = [
     body: {},
     expect: accounts(403, 403, 404, 404),
   },
+  // Live links: staff only
+  { route: '/api/links', method: 'GET', expect: accounts(403, 403, 200, 200) },
+  { route: '/api/links', method: 'POST', body: {}, expect: accounts(403, 403, 400, 400) },
+  { route: '/api/links/[id]', method: 'GET', path: `/api/links/${MISSING}`, expect: accounts(403, 403, 404, 404) },
+  {
+    route: '/api/links/[id]',
+    method: 'PATCH',
+    path: `/api/links/${MISSING}`,
+    body: {},
+    expect: accounts(403, 403, 404, 404),
+  },
+  {
+    route: '/api/links/[id]/qr',
+    method: 'GET',
+    path: `/api/links/${MISSING}/qr`,
+    expect: accounts(403, 403, 404, 404),
+  },
   { route: '/api/events/registrations/confirm', method: 'POST', body: {}, expect: all(400) },
   { route: '/api/events/registrations/cancel', method: 'POST', body: {}, expect: all(400) },
   // Classes

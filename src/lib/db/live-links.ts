@@ -1,0 +1,105 @@
+/** Queries on live links and their scans (a count per link and UTC day; nothing about who scanned). */
+import type { Knex } from 'knex';
+import { linkCodeNew } from '../links/link-code';
+import { isUuid } from './accounts';
+import { db } from './knex';
+
+export interface LiveLinkView {
+  id: string;
+  code: string;
+  title: string;
+  target: string;
+  kitId: string | null;
+  retired: boolean;
+  scans: number;
+  createdAt: string;
+}
+
+const view = (r: Record<string, unknown>): LiveLinkView => ({
+  id: r.id as string,
+  code: r.code as string,
+  title: r.title as string,
+  target: r.target_url as string,
+  kitId: (r.kit_id as string | null) ?? null,
+  retired: r.retired_at !== null,
+  scans: Number(r.scans ?? 0),
+  createdAt: (r.created_at as Date).toISOString(),
+});
+
+const withScans = (trx: Knex) =>
+  trx('live_links as l').select(
+    'l.*',
+    trx.raw('(SELECT coalesce(sum(s.count), 0) FROM live_link_scans s WHERE s.link_id = l.id) AS scans'),
+  );
+
+/**
+ * The current target of a live code, counting the scan in the same statement (one indexed lookup on the code,
+ * one upsert on the link and day); null for an unknown or retired code.
+ */
+export async function liveLinkScan(code: string, trx: Knex = db()): Promise<string | null> {
+  const result = await trx.raw<{ rows: { target_url: string }[] }>(
+    `WITH l AS (SELECT id, target_url FROM live_links WHERE code = ? AND retired_at IS NULL),
+     s AS (
+       INSERT INTO live_link_scans (link_id, day, count)
+       SELECT id, (now() AT TIME ZONE 'UTC')::date, 1 FROM l
+       ON CONFLICT (link_id, day) DO UPDATE SET count = live_link_scans.count + 1
+     )
+     SELECT target_url FROM l`,
+    [code],
+  );
+  return result.rows[0]?.target_url ?? null;
+}
+
+/** Creates a link with a fresh code (a new code on the rare collision). */
+export async function liveLinkInsert(
+  o: { title: string; target: string; createdBy: string | null; kitId?: string | null },
+  trx: Knex = db(),
+): Promise<LiveLinkView> {
+  for (let attempt = 0; ; attempt++) {
+    const rows = await trx('live_links')
+      .insert({
+        code: linkCodeNew(),
+        title: o.title,
+        target_url: o.target,
+        created_by: o.createdBy,
+        kit_id: o.kitId ?? null,
+      })
+      .onConflict('code')
+      .ignore()
+      .returning('id');
+    if (rows[0]) return (await liveLinkById(rows[0].id, trx))!;
+    if (attempt > 5) throw new Error('no free live-link code after several tries');
+  }
+}
+
+export async function liveLinkById(id: string, trx: Knex = db()): Promise<LiveLinkView | null> {
+  if (!isUuid(id)) return null;
+  const row = await withScans(trx).where('l.id', id).first();
+  return row ? view(row) : null;
+}
+
+export async function liveLinkList(trx: Knex = db()): Promise<LiveLinkView[]> {
+  return (await withScans(trx).orderBy('l.created_at', 'desc')).map(view);
+}
+
+export async function liveLinkUpdate(
+  id: string,
+  patch: { title?: string; target?: string; retired?: boolean },
+  trx: Knex = db(),
+): Promise<boolean> {
+  if (!isUuid(id)) return false;
+  const cols: Record<string, unknown> = { updated_at: trx.fn.now() };
+  if (patch.title !== undefined) cols.title = patch.title;
+  if (patch.target !== undefined) cols.target_url = patch.target;
+  if (patch.retired !== undefined) cols.retired_at = patch.retired ? trx.fn.now() : null;
+  return (await trx('live_links').where({ id }).update(cols)) > 0;
+}
+
+/** Scans per UTC day, oldest first. */
+export async function liveLinkScansByDay(id: string, trx: Knex = db()): Promise<{ day: string; count: number }[]> {
+  const rows = await trx('live_link_scans')
+    .where({ link_id: id })
+    .orderBy('day')
+    .select(trx.raw("to_char(day, 'YYYY-MM-DD') AS day"), 'count');
+  return rows.map((r) => ({ day: r.day as string, count: Number(r.count) }));
+}

@@ -1,0 +1,64 @@
+/**
+ * Live-link codes and targets. A code is 6–8 characters from an alphabet without look-alikes (no 0/O, 1/I/L),
+ * so it can be typed from a printed sheet; case does not matter when typed. A target is a path on this site or
+ * an https address elsewhere.
+ */
+import { z } from 'zod';
+
+/** Digits 2–9 and capitals without I, L, O (common practice, no source). */
+export const LINK_CODE_ALPHABET = '23456789ABCDEFGHJKMNPQRSTUVWXYZ';
+export const LINK_CODE_LENGTH = 6;
+export const LINK_CODE_PATTERN = new RegExp(`^[${LINK_CODE_ALPHABET}]{6,8}$`);
+export const LINK_TITLE_MAX = 120;
+export const LINK_TARGET_MAX = 2000;
+
+/** A random code from crypto.getRandomValues (rejection sampling, so every character is equally likely). */
+export function linkCodeNew(length = LINK_CODE_LENGTH): string {
+  const n = LINK_CODE_ALPHABET.length;
+  const limit = 256 - (256 % n);
+  let code = '';
+  while (code.length < length) {
+    for (const byte of crypto.getRandomValues(new Uint8Array(length * 2))) {
+      if (byte < limit && code.length < length) code += LINK_CODE_ALPHABET[byte % n];
+    }
+  }
+  return code;
+}
+
+/** A typed or scanned code in its stored form, or null when it cannot be one. */
+export function linkCodeNormal(typed: string): string | null {
+  const code = typed.trim().toUpperCase();
+  return LINK_CODE_PATTERN.test(code) ? code : null;
+}
+
+/** True for a path on this site ("/activities/…", not "//host") or an https URL with a host. */
+export function linkTargetValid(target: string): boolean {
+  if (target.startsWith('/')) return !target.startsWith('//') && !target.includes('\\');
+  try {
+    const url = new URL(target);
+    return url.protocol === 'https:' && url.hostname !== '' && url.username === '' && url.password === '';
+  } catch {
+    return false;
+  }
+}
+
+const LinkTargetSchema = z
+  .string()
+  .trim()
+  .max(LINK_TARGET_MAX)
+  .refine(linkTargetValid, 'the target must be a path on this site (/activities) or an https:// address');
+
+export const LinkCreateSchema = z
+  .object({
+    title: z.string().trim().min(1, 'give the link a title').max(LINK_TITLE_MAX),
+    target: LinkTargetSchema,
+  })
+  .strict();
+
+export const LinkPatchSchema = z
+  .object({
+    title: z.string().trim().min(1).max(LINK_TITLE_MAX).optional(),
+    target: LinkTargetSchema.optional(),
+    retired: z.boolean().optional(),
+  })
+  .strict();

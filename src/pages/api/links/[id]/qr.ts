@@ -1,0 +1,28 @@
+import QRCode from 'qrcode';
+import { STAFF } from '../../../../lib/auth/actor';
+import { siteUrl } from '../../../../lib/auth/site-url';
+import { liveLinkById } from '../../../../lib/db/live-links';
+import { NotFoundError } from '../../../../lib/errors';
+import { endpoint } from '../../../../lib/http/endpoint';
+
+/**
+ * Error correction for print: level Q restores up to about 25 % of damaged codewords (ISO/IEC 18004, table of
+ * error correction levels), enough for a creased or scuffed bookmark, with a smaller symbol than H; the short
+ * /go/ address keeps the symbol at version 2–3 either way.
+ */
+export const LINK_QR_ERROR_CORRECTION = 'Q';
+
+/** The link's QR code as SVG (default) or PNG (?format=png), encoding the short /go/CODE address (staff). */
+export const GET = endpoint({ access: STAFF }, async ({ params, url }) => {
+  const link = await liveLinkById(params.id ?? '');
+  if (!link) throw new NotFoundError('No live link has this id.');
+  const address = new URL(`/go/${link.code}`, siteUrl(url)).toString();
+  const options = { errorCorrectionLevel: LINK_QR_ERROR_CORRECTION, margin: 4 } as const;
+  const headers = { 'cache-control': 'no-store', 'content-disposition': `inline; filename="${link.code}"` };
+  if (url.searchParams.get('format') === 'png') {
+    const png = await QRCode.toBuffer(address, { ...options, type: 'png', width: 1024 });
+    return new Response(new Uint8Array(png), { headers: { ...headers, 'content-type': 'image/png' } });
+  }
+  const svg = await QRCode.toString(address, { ...options, type: 'svg' });
+  return new Response(svg, { headers: { ...headers, 'content-type': 'image/svg+xml' } });
+});
