@@ -7,7 +7,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
-import { PROJECT_ROOT, TEST_DATABASE, databaseReset, databaseUrl, postgresRunning, postgresStop } from './lib/postgres';
+import { PROJECT_ROOT, TEST_DATABASE, databaseReset, databaseUrl, postgresLease } from './lib/postgres';
 import { databaseUp } from './db';
 import { migrateLatest, seedDemoIfEmpty } from './lib/migrate';
 import { smtpFakeStart } from './lib/smtp-fake';
@@ -105,34 +105,37 @@ async function main(): Promise<void> {
     step('types (astro check)', 'npm', ['run', '--silent', 'check']);
   }
 
-  // What this run starts it stops: the cluster too, unless it was already running (npm start, another run).
-  const clusterWasRunning = postgresRunning();
-  await databaseUp();
-  const dbUrl = databaseUrl(TEST_DATABASE);
-  await databaseReset(TEST_DATABASE);
-  await migrateLatest(dbUrl);
-  await seedDemoIfEmpty(dbUrl);
-  const mail = await smtpFakeStart(smtpPort, mailHttpPort);
-  chromiumEnsure();
-  appBuild();
-  const env = appEnv({ databaseUrl: dbUrl, host, port, smtpPort, mailHttpPort });
-  const serverLog = join(reportDir, 'server.log');
-  const server = await serverStart({ ...env, KW_TEST_ROUTES: '1' }, { logFile: serverLog });
-  const testEnv = {
-    ...env,
-    KW_TEST_BASE_URL: server.url,
-    KW_TEST_MAIL_URL: `http://127.0.0.1:${mailHttpPort}`,
-    KW_TEST_DATABASE_URL: dbUrl,
-    KW_TEST_SERVER_LOG: serverLog,
-    KW_ADMIN_DATABASE_URL: databaseUrl('postgres'),
-  };
+  // What this run starts it stops, whatever step fails: the cluster too, unless it was already running (npm
+  // start, another run).
+  const clusterRelease = postgresLease();
+  const started: { stop(): Promise<void> }[] = [];
   try {
+    await databaseUp();
+    const dbUrl = databaseUrl(TEST_DATABASE);
+    await databaseReset(TEST_DATABASE);
+    await migrateLatest(dbUrl);
+    await seedDemoIfEmpty(dbUrl);
+    const mail = await smtpFakeStart(smtpPort, mailHttpPort);
+    started.push({ stop: () => mail.close() });
+    chromiumEnsure();
+    appBuild();
+    const env = appEnv({ databaseUrl: dbUrl, host, port, smtpPort, mailHttpPort });
+    const serverLog = join(reportDir, 'server.log');
+    const server = await serverStart({ ...env, KW_TEST_ROUTES: '1' }, { logFile: serverLog });
+    started.push(server);
+    const testEnv = {
+      ...env,
+      KW_TEST_BASE_URL: server.url,
+      KW_TEST_MAIL_URL: `http://127.0.0.1:${mailHttpPort}`,
+      KW_TEST_DATABASE_URL: dbUrl,
+      KW_TEST_SERVER_LOG: serverLog,
+      KW_ADMIN_DATABASE_URL: databaseUrl('postgres'),
+    };
     await vitest('unit, database and API tests', 'vitest.config.ts', testEnv);
     await vitest('browser tests', 'vitest.browser.config.ts', testEnv);
   } finally {
-    await server.stop();
-    await mail.close();
-    if (!clusterWasRunning) postgresStop();
+    for (const s of started.reverse()) await s.stop();
+    clusterRelease();
   }
 }
 

@@ -127,6 +127,18 @@ export function postgresStop(): void {
   console.log('[db] PostgreSQL stopped.');
 }
 
+/**
+ * Starts the cluster for one run (`npm test`) and answers how to give it back: the release stops the cluster only
+ * when this call started it, so a cluster that `npm start` or another run had up stays up.
+ */
+export function postgresLease(options: EnsureOptions = {}): () => void {
+  const wasRunning = postgresRunning();
+  postgresEnsure(options);
+  return () => {
+    if (!wasRunning) postgresStop();
+  };
+}
+
 /** Connection URL for a database on the project cluster (or DATABASE_URL's server). */
 export function databaseUrl(database: string): string {
   if (process.env.DATABASE_URL) {
