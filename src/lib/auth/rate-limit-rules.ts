@@ -24,4 +24,8 @@ export const RATE_LIMITS = {
   classCodeCode: { name: 'classcode:code', max: 200, windowSeconds: 60 * 60 },
   /** Guessing one-time link tokens (verification, reset, invitation) from one address. */
   tokenIp: { name: 'token:ip', max: 60, windowSeconds: 15 * 60 },
+  /** Event registrations without an account from one address: a school's staff signing up stay well below it. */
+  eventRegistrationIp: { name: 'eventreg:ip', max: 30, windowSeconds: 60 * 60 },
+  /** Confirmation mails one address can be sent an hour, so a form cannot be used to flood someone's inbox. */
+  eventRegistrationEmail: { name: 'eventreg:email', max: 5, windowSeconds: 60 * 60 },
 } as const satisfies Record<string, RateLimitRule>;

@@ -7,6 +7,7 @@
 import type { Knex } from 'knex';
 import type { UserActor } from '../auth/actor-require';
 import { tokenHash, tokenNew } from '../auth/tokens.server';
+import { isUuid } from '../db/accounts';
 import { db } from '../db/knex';
 import { ConflictError, InputError, NotFoundError } from '../errors';
 import { mailSend } from '../mail/transport.server';
@@ -63,7 +64,10 @@ export function eventMailFacts(event: EventRow, site: string): EventMailFacts {
 
 /** The published, not yet started event, locked for this transaction. */
 async function eventForRegistration(trx: Knex, eventId: string): Promise<EventRow> {
-  const event = (await trx('events').where({ id: eventId }).forUpdate().first()) as EventRow | undefined;
+  // Text that is no UUID names no event (PostgreSQL would refuse it as a uuid: 22P02).
+  const event = isUuid(eventId)
+    ? ((await trx('events').where({ id: eventId }).forUpdate().first()) as EventRow | undefined)
+    : undefined;
   if (!event || event.state !== 'published') throw new NotFoundError('No published event has this address.');
   if (event.starts_at.getTime() <= Date.now()) {
     throw new ConflictError('This event has already started; registration is closed.');
