@@ -10,11 +10,13 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { decodePDFRawStream, PDFDict, PDFDocument, PDFName, PDFRawStream, PDFRef } from 'pdf-lib';
-import { afterAll, describe, expect, test } from 'vitest';
+import { jsPDF } from 'jspdf';
+import { afterAll, describe, expect, test, vi } from 'vitest';
 import { guidePdf } from '../../../src/lib/activities/guide-pdf';
 import { buildKit } from '../../../src/lib/kit/build-kit';
 import { KitRequestSchema } from '../../../src/lib/kit/kit-request';
-import { PDF_FONT_NAMES } from '../../../src/lib/render/pdf-fonts';
+import { kitFonts } from '../../../src/lib/kit/fonts.server';
+import { PDF_FONT_NAMES, pdfFontsAdd } from '../../../src/lib/render/pdf-fonts';
 import { activitiesParsed } from '../activities/activity-files';
 import { demoModel } from '../geometry/fixtures';
 import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
@@ -113,5 +115,26 @@ describe('PDF fonts', () => {
     expect(execFileSync('qpdf', ['--check', path], { encoding: 'utf8' })).toMatch(
       /No syntax or stream encoding errors/,
     );
+  });
+
+  test("turns each font file into jspdf's form once per process or worker, not once per document", async () => {
+    // kitFonts hands every build of a process (a pool worker is one) the same byte arrays.
+    const [first, second] = await Promise.all([kitFonts(), kitFonts()]);
+    expect(second.fontRegular).toBe(first.fontRegular);
+    expect(second.fontBold).toBe(first.fontBold);
+    // Fresh arrays, so nothing is prepared yet; the preparation spreads 32 KiB chunks into String.fromCharCode.
+    const own = { fontRegular: new Uint8Array(fonts.fontRegular), fontBold: new Uint8Array(fonts.fontBold) };
+    const chunks = (bytes: Uint8Array) => Math.ceil(bytes.length / 0x8000);
+    const spy = vi.spyOn(String, 'fromCharCode');
+    const chunkCalls = () => spy.mock.calls.filter((args) => args.length > 1_000).length;
+    try {
+      pdfFontsAdd(new jsPDF({ unit: 'mm', format: 'letter' }), own);
+      expect(chunkCalls()).toBe(chunks(own.fontRegular) + chunks(own.fontBold));
+      spy.mockClear();
+      for (let i = 0; i < 3; i++) pdfFontsAdd(new jsPDF({ unit: 'mm', format: 'letter' }), own);
+      expect(chunkCalls()).toBe(0);
+    } finally {
+      spy.mockRestore();
+    }
   });
 });
