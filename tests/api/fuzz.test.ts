@@ -86,10 +86,25 @@ async function cookieFor(caller: Caller, cast: Cast): Promise<Record<string, str
   return { cookie: await userSessionCookie(knex, cast[caller].id) };
 }
 
-/** The zod schemas a route file checks its input with (the plugin's export), or none. */
-async function routeSchemas(file: string): Promise<ZodTypeAny[]> {
-  const module = (await import(/* @vite-ignore */ file)) as Record<string, unknown>;
-  return Object.values((module[ROUTE_INPUT_SCHEMAS_EXPORT] ?? {}) as Record<string, ZodTypeAny>);
+const schemasByFile = new Map<string, Promise<ZodTypeAny[]>>();
+let importsDone: Promise<unknown> = Promise.resolve();
+
+/**
+ * The zod schemas a route file checks its input with (the plugin's export), or none. Route modules are imported
+ * one at a time: concurrent dynamic imports of modules that import each other in a cycle can wait on each other
+ * forever in vitest's module runner, which stalled every concurrent test that imported a worker-pool route.
+ */
+function routeSchemas(file: string): Promise<ZodTypeAny[]> {
+  let schemas = schemasByFile.get(file);
+  if (!schemas) {
+    schemas = importsDone.then(async () => {
+      const module = (await import(/* @vite-ignore */ file)) as Record<string, unknown>;
+      return Object.values((module[ROUTE_INPUT_SCHEMAS_EXPORT] ?? {}) as Record<string, ZodTypeAny>);
+    });
+    importsDone = schemas.catch(() => undefined);
+    schemasByFile.set(file, schemas);
+  }
+  return schemas;
 }
 
 /** What a path parameter may be: ids that exist, one that does not, and text that is no id at all. */

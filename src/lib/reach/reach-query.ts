@@ -4,7 +4,14 @@
  */
 import { z } from 'zod';
 import { REACH_FIGURE_IDS } from './figures';
-import { dateParse, periodMonths, quarterPeriod, REACH_BUCKETS, REACH_PERIOD_MAX_MONTHS } from './period';
+import {
+  dateParse,
+  periodMonths,
+  QUARTER_PATTERN,
+  quarterPeriod,
+  REACH_BUCKETS,
+  REACH_PERIOD_MAX_MONTHS,
+} from './period';
 
 /** Ways a breakdown table is grouped. */
 export const REACH_GROUPINGS = ['region', 'setting', 'high_need', 'school'] as const;
@@ -23,12 +30,28 @@ export const REACH_PAGE_SIZE_MAX = 200;
 /** Longest region or search text accepted. */
 export const REACH_TEXT_MAX = 120;
 
+/**
+ * Years a reach period may fall in: nothing is recorded before 2000, and a year past 2099 is a typo. Dates outside
+ * would also leave the four-digit form the database and the labels expect.
+ */
+export const REACH_YEAR_MIN = 2000;
+export const REACH_YEAR_MAX = 2099;
+const yearInRange = (s: string) => Number(s.slice(0, 4)) >= REACH_YEAR_MIN && Number(s.slice(0, 4)) <= REACH_YEAR_MAX;
+const YEAR_RANGE_MESSAGE = `Pick a year from ${REACH_YEAR_MIN} to ${REACH_YEAR_MAX}.`;
+
 const isoDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Write the date as YYYY-MM-DD, e.g. 2026-07-01.')
   .refine((s) => !Number.isNaN(dateParse(s).getTime()) && dateParse(s).toISOString().startsWith(s), {
     message: 'That date does not exist.',
-  });
+  })
+  .refine(yearInRange, YEAR_RANGE_MESSAGE);
+
+/** A calendar quarter, YYYY-Qn. */
+export const QuarterSchema = z
+  .string()
+  .regex(QUARTER_PATTERN, 'Write the quarter as YYYY-Qn, e.g. 2026-Q3.')
+  .refine(yearInRange, YEAR_RANGE_MESSAGE);
 
 const booleanText = z.enum(['true', 'false']).transform((v) => v === 'true');
 
@@ -52,10 +75,7 @@ const PeriodInputSchema = z
     /** First day after the period, YYYY-MM-DD. */
     to: isoDate.optional(),
     /** A calendar quarter, YYYY-Qn; instead of from and to. */
-    quarter: z
-      .string()
-      .regex(/^\d{4}-Q[1-4]$/, 'Write the quarter as YYYY-Qn, e.g. 2026-Q3.')
-      .optional(),
+    quarter: QuarterSchema.optional(),
   })
   .transform((v, ctx) => {
     const period = v.quarter ? quarterPeriod(v.quarter)! : v.from && v.to ? { from: v.from, to: v.to } : null;
@@ -115,7 +135,7 @@ export type ReachRowsQuery = z.infer<typeof ReachRowsQuerySchema>;
 
 /** GET /api/reach/report.pdf: one calendar quarter. */
 export const ReachReportQuerySchema = z.object({
-  quarter: z.string().regex(/^\d{4}-Q[1-4]$/, 'Write the quarter as YYYY-Qn, e.g. 2026-Q3.'),
+  quarter: QuarterSchema,
 });
 
 /** A URL query string as a plain object (the last value of a repeated key wins). */
