@@ -233,3 +233,12 @@ export async function attendanceReplace(
     })),
   );
 }
+
+/** True when this account holds a confirmed place on the event. */
+export async function registrationConfirmed(eventId: string, userId: string, trx: Knex = db()): Promise<boolean> {
+  if (!isUuid(eventId)) return false;
+  const row = await trx('event_registrations')
+    .where({ event_id: eventId, user_id: userId, state: 'confirmed' })
+    .first('id');
+  return row !== undefined;
+}

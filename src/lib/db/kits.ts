@@ -112,3 +112,9 @@ export async function kitRename(
 export async function kitDelete(id: string, trx: Knex = db()): Promise<boolean> {
   return (await trx('kits').where({ id }).delete()) > 0;
 }
+
+/** The kit with this id whoever asks (for an event's plan, whose access the event decides), else null. */
+export async function kitById(id: string, trx: Knex = db()): Promise<KitRow | null> {
+  if (!isUuid(id)) return null;
+  return ((await kitSelect(trx).where('kits.id', id).first()) as KitRow | undefined) ?? null;
+}

@@ -124,11 +124,9 @@ export function stakeOutPlan(model: Model, venue: Venue, scaleDenominator: numbe
   const all = [...meshPoints, ...booms.map((b) => b.tip)];
   const extent = [0, 1, 2].map((i) => Math.max(...all.map((p) => p[i]!)) - Math.min(...all.map((p) => p[i]!)));
   const [ia, ib] = [0, 1, 2].sort((p, q) => extent[q]! - extent[p]! || p - q);
-  const ea: Vec3Mm = [0, 0, 0];
-  ea[ia!] = 1;
-  const ic = 3 - ia! - ib!;
-  const ec: Vec3Mm = [0, 0, 0];
-  ec[ic] = 1;
+  const axis = (i: number): Vec3Mm => [i === 0 ? 1 : 0, i === 1 ? 1 : 0, i === 2 ? 1 : 0];
+  const ea = axis(ia!);
+  const ec = axis(3 - ia! - ib!);
   const eb = vec3Cross(ec, ea);
   const ground = (p: Vec3Mm): Vec2Mm => [
     (p[0] * ea[0] + p[1] * ea[1] + p[2] * ea[2]) / n / 1000,
