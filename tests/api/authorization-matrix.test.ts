@@ -155,6 +155,12 @@ const ROWS: Row[] = [
     body: {},
     expect: accounts(403, 403, 404, 404),
   },
+  {
+    route: '/api/events/[id]/plan.pdf',
+    method: 'GET',
+    path: `/api/events/${MISSING}/plan.pdf`,
+    expect: accounts(404, 404, 404, 404),
+  },
   // Live links: staff only
   { route: '/api/links', method: 'GET', expect: accounts(403, 403, 200, 200) },
   { route: '/api/links', method: 'POST', body: {}, expect: accounts(403, 403, 400, 400) },
@@ -170,6 +176,12 @@ const ROWS: Row[] = [
     route: '/api/links/[id]/qr',
     method: 'GET',
     path: `/api/links/${MISSING}/qr`,
+    expect: accounts(403, 403, 404, 404),
+  },
+  {
+    route: '/api/links/[id]/poster.pdf',
+    method: 'GET',
+    path: `/api/links/${MISSING}/poster.pdf`,
     expect: accounts(403, 403, 404, 404),
   },
   { route: '/api/events/registrations/confirm', method: 'POST', body: {}, expect: all(400) },

@@ -103,3 +103,10 @@ export async function liveLinkScansByDay(id: string, trx: Knex = db()): Promise<
     .select(trx.raw("to_char(day, 'YYYY-MM-DD') AS day"), 'count');
   return rows.map((r) => ({ day: r.day as string, count: Number(r.count) }));
 }
+
+/** The live code of a kit's own link, or null when the kit has none or it is retired. */
+export async function liveLinkCodeForKit(kitId: string, trx: Knex = db()): Promise<string | null> {
+  if (!isUuid(kitId)) return null;
+  const row = await trx('live_links').where({ kit_id: kitId }).whereNull('retired_at').first('code');
+  return (row?.code as string | undefined) ?? null;
+}

@@ -9,6 +9,12 @@ import { z } from 'zod';
 export const LINK_CODE_ALPHABET = '23456789ABCDEFGHJKMNPQRSTUVWXYZ';
 export const LINK_CODE_LENGTH = 6;
 export const LINK_CODE_PATTERN = new RegExp(`^[${LINK_CODE_ALPHABET}]{6,8}$`);
+/**
+ * Error correction for print: level Q restores up to about 25 % of damaged codewords (ISO/IEC 18004, table of
+ * error correction levels), enough for a creased or scuffed bookmark, with a smaller symbol than H; the short
+ * /go/ address keeps the symbol at version 2–3 either way.
+ */
+export const LINK_QR_ERROR_CORRECTION = 'Q' as const;
 export const LINK_TITLE_MAX = 120;
 export const LINK_TARGET_MAX = 2000;
 

@@ -8,9 +8,15 @@ import type { RectMm } from '../layout/types';
 /** Light modules around the symbol; ISO/IEC 18004:2015 §9.1 asks for 4. */
 export const QR_QUIET_ZONE_MODULES = 4;
 
-/** Dark modules of the symbol for `text`, error correction M, as runs in module units (row, first column, length). */
-export function qrRuns(text: string): { size: number; runs: { row: number; col: number; length: number }[] } {
-  const { modules } = QRCode.create(text, { errorCorrectionLevel: 'M' });
+/** Error correction levels of ISO/IEC 18004 (L, M, Q, H). */
+export type QrLevel = 'L' | 'M' | 'Q' | 'H';
+
+/** Dark modules of the symbol for `text` (error correction M unless given), as runs in module units (row, first column, length). */
+export function qrRuns(
+  text: string,
+  level: QrLevel = 'M',
+): { size: number; runs: { row: number; col: number; length: number }[] } {
+  const { modules } = QRCode.create(text, { errorCorrectionLevel: level });
   const size = modules.size;
   const runs: { row: number; col: number; length: number }[] = [];
   for (let row = 0; row < size; row++) {
@@ -29,8 +35,8 @@ export function qrRuns(text: string): { size: number; runs: { row: number; col: 
 }
 
 /** The dark rectangles (sheet mm) of a QR code filling the square `box` with its quiet zone inside it. */
-export function qrRects(text: string, box: RectMm): RectMm[] {
-  const { size, runs } = qrRuns(text);
+export function qrRects(text: string, box: RectMm, level: QrLevel = 'M'): RectMm[] {
+  const { size, runs } = qrRuns(text, level);
   const side = Math.min(box.widthMm, box.heightMm);
   const module = side / (size + 2 * QR_QUIET_ZONE_MODULES);
   const x0 = box.xMm + QR_QUIET_ZONE_MODULES * module;

@@ -4,13 +4,7 @@ import { siteUrl } from '../../../../lib/auth/site-url';
 import { liveLinkById } from '../../../../lib/db/live-links';
 import { NotFoundError } from '../../../../lib/errors';
 import { endpoint } from '../../../../lib/http/endpoint';
-
-/**
- * Error correction for print: level Q restores up to about 25 % of damaged codewords (ISO/IEC 18004, table of
- * error correction levels), enough for a creased or scuffed bookmark, with a smaller symbol than H; the short
- * /go/ address keeps the symbol at version 2–3 either way.
- */
-export const LINK_QR_ERROR_CORRECTION = 'Q';
+import { LINK_QR_ERROR_CORRECTION } from '../../../../lib/links/link-code';
 
 /** The link's QR code as SVG (default) or PNG (?format=png), encoding the short /go/CODE address (staff). */
 export const GET = endpoint({ access: STAFF }, async ({ params, url }) => {
