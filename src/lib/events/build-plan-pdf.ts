@@ -313,6 +313,8 @@ function crewSection(flow: PdfFlow): void {
 }
 
 function signOff(flow: PdfFlow): void {
+  // Heading, line and four signature lines stay on one page.
+  pdfFlowEnsure(flow, 70);
   pdfFlowHeading(flow, 'Host school sign-off');
   pdfFlowText(flow, 'The host school approves the venue, the date and this plan.', { sizePt: 9, afterMm: 4 });
   const { doc } = flow;
