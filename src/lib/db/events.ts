@@ -1,6 +1,7 @@
 /** Queries on events, their registrations and attendance. */
 import type { Knex } from 'knex';
 import type { EventCreate, EventPatch } from '../events/event-schemas';
+import { EVENT_DEFAULT_DURATION_HOURS } from '../events/event-ics';
 import { eventLocalToUtc, eventUtcToLocal } from '../events/event-time';
 import { isUuid } from './accounts';
 import { db } from './knex';
@@ -20,6 +21,8 @@ export interface EventView {
   timeZone: string;
   capacity: number | null;
   kitId: string | null;
+  /** The kit's title, when the event names a kit. */
+  kitTitle: string | null;
   activitySlug: string | null;
   description: string;
   venuePreset: string | null;
@@ -54,6 +57,7 @@ function eventView(r: Row): EventView {
     timeZone: zone,
     capacity: num(r.capacity),
     kitId: (r.kit_id as string | null) ?? null,
+    kitTitle: (r.kit_title as string | null) ?? null,
     activitySlug: (r.activity_slug as string | null) ?? null,
     description: r.description as string,
     venuePreset: (r.venue_preset as string | null) ?? null,
@@ -69,9 +73,11 @@ function eventView(r: Row): EventView {
 function eventQuery(trx: Knex) {
   return trx('events as e')
     .leftJoin('schools as s', 's.id', 'e.school_id')
+    .leftJoin('kits as k', 'k.id', 'e.kit_id')
     .select(
       'e.*',
       's.name as school_name',
+      'k.title as kit_title',
       trx.raw(
         "(SELECT count(*) FROM event_registrations r WHERE r.event_id = e.id AND r.state = 'confirmed') AS places_taken",
       ),
@@ -149,19 +155,52 @@ export async function eventById(id: string, trx: Knex = db()): Promise<EventView
   return row ? eventView(row) : null;
 }
 
+/** Published events that have not ended (their end, or start plus the default length, is still ahead). */
+const upcomingPublished = (query: Knex.QueryBuilder) =>
+  query
+    .where('e.state', 'published')
+    .whereRaw(`coalesce(e.ends_at, e.starts_at + make_interval(hours => ?)) > now()`, [EVENT_DEFAULT_DURATION_HOURS]);
+
 /** Published events that have not ended, soonest first (the public list). */
 export async function eventListPublished(trx: Knex = db()): Promise<EventView[]> {
-  const rows = await eventQuery(trx)
-    .where('e.state', 'published')
-    .whereRaw("coalesce(e.ends_at, e.starts_at + interval '2 hours') > now()")
-    .orderBy('e.starts_at');
+  const rows = await upcomingPublished(eventQuery(trx)).orderBy('e.starts_at');
   return rows.map(eventView);
+}
+
+export interface EventPage {
+  events: EventView[];
+  /** Events on every page together. */
+  total: number;
+}
+
+/** One page of the public list (published, not ended, soonest first); `page` counts from 1. */
+export async function eventPagePublished(page: number, pageSize: number, trx: Knex = db()): Promise<EventPage> {
+  const [rows, count] = await Promise.all([
+    upcomingPublished(eventQuery(trx))
+      .orderBy([{ column: 'e.starts_at' }, { column: 'e.id' }])
+      .limit(pageSize)
+      .offset((page - 1) * pageSize),
+    upcomingPublished(trx('events as e')).count({ count: '*' }).first(),
+  ]);
+  return { events: rows.map(eventView), total: Number(count?.count ?? 0) };
 }
 
 /** Every event, newest start first (coordinators). */
 export async function eventListAll(trx: Knex = db()): Promise<EventView[]> {
   const rows = await eventQuery(trx).orderBy('e.starts_at', 'desc');
   return rows.map(eventView);
+}
+
+/** One page of every event, newest start first (coordinators); `page` counts from 1. */
+export async function eventPageAll(page: number, pageSize: number, trx: Knex = db()): Promise<EventPage> {
+  const [rows, count] = await Promise.all([
+    eventQuery(trx)
+      .orderBy([{ column: 'e.starts_at', order: 'desc' }, { column: 'e.id' }])
+      .limit(pageSize)
+      .offset((page - 1) * pageSize),
+    trx('events').count({ count: '*' }).first(),
+  ]);
+  return { events: rows.map(eventView), total: Number(count?.count ?? 0) };
 }
 
 export interface RegistrationView {

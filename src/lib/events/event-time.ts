@@ -31,3 +31,17 @@ export function eventUtcToLocal(at: Date, zone: string): string {
 export function eventWhenLabel(at: Date, zone: string): string {
   return DateTime.fromJSDate(at, { zone }).setLocale('en-US').toFormat('cccc d LLLL yyyy, h:mm a ZZZZ');
 }
+
+/**
+ * The start and end at the venue in one line: "Monday 9 March 2026, 9:00 am – 11:00 am CDT" on one day,
+ * both dates in full when the event runs past midnight, the start alone without an end.
+ */
+export function eventSpanLabel(start: Date, end: Date | null, zone: string): string {
+  if (!end) return eventWhenLabel(start, zone);
+  const from = DateTime.fromJSDate(start, { zone }).setLocale('en-US');
+  const to = DateTime.fromJSDate(end, { zone }).setLocale('en-US');
+  if (from.hasSame(to, 'day')) {
+    return `${from.toFormat('cccc d LLLL yyyy, h:mm a')} – ${to.toFormat('h:mm a ZZZZ')}`;
+  }
+  return `${eventWhenLabel(start, zone)} – ${eventWhenLabel(end, zone)}`;
+}

@@ -283,3 +283,40 @@ export async function registrationCancel(
 }
 
 export { cancelUrl as registrationCancelUrl };
+
+export interface RegistrationLinkView {
+  eventId: string;
+  eventTitle: string;
+  startsAt: Date;
+  endsAt: Date | null;
+  timeZone: string;
+  venue: string;
+  name: string;
+  state: RegistrationState;
+}
+
+/**
+ * What a mailed link is about, read without changing anything (the page shows it; a POST acts on it): the
+ * registration a confirm or cancel token belongs to, or null when no registration holds that token now.
+ */
+export async function registrationByLinkToken(
+  kind: 'confirm' | 'cancel',
+  token: string,
+): Promise<RegistrationLinkView | null> {
+  const column = kind === 'confirm' ? 'r.confirm_token_hash' : 'r.manage_token_hash';
+  const row = await db()('event_registrations as r')
+    .join('events as e', 'e.id', 'r.event_id')
+    .where(column, tokenHash(token))
+    .first('e.id as event_id', 'e.title', 'e.starts_at', 'e.ends_at', 'e.time_zone', 'e.venue', 'r.name', 'r.state');
+  if (!row) return null;
+  return {
+    eventId: row.event_id,
+    eventTitle: row.title,
+    startsAt: row.starts_at,
+    endsAt: row.ends_at,
+    timeZone: row.time_zone,
+    venue: row.venue,
+    name: row.name,
+    state: row.state,
+  };
+}

@@ -26,7 +26,7 @@ export class ApiError extends Error {
 }
 
 export interface ApiInit {
-  method?: 'GET' | 'POST' | 'PATCH' | 'DELETE';
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   /** Sent as JSON. */
   body?: unknown;
   /** Sent as is with its content type, instead of a JSON body (a CSV file for the data tools). */
