@@ -15,15 +15,21 @@ interface Props {
   /** Series drawn as dots only (measured readings beside a fitted line). */
   pointsOnly?: (label: string) => boolean;
   heightPx?: number;
+  /** Writes an x value for the axis, the legend and the table (a day number as its date); numbers otherwise. */
+  xFormat?: (x: number) => string;
 }
 
 // Our palette (tailwind.config.mjs) plus dash patterns, so series differ without relying on colour.
 const COLOURS = ['#0d6b62', '#2b3a67', '#8a5300', '#b3261e', '#46505f', '#084a44'];
 const DASHES = [[], [8, 4], [2, 3], [12, 3, 2, 3]];
 const PRINT_WIDTH_PX = 680;
+/** Most bars that each get their own tick label. */
+const BAR_TICKS_MAX = 16;
 
 // uPlot's own tick labels round small log-axis values to "0"; ours keep two significant figures.
 const tickLabels = (_u: uPlot, splits: number[]) => splits.map((v) => (v == null ? '' : numberFormat(v, 2)));
+const tickLabelsWith = (format: (x: number) => string) => (_u: uPlot, splits: number[]) =>
+  splits.map((v) => (v == null ? '' : format(v)));
 
 function plotOptions(
   plot: SavedPlot,
@@ -31,6 +37,7 @@ function plotOptions(
   height: number,
   pointsOnly: Props['pointsOnly'],
   U: typeof uPlot,
+  xFormat: Props['xFormat'],
 ): uPlot.Options {
   const log = plot.kind === 'loglog';
   const bars = plot.kind === 'bar' ? U.paths.bars!({ size: [0.5, 80] }) : undefined;
@@ -48,14 +55,17 @@ function plotOptions(
         label: plot.xLabel,
         stroke: '#1b2330',
         grid: { stroke: '#1b233018' },
-        values: tickLabels,
-        // Bars stand at their own x values (1 = sunlight, 2 = eclipse): ticks there and nowhere else.
-        ...(bars ? { splits: (u: uPlot) => Array.from(u.data[0]) } : {}),
+        values: xFormat ? tickLabelsWith(xFormat) : tickLabels,
+        // Bars stand at their own x values (1 = sunlight, 2 = eclipse): ticks there and nowhere else, unless there
+        // are too many bars to label each (a month of days), when uPlot spaces the ticks itself.
+        ...(bars && plot.series.every((s) => s.points.length <= BAR_TICKS_MAX)
+          ? { splits: (u: uPlot) => Array.from(u.data[0]) }
+          : {}),
       },
       { label: plot.yLabel, stroke: '#1b2330', grid: { stroke: '#1b233018' }, size: 80, values: tickLabels },
     ],
     series: [
-      { label: plot.xLabel, value: (_u, v) => numberFormat(v) },
+      { label: plot.xLabel, value: (_u, v) => (xFormat ? xFormat(v) : numberFormat(v)) },
       ...plot.series.map((s, i): uPlot.Series => {
         const colour = COLOURS[i % COLOURS.length]!;
         const dots = pointsOnly?.(s.label) ?? false;
@@ -86,7 +96,7 @@ function alignedData(plot: SavedPlot, U: typeof uPlot): uPlot.AlignedData {
 }
 
 /** A plot of a saved result's series, with a caption, a legend and a table of its points. */
-export default function Plot({ plot, pointsOnly, heightPx = 320 }: Props) {
+export default function Plot({ plot, pointsOnly, heightPx = 320, xFormat }: Props) {
   const box = useRef<HTMLDivElement>(null);
   const [tableOpen, setTableOpen] = useState(false);
   const [ready, setReady] = useState(false);
@@ -104,7 +114,7 @@ export default function Plot({ plot, pointsOnly, heightPx = 320 }: Props) {
     // uPlot touches the DOM when it loads, so it is loaded in the browser only (and off the first paint).
     void import('uplot').then(({ default: U }) => {
       if (cancelled) return;
-      chart = new U(plotOptions(plot, widthNow(), heightPx, pointsOnly, U), alignedData(plot, U), el);
+      chart = new U(plotOptions(plot, widthNow(), heightPx, pointsOnly, U, xFormat), alignedData(plot, U), el);
       resize.observe(el);
       setReady(true);
     });
@@ -117,7 +127,7 @@ export default function Plot({ plot, pointsOnly, heightPx = 320 }: Props) {
       window.removeEventListener('afterprint', afterPrint);
       chart?.destroy();
     };
-  }, [plot, pointsOnly, heightPx]);
+  }, [plot, pointsOnly, heightPx, xFormat]);
 
   const summary = `${plot.title}. ${plot.yLabel} against ${plot.xLabel}${plot.kind === 'loglog' ? ', both on logarithmic axes' : ''}. Series: ${plot.series.map((s) => s.label).join(', ')}.`;
   return (
@@ -159,7 +169,7 @@ export default function Plot({ plot, pointsOnly, heightPx = 320 }: Props) {
                   s.points.map(([x, y], i) => (
                     <tr key={`${s.label}-${i}`}>
                       <td>{s.label}</td>
-                      <td>{numberFormat(x, 4)}</td>
+                      <td>{xFormat ? xFormat(x) : numberFormat(x, 4)}</td>
                       <td>{numberFormat(y, 4)}</td>
                     </tr>
                   )),

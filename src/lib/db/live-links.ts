@@ -82,6 +82,22 @@ export async function liveLinkList(trx: Knex = db()): Promise<LiveLinkView[]> {
   return (await withScans(trx).orderBy('l.created_at', 'desc')).map(view);
 }
 
+/** One page of links, newest first, with how many there are in all; `page` counts from 1. */
+export async function liveLinkPage(
+  page: number,
+  pageSize: number,
+  trx: Knex = db(),
+): Promise<{ links: LiveLinkView[]; total: number }> {
+  const [rows, count] = await Promise.all([
+    withScans(trx)
+      .orderBy([{ column: 'l.created_at', order: 'desc' }, { column: 'l.id' }])
+      .limit(pageSize)
+      .offset((page - 1) * pageSize),
+    trx('live_links').count({ count: '*' }).first(),
+  ]);
+  return { links: rows.map(view), total: Number(count?.count ?? 0) };
+}
+
 export async function liveLinkUpdate(
   id: string,
   patch: { title?: string; target?: string; retired?: boolean },

@@ -1,7 +1,7 @@
 /**
  * The main navigation for each kind of visitor: one list per audience, so a role sees only what it may
  * open. Pure data, used by the layout and checked by tests/lib/ui/navigation.test.ts (every link must have a
- * page). The review queue, schools, reach and live-link pages join the staff lists when they are built.
+ * page). Staff reach events and live links from here; everyone sees the public list of events.
  */
 import type { Actor } from '../auth/actor';
 
@@ -17,8 +17,11 @@ export interface NavigationOptions {
 
 const ACTIVITIES: NavItem = { href: '/activities', label: 'Activities' };
 const TOOLS: NavItem = { href: '/tools', label: 'Data tools' };
+const EVENTS: NavItem = { href: '/events', label: 'Events' };
+const MANAGE_EVENTS: NavItem = { href: '/events/manage', label: 'Events' };
+const LIVE_LINKS: NavItem = { href: '/links', label: 'Live links' };
 
-const PUBLIC: NavItem[] = [ACTIVITIES, TOOLS];
+const PUBLIC: NavItem[] = [ACTIVITIES, TOOLS, EVENTS];
 
 const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
   teacher: [
@@ -27,9 +30,12 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
     { href: '/kits', label: 'My kits' },
     ACTIVITIES,
     TOOLS,
+    EVENTS,
   ],
   coordinator: [
     { href: '/reach', label: 'Reach' },
+    MANAGE_EVENTS,
+    LIVE_LINKS,
     { href: '/kits', label: 'Kits' },
     { href: '/classes', label: 'Classes' },
     ACTIVITIES,
@@ -38,6 +44,8 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
   admin: [
     { href: '/admin/accounts', label: 'Accounts' },
     { href: '/reach', label: 'Reach' },
+    MANAGE_EVENTS,
+    LIVE_LINKS,
     { href: '/kits', label: 'Kits' },
     { href: '/classes', label: 'Classes' },
     ACTIVITIES,

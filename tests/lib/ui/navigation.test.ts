@@ -49,6 +49,19 @@ describe('navigationFor', () => {
   });
 
   it('gives anonymous visitors only public pages', () => {
-    expect(navigationFor({ kind: 'anonymous' }).map((i) => i.href)).toEqual(['/activities', '/tools']);
+    expect(navigationFor({ kind: 'anonymous' }).map((i) => i.href)).toEqual(['/activities', '/tools', '/events']);
+  });
+
+  it('takes coordinators and admins to managing events and live links, and no one else', () => {
+    for (const role of ['coordinator', 'admin'] as const) {
+      const hrefs = navigationFor(user(role)).map((i) => i.href);
+      expect(hrefs).toContain('/events/manage');
+      expect(hrefs).toContain('/links');
+    }
+    for (const actor of ACTORS.filter((a) => !(a.kind === 'user' && a.role !== 'teacher'))) {
+      const hrefs = navigationFor(actor, { outbox: true }).map((i) => i.href);
+      expect(hrefs).not.toContain('/events/manage');
+      expect(hrefs).not.toContain('/links');
+    }
   });
 });
