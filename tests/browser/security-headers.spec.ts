@@ -19,6 +19,8 @@ interface Fixtures {
   classId: string;
   kitId: string;
   activitySlug: string;
+  eventId: string;
+  schoolId: string;
 }
 interface PageVisit {
   path: string | ((f: Fixtures) => string);
@@ -46,6 +48,17 @@ const VISITS: Record<string, PageVisit> = {
   '/verify-email': { path: '/verify-email?token=x', as: 'anonymous' },
   '/invitation': { path: '/invitation?token=x', as: 'anonymous' },
   '/join': { path: '/join', as: 'anonymous' },
+  '/go/[code]': { path: '/go/ZZZZZZ', as: 'anonymous' },
+  '/activities/[slug]/journal': { path: (f) => `/activities/${f.activitySlug}/journal`, as: 'anonymous' },
+  '/journal/classes/[id]': { path: (f) => `/journal/classes/${f.classId}`, as: 'anonymous' },
+  '/reach/schools/[id]': { path: (f) => `/reach/schools/${f.schoolId}`, as: 'admin' },
+  '/events': { path: '/events', as: 'anonymous' },
+  '/events/[id]': { path: (f) => `/events/${f.eventId}`, as: 'anonymous' },
+  '/events/registration': { path: '/events/registration?confirm=not-a-token-from-any-mail', as: 'anonymous' },
+  '/events/manage': { path: '/events/manage', as: 'admin' },
+  '/events/manage/new': { path: '/events/manage/new', as: 'admin' },
+  '/events/manage/[id]': { path: (f) => `/events/manage/${f.eventId}`, as: 'admin' },
+  '/links': { path: '/links', as: 'admin' },
 };
 
 const PAGES_DIR = join(process.cwd(), 'src', 'pages');
@@ -101,7 +114,10 @@ beforeAll(async () => {
     .filter((f) => f.endsWith('.md'))
     .sort()[0]!
     .replace(/\.md$/, '');
-  fixtures = { classId: klass.id, kitId, activitySlug };
+  // The demo seed's published event and a school of the directory.
+  const event = await knex('events').where({ state: 'published' }).first('id');
+  const school = await knex('schools').first('id');
+  fixtures = { classId: klass.id, kitId, activitySlug, eventId: event.id, schoolId: school.id };
 }, 60_000);
 
 afterAll(async () => {
