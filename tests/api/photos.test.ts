@@ -344,3 +344,29 @@ describe('PATCH and DELETE /api/photos/[id]', () => {
     expect((await get(photos[0]!.url, cookie.teacher)).status).toBe(404);
   });
 });
+
+describe('DELETE /api/entries/[id]', () => {
+  it('removes the stored copies of every photo of the deleted entry from the disk storage', async () => {
+    const entryId = await entryCreate();
+    const other = await entryCreate();
+    const res = await upload(entryId, [
+      [await photoJpeg(), 'a.jpg', 'first'],
+      [await photoJpeg(), 'b.jpg', 'second'],
+    ]);
+    expect(res.status).toBe(201);
+    expect((await upload(other, [[await photoJpeg(), 'c.jpg', 'kept']])).status).toBe(201);
+    const inFolder = (id: string) => storedFiles().filter((f) => f.includes(`/data/photos/${id}/`));
+    // Two photos, a display copy and a thumbnail each.
+    expect(inFolder(entryId)).toHaveLength(4);
+
+    const deleted = await api(`/api/entries/${entryId}`, {
+      method: 'DELETE',
+      headers: { origin: BASE_URL, cookie: cookie.teacher },
+    });
+    expect(deleted.status).toBe(200);
+    expect(storedFiles().filter((f) => f.includes(entryId))).toEqual([]);
+    expect(await photoRowCount(entryId)).toBe(0);
+    // The other entry's photo stays.
+    expect(inFolder(other)).toHaveLength(2);
+  });
+});

@@ -26,6 +26,7 @@ import { ConflictError, ForbiddenError, InputError, NotFoundError } from '../err
 import { classForActor } from '../auth/class-access.server';
 import { entryDecisionMessage } from '../mail/journal-messages';
 import { mailSendLater } from '../mail/transport.server';
+import { entryPhotoStorageKeys, photoStorageDelete } from '../photos/entry-photos.server';
 import { photoReleaseRequired, PHOTO_RELEASE_STATEMENT } from '../photos/photo-rules';
 import { entryEditableByActor, entryForActor, entryIsOwnClass } from './entry-access.server';
 import {
@@ -140,13 +141,20 @@ export async function entryResultAdd(actor: Actor, id: string, result: SavedResu
   });
 }
 
-/** Deletes a draft or returned entry (its authors only); returns the entry's class. */
+/**
+ * Deletes a draft or returned entry (its authors only), then its photos' stored copies. The keys are read in the
+ * transaction that deletes the rows; the files go after the commit, so a failed delete leaves an orphan file,
+ * never a row pointing at nothing.
+ */
 export async function entryRemove(actor: Actor, id: string): Promise<void> {
-  await db().transaction(async (trx) => {
+  const keys = await db().transaction(async (trx) => {
     const entry = await entryEditableByActor(actor, id, trx);
+    const photoKeys = await entryPhotoStorageKeys(entry.id, trx);
     await auditEntry(actor, entry.id, 'entry.deleted', entry.state, null, trx, { title: entry.title });
     await entryDelete(entry.id, EDITABLE, trx);
+    return photoKeys;
   });
+  await photoStorageDelete(keys);
 }
 
 async function photosConfirmationChecked(entry: EntryJoined, photosConfirmed: boolean, trx: Knex) {
