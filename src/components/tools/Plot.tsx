@@ -8,6 +8,7 @@ import 'uplot/dist/uPlot.min.css';
 import { useEffect, useId, useRef, useState } from 'react';
 import type uPlot from 'uplot';
 import type { SavedPlot } from '../../lib/analysis/saved-result';
+import { PLOT_COLOURS, PLOT_DASHES } from '../../lib/render/plot-svg';
 import { numberFormat } from '../../lib/tools/number-format';
 
 interface Props {
@@ -19,9 +20,9 @@ interface Props {
   xFormat?: (x: number) => string;
 }
 
-// Our palette (tailwind.config.mjs) plus dash patterns, so series differ without relying on colour.
-const COLOURS = ['#0d6b62', '#2b3a67', '#8a5300', '#b3261e', '#46505f', '#084a44'];
-const DASHES = [[], [8, 4], [2, 3], [12, 3, 2, 3]];
+// Our palette plus dash patterns (shared with the static SVG), so series differ without relying on colour.
+const COLOURS = PLOT_COLOURS;
+const DASHES = PLOT_DASHES;
 const PRINT_WIDTH_PX = 680;
 /** Most bars that each get their own tick label. */
 const BAR_TICKS_MAX = 16;
@@ -73,7 +74,7 @@ function plotOptions(
           label: s.label,
           stroke: colour,
           width: 2,
-          dash: DASHES[i % DASHES.length]!,
+          dash: [...DASHES[i % DASHES.length]!],
           spanGaps: true,
           value: (_u, v) => numberFormat(v),
           ...(bars ? { paths: bars, fill: `${colour}cc` } : {}),
