@@ -21,6 +21,9 @@ const EVENTS: NavItem = { href: '/events', label: 'Events' };
 const MANAGE_EVENTS: NavItem = { href: '/events/manage', label: 'Events' };
 const LIVE_LINKS: NavItem = { href: '/links', label: 'Live links' };
 
+const JOURNAL: NavItem = { href: '/entries', label: 'Class journal' };
+const REVIEW: NavItem = { href: '/review', label: 'Review queue' };
+
 const PUBLIC: NavItem[] = [ACTIVITIES, TOOLS, EVENTS];
 
 const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
@@ -28,11 +31,13 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
     { href: '/classes', label: 'My classes' },
     { href: '/kits/new', label: 'Kit builder' },
     { href: '/kits', label: 'My kits' },
+    JOURNAL,
     ACTIVITIES,
     TOOLS,
     EVENTS,
   ],
   coordinator: [
+    REVIEW,
     { href: '/reach', label: 'Reach' },
     MANAGE_EVENTS,
     LIVE_LINKS,
@@ -43,6 +48,7 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
   ],
   admin: [
     { href: '/admin/accounts', label: 'Accounts' },
+    REVIEW,
     { href: '/reach', label: 'Reach' },
     MANAGE_EVENTS,
     LIVE_LINKS,
@@ -52,7 +58,7 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
   ],
 };
 
-const CLASS_SESSION: NavItem[] = [{ href: '/class', label: 'Our class' }, TOOLS];
+const CLASS_SESSION: NavItem[] = [{ href: '/class', label: 'Our class' }, JOURNAL, TOOLS];
 
 /** The navigation items for an actor. */
 export function navigationFor(actor: Actor, options: NavigationOptions = { outbox: false }): NavItem[] {
