@@ -1,13 +1,12 @@
 /**
- * Saves the saved-result object (the shape a class journal entry will store) as a JSON file on the
- * teacher's computer; class journals are not built yet, so nothing is sent anywhere.
+ * Under a tool's result: download the saved-result object (the shape a class journal entry stores) as a JSON
+ * file, or save it to the class journal.
  */
-import { useId } from 'react';
 import type { SavedResult } from '../../lib/analysis/saved-result';
+import SaveToJournal from './SaveToJournal';
 
-/** A button that downloads `savedResult` as `<tool>-result.json`, with the journal note beside it. */
+/** A button that downloads `savedResult` as `<tool>-result.json`, and the journal's save button. */
 export default function DownloadResultButton({ savedResult }: { savedResult: SavedResult }) {
-  const noteId = useId();
   const download = () => {
     const blob = new Blob([JSON.stringify(savedResult, null, 2)], { type: 'application/json' });
     const url = URL.createObjectURL(blob);
@@ -22,12 +21,7 @@ export default function DownloadResultButton({ savedResult }: { savedResult: Sav
       <button type="button" className="btn-secondary" onClick={download}>
         Download result (JSON)
       </button>
-      <button type="button" className="btn-secondary" disabled aria-describedby={noteId}>
-        Save to class journal
-      </button>
-      <span id={noteId} className="text-sm text-ink-soft">
-        Class journals arrive with the journal feature.
-      </span>
+      <SaveToJournal savedResult={savedResult} />
     </div>
   );
 }
