@@ -20,7 +20,12 @@ export const REACT_ISLANDS = ['**/src/components/preview/**'];
 export const PREACT_ISLANDS = ['**/src/components/**/*.tsx'];
 
 /** React libraries used by the Preact islands; bundled on the server too, so the alias reaches them. */
-export const COMPAT_LIBRARIES = ['@tanstack/react-query', 'react-hook-form', '@hookform/resolvers'];
+export const COMPAT_LIBRARIES = [
+  '@tanstack/react-query',
+  '@tanstack/react-table',
+  'react-hook-form',
+  '@hookform/resolvers',
+];
 
 const ALIASES = {
   react: 'preact/compat',

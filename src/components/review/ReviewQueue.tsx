@@ -3,7 +3,7 @@
  * and filters run on the server (/api/review/queue). Keyboard: ↑/↓ (or j/k) move between rows, Space selects the
  * row, Enter opens its review page. Selected rows are published together after the same checklist as one entry.
  */
-import { useRef, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { QueryClient, QueryClientProvider, keepPreviousData, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
   createColumnHelper,
@@ -49,6 +49,7 @@ const SORT_OF_COLUMN: Record<string, string> = {
   waitingDays: 'submitted',
 };
 const column = createColumnHelper<EntrySummary>();
+const NO_ENTRIES: EntrySummary[] = [];
 
 /** The queue island. */
 export default function ReviewQueue(props: Props) {
@@ -100,41 +101,45 @@ function QueueTable({ schools, activities }: Props) {
     placeholderData: keepPreviousData,
   });
 
-  const columns = [
-    column.display({
-      id: 'select',
-      header: () => <span className="sr-only">Select</span>,
-      cell: ({ row }) => (
-        <input
-          type="checkbox"
-          aria-label={`Select “${row.original.title}”`}
-          checked={row.getIsSelected()}
-          onChange={row.getToggleSelectedHandler()}
-          tabIndex={-1}
-        />
-      ),
-    }),
-    column.accessor('title', {
-      header: 'Entry',
-      cell: (c) => (
-        <a href={`/review/${c.row.original.id}`} tabIndex={-1}>
-          {c.getValue()}
-        </a>
-      ),
-    }),
-    column.accessor('schoolName', { header: 'School', cell: (c) => c.getValue() ?? '—' }),
-    column.accessor('className', { header: 'Class' }),
-    column.accessor('activitySlug', {
-      header: 'Activity',
-      cell: (c) => activities.find((a) => a.value === c.getValue())?.label ?? '—',
-    }),
-    column.accessor('waitingDays', {
-      header: 'Waiting',
-      cell: (c) => `${c.getValue() ?? 0} day${c.getValue() === 1 ? '' : 's'}`,
-    }),
-  ];
+  // Stable between renders: TanStack Table recomputes its rows whenever columns or data change identity.
+  const columns = useMemo(
+    () => [
+      column.display({
+        id: 'select',
+        header: () => <span className="sr-only">Select</span>,
+        cell: ({ row }) => (
+          <input
+            type="checkbox"
+            aria-label={`Select “${row.original.title}”`}
+            checked={row.getIsSelected()}
+            onChange={row.getToggleSelectedHandler()}
+            tabIndex={-1}
+          />
+        ),
+      }),
+      column.accessor('title', {
+        header: 'Entry',
+        cell: (c) => (
+          <a href={`/review/${c.row.original.id}`} tabIndex={-1}>
+            {c.getValue()}
+          </a>
+        ),
+      }),
+      column.accessor('schoolName', { header: 'School', cell: (c) => c.getValue() ?? '—' }),
+      column.accessor('className', { header: 'Class' }),
+      column.accessor('activitySlug', {
+        header: 'Activity',
+        cell: (c) => activities.find((a) => a.value === c.getValue())?.label ?? '—',
+      }),
+      column.accessor('waitingDays', {
+        header: 'Waiting',
+        cell: (c) => `${c.getValue() ?? 0} day${c.getValue() === 1 ? '' : 's'}`,
+      }),
+    ],
+    [activities],
+  );
   const table = useReactTable({
-    data: data.data?.entries ?? [],
+    data: data.data?.entries ?? NO_ENTRIES,
     columns,
     getRowId: (r) => r.id,
     getCoreRowModel: getCoreRowModel(),
