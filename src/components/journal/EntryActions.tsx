@@ -3,7 +3,7 @@
  * photos), withdraw a submitted entry, approve a team's submitted entry, delete a draft. The server decides again;
  * this island only offers the actions the entry's state allows and reloads the page after one.
  */
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { apiSettle } from '../../lib/http/client';
 import { PHOTO_RELEASE_STATEMENT } from '../../lib/photos/photo-rules';
 import { FormAlert } from '../auth/FormAlert';
@@ -29,7 +29,6 @@ export default function EntryActions(props: Props) {
   const [confirmed, setConfirmed] = useState(false);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
-  const consentId = useId();
   const approving = asTeacher && state === 'submitted' && authorKind === 'team' && !teacherApproved;
   // A team's own submission waits for the teacher, who confirms the photos when approving. The box shows even
   // with no photos counted at load, since photos may be added on this page meanwhile; the server decides.
@@ -51,9 +50,9 @@ export default function EntryActions(props: Props) {
   return (
     <div className="card no-print space-y-3" data-testid="entry-actions">
       {needsConsent && (
-        <label className="flex items-start gap-2" htmlFor={consentId}>
+        // Wrapped, not tied by id: each island numbers its useId ids from the same start, so ids can repeat.
+        <label className="flex items-start gap-2">
           <input
-            id={consentId}
             type="checkbox"
             className="mt-1"
             checked={confirmed}

@@ -3,7 +3,7 @@
  * a note saying what to change, or decline it with a reason. A 409 (someone decided first) is shown as the server
  * words it, naming who.
  */
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { apiSettle } from '../../lib/http/client';
 import { ENTRY_NOTE_MAX, REVIEW_CHECKLIST, type ReviewChecklistItem } from '../../lib/journal/entry-rules';
 import { FormAlert } from '../auth/FormAlert';
@@ -20,7 +20,8 @@ export default function ReviewDecision({ entryId }: Props) {
   const [note, setNote] = useState('');
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
-  const noteId = useId();
+  // A fixed id: the page's plot islands number their useId ids from the same start as this one would.
+  const noteId = 'review-note';
   const allTicked = ITEMS.every((i) => checks[i]);
 
   async function decide(decision: 'publish' | 'return' | 'decline') {
