@@ -12,6 +12,10 @@ import { ENGINE_VERSION } from '../src/lib/kit/engine-version';
 import { kitFonts } from '../src/lib/kit/fonts.server';
 import { KitInputsSchema, kitRequestOf } from '../src/lib/kit/kit-inputs';
 import { ModelContentSchema } from '../src/lib/geometry/model-schema';
+import { vibrationAnalyse } from '../src/lib/analysis/vibration';
+import { vibrationInputFromCsv } from '../src/lib/analysis/vibration-csv';
+import { vibrationSavedResult } from '../src/lib/analysis/saved-result-tools';
+import { vibrationSampleCsv } from '../src/lib/tools/vibration-sample';
 import { DEMO_ACCOUNTS } from './data/demo-accounts';
 import { seedDemoEvents } from './data/demo-events';
 import { seedDemoReach } from './data/demo-reach';
@@ -134,6 +138,10 @@ export async function seed(knex: Knex): Promise<void> {
   const now = Date.now();
   const daysAgo = (d: number) => new Date(now - d * 86_400_000);
 
+  // The shake-test tool's own invented sample record, analysed as the tool does, so the entries show a real plot.
+  const sample = vibrationInputFromCsv(vibrationSampleCsv(), { units: 'auto' });
+  const shakeResult = JSON.stringify([vibrationSavedResult(vibrationAnalyse(sample.input, sample.unitSource))]);
+
   await knex('entries').insert([
     {
       class_id: period3.id,
@@ -141,6 +149,7 @@ export async function seed(knex: Knex): Promise<void> {
       team_name: 'Team Comet',
       title: 'Our probe survived the shake table',
       body: 'Two tabs came loose on the first run; we added glue and it held for all three runs.',
+      saved_results: shakeResult,
       state: 'published',
       teacher_approved: true,
       submitted_at: daysAgo(9),
@@ -159,6 +168,17 @@ export async function seed(knex: Knex): Promise<void> {
       teacher_approved: true,
       submitted_at: daysAgo(2),
       activity_slug: 'thermal-cycling',
+    },
+    {
+      class_id: room12.id,
+      author_kind: 'teacher',
+      title: 'Shaking the Wren at 20 Hz and 80 Hz',
+      body: 'We taped a phone to the Wren and shook it by hand on a foam block. The **PSD** shows our two shakes.',
+      state: 'submitted',
+      teacher_approved: true,
+      submitted_at: daysAgo(1),
+      activity_slug: 'shake-test',
+      saved_results: shakeResult,
     },
     {
       class_id: room12.id,
