@@ -20,6 +20,10 @@ interface Fixtures {
   kitId: string;
   activitySlug: string;
   eventId: string;
+  /** A draft entry of the teacher's class. */
+  draftId: string;
+  /** A submitted entry of the same class, approved and waiting for review. */
+  submittedId: string;
   schoolId: string;
 }
 interface PageVisit {
@@ -59,6 +63,34 @@ const VISITS: Record<string, PageVisit> = {
   '/events/manage/new': { path: '/events/manage/new', as: 'admin' },
   '/events/manage/[id]': { path: (f) => `/events/manage/${f.eventId}`, as: 'admin' },
   '/links': { path: '/links', as: 'admin' },
+  '/journal/[id]': { path: (f) => `/journal/${f.draftId}`, as: 'teacher' },
+  '/entries/[id]/edit': { path: (f) => `/entries/${f.draftId}/edit`, as: 'teacher' },
+  '/review': { path: '/review', as: 'admin' },
+  '/review/[id]': { path: (f) => `/review/${f.submittedId}`, as: 'admin' },
+};
+
+/** A saved result for the entries, so their plots (uPlot and the static SVG) load under the policy too. */
+const CSP_SAVED_RESULT = {
+  tool: 'thermal',
+  toolVersion: '1.0.0',
+  inputsSummary: 'invented readings for the page visit',
+  result: {},
+  plot: {
+    kind: 'line',
+    title: 'Puck temperature',
+    xLabel: 'Time (s)',
+    yLabel: 'Temperature (°C)',
+    series: [
+      {
+        label: 'Puck',
+        points: [
+          [0, 20],
+          [60, 31],
+          [120, 38],
+        ],
+      },
+    ],
+  },
 };
 
 const PAGES_DIR = join(process.cwd(), 'src', 'pages');
@@ -116,8 +148,32 @@ beforeAll(async () => {
     .replace(/\.md$/, '');
   // The demo seed's published event and a school of the directory.
   const event = await knex('events').where({ state: 'published' }).first('id');
-  const school = await knex('schools').first('id');
-  fixtures = { classId: klass.id, kitId, activitySlug, eventId: event.id, schoolId: school.id };
+  const entry = (state: string, title: string) => ({
+    class_id: klass.id,
+    author_kind: 'teacher',
+    author_id: teacher.id,
+    title,
+    body: 'Two tabs came *loose*.',
+    activity_slug: activitySlug,
+    state,
+    teacher_approved: state !== 'draft',
+    submitted_at: state === 'draft' ? null : new Date(),
+    published_at: state === 'published' ? new Date() : null,
+    saved_results: JSON.stringify([CSP_SAVED_RESULT]),
+  });
+  const [draft, submitted] = (await knex('entries')
+    .insert([entry('draft', 'CSP draft'), entry('submitted', 'CSP submitted'), entry('published', 'CSP published')])
+    .returning('id')) as { id: string }[];
+  const school = (await knex('schools').first('id')) as { id: string };
+  fixtures = {
+    classId: klass.id,
+    kitId,
+    activitySlug,
+    draftId: draft!.id,
+    submittedId: submitted!.id,
+    eventId: event.id,
+    schoolId: school.id,
+  };
 }, 60_000);
 
 afterAll(async () => {

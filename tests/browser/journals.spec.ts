@@ -1,0 +1,140 @@
+/**
+ * The class journal end to end in chromium: a teacher runs the shake-test tool on its sample, saves the result to
+ * a new draft with "Save to the class journal", writes the entry, adds a photo with its description, confirms the
+ * photo statement and submits; a coordinator finds the entry in the review queue with the keyboard alone, opens
+ * it, ticks the checklist and publishes; the public activity journal then shows it with its plot and photo.
+ */
+import type { Knex } from 'knex';
+import type { Browser, Page } from 'playwright-core';
+import sharp from 'sharp';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { testKnex } from '../db/database';
+import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
+import { BASE_URL, browserLaunch, pageNew } from './browser';
+
+let browser: Browser;
+let knex: Knex;
+const cookies = { teacher: '', coordinator: '' };
+let className = '';
+
+/** Waits until the named client:load island has hydrated (client:visible ones wait for scrolling, so not all). */
+async function islandReady(page: Page, component: string): Promise<void> {
+  await page.locator(`astro-island[component-url*="${component}"]:not([ssr])`).first().waitFor({ state: 'attached' });
+}
+
+async function pageAs(who: keyof typeof cookies): Promise<{ page: Page; errors: string[] }> {
+  const { page, errors } = await pageNew(browser);
+  page.setDefaultTimeout(15_000);
+  const [name, value] = cookies[who].split(/=(.*)/s) as [string, string];
+  await page.context().addCookies([{ name, value, url: BASE_URL }]);
+  return { page, errors };
+}
+
+beforeAll(async () => {
+  browser = await browserLaunch();
+  knex = testKnex();
+  const teacher = await accountCreate(knex, { role: 'teacher', label: 'journal-teacher' });
+  const coordinator = await accountCreate(knex, { role: 'coordinator', label: 'journal-coord' });
+  className = `Journal class ${Date.now().toString(36)}`;
+  await classCreateDirect(knex, teacher, className);
+  cookies.teacher = await userSessionCookie(knex, teacher.id);
+  cookies.coordinator = await userSessionCookie(knex, coordinator.id);
+}, 60_000);
+
+afterAll(async () => {
+  await browser?.close();
+  await knex?.destroy();
+});
+
+describe('class journal', () => {
+  it('goes from a tool result to a published entry on the public journal page', async () => {
+    const title = `Shake table day ${Date.now().toString(36)}`;
+    const teacher = await pageAs('teacher');
+    let page = teacher.page;
+
+    // The tool: run the sample, save its result into a new draft.
+    await page.goto('/tools/vibration');
+    await islandReady(page, 'VibrationTool');
+    await page.getByRole('button', { name: 'Load sample data' }).first().click();
+    await page.getByRole('button', { name: 'Save to the class journal' }).first().click();
+    const panel = page.getByTestId('save-to-journal');
+    await panel.getByLabel('Save into').selectOption('new');
+    await panel.getByLabel('Class').selectOption({ label: className });
+    await panel.getByLabel('Entry title').fill(title);
+    await panel.getByRole('button', { name: 'Save the result' }).click();
+    await expect.poll(() => panel.getByRole('status').textContent()).toContain(title);
+    await panel.getByRole('link', { name: 'Open the entry' }).click();
+    await page.waitForURL(/\/entries\/[0-9a-f-]+\/edit$/);
+    const entryId = /entries\/([0-9a-f-]+)\/edit/.exec(page.url())![1]!;
+    await islandReady(page, 'EntryEditor');
+    await islandReady(page, 'EntryPhotos');
+
+    // The editor: body, activity, preview, a photo with its description.
+    expect(await page.getByTestId('entry-results').textContent()).toMatch(/PSD|Grms|acceleration/i);
+    await page.getByLabel('What your class did and found').fill('We shook the **Skein** probe for 10 s.');
+    await page.getByLabel('Activity').selectOption('shake-test');
+    await page.getByRole('tab', { name: /Preview/ }).click();
+    await expect.poll(() => page.getByTestId('entry-preview').innerHTML()).toContain('<strong>Skein</strong>');
+    const photo = await sharp({ create: { width: 320, height: 240, channels: 3, background: '#2b3a67' } })
+      .jpeg()
+      .toBuffer();
+    await page.getByLabel(/Add photos/).setInputFiles({ name: 'probe.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page.getByLabel('What “probe.jpg” shows').fill('The paper probe taped to the shake table');
+    await page.getByRole('button', { name: 'Upload 1 photo(s)' }).click();
+    await expect.poll(() => page.getByTestId('entry-photo').count()).toBe(1);
+
+    // Submitting needs the photo statement ticked.
+    await page.reload();
+    await islandReady(page, 'EntryActions');
+    const submit = page.getByRole('button', { name: 'Submit for review' });
+    expect(await submit.isDisabled()).toBe(true);
+    await page.getByRole('checkbox', { name: /I confirm/ }).check();
+    await submit.click();
+    await page.waitForURL(new RegExp(`/journal/${entryId}$`));
+    expect(await page.getByTestId('entry-state').textContent()).toContain('Submitted');
+    await page.context().close();
+
+    // Not public yet.
+    expect((await fetch(`${BASE_URL}/journal/${entryId}`)).status).toBe(404);
+
+    // The coordinator: the queue, newest first, found and opened with the keyboard.
+    const coordinator = await pageAs('coordinator');
+    page = coordinator.page;
+    await page.goto('/review');
+    await islandReady(page, 'ReviewQueue');
+    await page.getByRole('button', { name: /Waiting/ }).click();
+    await page.locator(`[data-testid="review-queue"] tbody tr[data-entry-id="${entryId}"]`).waitFor();
+    await page.locator('[data-testid="review-queue"] tbody tr').first().focus();
+    for (let i = 0; i < 30; i++) {
+      const focused = await page.evaluate(() => document.activeElement?.getAttribute('data-entry-id'));
+      if (focused === entryId) break;
+      await page.keyboard.press('ArrowDown');
+    }
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('data-entry-id'))).toBe(entryId);
+    await page.keyboard.press('Enter');
+    await page.waitForURL(new RegExp(`/review/${entryId}$`));
+    await islandReady(page, 'ReviewDecision');
+    expect(await page.getByTestId('photo-release').textContent()).toContain('confirmed');
+    const publish = page.getByRole('button', { name: 'Publish', exact: true });
+    expect(await publish.isDisabled()).toBe(true);
+    for (const box of await page.getByTestId('review-decision').getByRole('checkbox').all()) await box.check();
+    await publish.click();
+    await page.waitForURL(/\/review\?decided=published$/);
+    await page.screenshot({ path: '.data/journals-queue.png', fullPage: true });
+    await page.context().close();
+
+    // Public: the activity's journal lists it with its plot and photo.
+    const visitor = await pageNew(browser);
+    page = visitor.page;
+    await page.goto('/activities/shake-test/journal');
+    const item = page.locator(`[data-entry-id="${entryId}"]`);
+    expect(await item.getByRole('heading').textContent()).toContain(title);
+    await item.getByTestId('plot').first().scrollIntoViewIfNeeded();
+    await expect.poll(() => item.locator('[data-testid="plot"][data-ready="true"]').count()).toBe(1);
+    expect(await item.getByRole('img', { name: 'The paper probe taped to the shake table' }).count()).toBe(1);
+    await page.goto(`/journal/${entryId}`);
+    await page.screenshot({ path: '.data/journals-entry.png', fullPage: true });
+    expect(visitor.errors).toEqual([]);
+    await page.context().close();
+  }, 120_000);
+});
