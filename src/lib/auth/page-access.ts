@@ -19,5 +19,5 @@ export function pageAccess(actor: Actor, audiences: readonly Audience[], url: UR
 
 /** Where an account lands after signing in when no next page was asked for. */
 export function roleHome(role: Role): string {
-  return role === 'teacher' ? '/classes' : role === 'admin' ? '/admin/accounts' : '/account';
+  return role === 'teacher' ? '/classes' : role === 'admin' ? '/admin/accounts' : '/review';
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pageAccess } from '../../../src/lib/auth/page-access';
+import { pageAccess, roleHome } from '../../../src/lib/auth/page-access';
 import type { Actor } from '../../../src/lib/auth/actor';
 
 const teacher: Actor = {
@@ -28,5 +28,13 @@ describe('pageAccess', () => {
 
   it('answers 403 to a signed-in visitor of another role', () => {
     expect(pageAccess(teacher, ['admin'], url)).toEqual({ allowed: false, status: 403 });
+  });
+});
+
+describe('roleHome', () => {
+  it('lands each role on the page of its daily work', () => {
+    expect(roleHome('teacher')).toBe('/classes');
+    expect(roleHome('coordinator')).toBe('/review');
+    expect(roleHome('admin')).toBe('/admin/accounts');
   });
 });
