@@ -9,12 +9,16 @@ import type { Browser, Page } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
-import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
+import { accountCreate, classCreateDirect, classSessionCookie, userSessionCookie } from '../api/auth-helpers';
 import { BASE_URL, browserLaunch, pageNew } from './browser';
+
+// A navigation is done when the document is parsed; the island waits that follow are the real readiness checks,
+// and waiting for every image and chart under a loaded shared machine only adds flakiness.
+const DOM_READY = { waitUntil: 'domcontentloaded' } as const;
 
 let browser: Browser;
 let knex: Knex;
-const cookies = { teacher: '', coordinator: '' };
+const cookies = { teacher: '', coordinator: '', team: '' };
 let className = '';
 
 /** Waits until the named client:load island has hydrated (client:visible ones wait for scrolling, so not all). */
@@ -36,7 +40,8 @@ beforeAll(async () => {
   const teacher = await accountCreate(knex, { role: 'teacher', label: 'journal-teacher' });
   const coordinator = await accountCreate(knex, { role: 'coordinator', label: 'journal-coord' });
   className = `Journal class ${Date.now().toString(36)}`;
-  await classCreateDirect(knex, teacher, className);
+  const klass = await classCreateDirect(knex, teacher, className);
+  cookies.team = await classSessionCookie(knex, klass.id);
   cookies.teacher = await userSessionCookie(knex, teacher.id);
   cookies.coordinator = await userSessionCookie(knex, coordinator.id);
 }, 60_000);
@@ -64,7 +69,7 @@ describe('class journal', () => {
     await panel.getByRole('button', { name: 'Save the result' }).click();
     await expect.poll(() => panel.getByRole('status').textContent()).toContain(title);
     await panel.getByRole('link', { name: 'Open the entry' }).click();
-    await page.waitForURL(/\/entries\/[0-9a-f-]+\/edit$/);
+    await page.waitForURL(/\/entries\/[0-9a-f-]+\/edit$/, DOM_READY);
     const entryId = /entries\/([0-9a-f-]+)\/edit/.exec(page.url())![1]!;
     await islandReady(page, 'EntryEditor');
     await islandReady(page, 'EntryPhotos');
@@ -90,7 +95,7 @@ describe('class journal', () => {
     expect(await submit.isDisabled()).toBe(true);
     await page.getByRole('checkbox', { name: /I confirm/ }).check();
     await submit.click();
-    await page.waitForURL(new RegExp(`/journal/${entryId}$`));
+    await page.waitForURL(new RegExp(`/journal/${entryId}$`), DOM_READY);
     expect(await page.getByTestId('entry-state').textContent()).toContain('Submitted');
     await page.context().close();
 
@@ -102,7 +107,11 @@ describe('class journal', () => {
     page = coordinator.page;
     await page.goto('/review');
     await islandReady(page, 'ReviewQueue');
+    // Newest first: the queue asks the server for the new order; wait for that page before moving through it.
+    const resorted = page.waitForResponse((r) => r.url().includes('/api/review/queue') && r.url().includes('dir=desc'));
     await page.getByRole('button', { name: /Waiting/ }).click();
+    await resorted;
+    await page.waitForFunction(() => document.querySelector('th[aria-sort="ascending"]') !== null);
     await page.locator(`[data-testid="review-queue"] tbody tr[data-entry-id="${entryId}"]`).waitFor();
     await page.locator('[data-testid="review-queue"] tbody tr').first().focus();
     for (let i = 0; i < 30; i++) {
@@ -112,14 +121,14 @@ describe('class journal', () => {
     }
     expect(await page.evaluate(() => document.activeElement?.getAttribute('data-entry-id'))).toBe(entryId);
     await page.keyboard.press('Enter');
-    await page.waitForURL(new RegExp(`/review/${entryId}$`));
+    await page.waitForURL(new RegExp(`/review/${entryId}$`), DOM_READY);
     await islandReady(page, 'ReviewDecision');
     expect(await page.getByTestId('photo-release').textContent()).toContain('confirmed');
     const publish = page.getByRole('button', { name: 'Publish', exact: true });
     expect(await publish.isDisabled()).toBe(true);
     for (const box of await page.getByTestId('review-decision').getByRole('checkbox').all()) await box.check();
     await publish.click();
-    await page.waitForURL(/\/review\?decided=published$/);
+    await page.waitForURL(/\/review\?decided=published$/, DOM_READY);
     await page.screenshot({ path: '.data/journals-queue.png', fullPage: true });
     await page.context().close();
 
@@ -137,4 +146,48 @@ describe('class journal', () => {
     expect(visitor.errors).toEqual([]);
     await page.context().close();
   }, 120_000);
+
+  it('holds a team entry written through the class session until the teacher approves it', async () => {
+    const title = `Team test ${Date.now().toString(36)}`;
+    const team = await pageAs('team');
+    let page = team.page;
+    await page.goto('/entries');
+    await islandReady(page, 'EntryNewForm');
+    await page.getByLabel('Team name').fill('Team Orbit');
+    await page.getByLabel('Title').fill(title);
+    await page.getByRole('button', { name: 'Start the entry' }).click();
+    await page.waitForURL(/\/entries\/[0-9a-f-]+\/edit$/, DOM_READY);
+    const entryId = /entries\/([0-9a-f-]+)\/edit/.exec(page.url())![1]!;
+    await islandReady(page, 'EntryActions');
+    await page.getByLabel('What your class did and found').fill('Our boom opened 4 times out of 5.');
+    await page.getByRole('button', { name: 'Save draft' }).click();
+    await page.getByRole('status').filter({ hasText: 'Draft saved' }).waitFor();
+    await page.getByRole('button', { name: 'Send to our teacher' }).click();
+    await page.waitForURL(new RegExp(`/journal/${entryId}$`), DOM_READY);
+    expect(await page.getByTestId('entry-state').textContent()).toContain('Waiting for the teacher’s approval');
+    await page.context().close();
+
+    // Not in the queue before the teacher approves it.
+    const queued = async () => {
+      const res = await fetch(`${BASE_URL}/api/review/queue?pageSize=100&sort=submitted&dir=desc`, {
+        headers: { cookie: cookies.coordinator },
+      });
+      return ((await res.json()) as { entries: { id: string }[] }).entries.some((e) => e.id === entryId);
+    };
+    expect(await queued()).toBe(false);
+
+    const teacher = await pageAs('teacher');
+    page = teacher.page;
+    await page.goto(`/journal/${entryId}`);
+    await islandReady(page, 'EntryActions');
+    await page.getByRole('checkbox', { name: /I confirm/ }).check();
+    await page.getByRole('button', { name: 'Approve and send for review' }).click();
+    await page.waitForFunction(
+      () => !document.querySelector('[data-testid="entry-state"]')?.textContent?.includes('approval'),
+    );
+    expect(await page.getByTestId('entry-state').textContent()).toContain('Submitted');
+    expect(await queued()).toBe(true);
+    expect(teacher.errors).toEqual([]);
+    await page.context().close();
+  }, 60_000);
 });
