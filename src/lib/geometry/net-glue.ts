@@ -29,7 +29,8 @@ export const EDGE_LABEL_INSET_MM = 2.5;
 
 /**
  * A tab on whichever of the two edges leaves room for the deeper one (first edge on a tie), fitted clear of
- * `obstacles`, and the partner edge's label; the tab's fold angle lays it against the partner face.
+ * `obstacles` (or of the obstacles given for the edge it goes on, when the two edges end up on different
+ * pieces), and the partner edge's label; the tab's fold angle lays it against the partner face.
  */
 export function netGluePair(
   faces: NetFace[],
@@ -37,7 +38,7 @@ export function netGluePair(
   second: NetEdge,
   number: number,
   depthWantedMm: number,
-  obstacles: Vec2Mm[][],
+  obstacles: Vec2Mm[][] | ((on: NetEdge) => Vec2Mm[][]),
 ): { tab: NetTab; label: EdgeLabel } {
   const options = [
     [first, second],
@@ -46,7 +47,7 @@ export function netGluePair(
   let best: { tab: NetTab; label: EdgeLabel; depth: number } | null = null;
   for (const [on, partner] of options) {
     const [a, b] = edgeFlat(faces, on);
-    const fit = tabFit(a, b, depthWantedMm, obstacles);
+    const fit = tabFit(a, b, depthWantedMm, typeof obstacles === 'function' ? obstacles(on) : obstacles);
     if (best && fit.depthMm <= best.depth * 1.01) continue;
     const tab: NetTab = {
       number,

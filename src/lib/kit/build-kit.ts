@@ -9,7 +9,7 @@ import { BUILDABILITY_MINIMUMS, type BuildGradeBand } from '../geometry/buildabi
 import type { PartSubstitute } from '../geometry/part-substitutes';
 import { printPlateMesh } from '../layout/print-plate';
 import { cutListRows } from '../layout/cut-list';
-import { sheetPack } from '../layout/sheet-packer';
+import { sheetPackKit } from '../layout/sheet-packer';
 import { sheetSize } from '../layout/sheet-sizes';
 import type { KitLayout } from '../layout/types';
 import { kitJson } from '../render/kit-json';
@@ -80,15 +80,17 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
   };
   options.signal?.throwIfAborted();
   const hash = contentHash(request);
-  const { pieces, threads, substitutes } = engine.patterns(
-    request.model,
-    request.scaleDenominator,
-    request.paperGsm,
-    request.gradeBand,
-  );
+  const patterns = engine.patterns(request.model, request.scaleDenominator, request.paperGsm, request.gradeBand);
+  const { threads, substitutes } = patterns;
   await step('patterns');
   const size = sheetSize(request.sheetSizeId);
-  const sheets = sheetPack(pieces, { sheetSize: size, units: request.units, copies: request.copies, substitutes });
+  const { pieces, sheets } = sheetPackKit(patterns.pieces, {
+    sheetSize: size,
+    units: request.units,
+    copies: request.copies,
+    substitutes,
+    paperGsm: request.paperGsm,
+  });
   const layout: KitLayout = {
     title: request.title ?? request.model.name,
     scaleDenominator: request.scaleDenominator,

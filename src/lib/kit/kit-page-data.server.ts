@@ -4,6 +4,7 @@
  */
 import { activityPaperForSheet } from '../activities/activity-links';
 import { modelPatterns } from '../geometry/model-patterns';
+import { sheetPackKit } from '../layout/sheet-packer';
 import { sheetSize } from '../layout/sheet-sizes';
 import { boomScale } from '../preview/boom-scale';
 import { assemblySteps } from '../preview/assembly-steps';
@@ -18,10 +19,19 @@ export function kitPageData(row: KitRow) {
   const view = kitView(row);
   const request = kitRequestForRow(row);
   const venue = kitVenue(row.inputs.venue);
-  const { pieces, threads, substitutes } = modelPatterns(request.model, {
+  const patterns = modelPatterns(request.model, {
     scaleDenominator: request.scaleDenominator,
     paperGsm: request.paperGsm,
     gradeBand: request.gradeBand,
+  });
+  const { threads, substitutes } = patterns;
+  // The pieces as printed: cut at folds where the sheet is too small, so the steps match the PDF's.
+  const { pieces } = sheetPackKit(patterns.pieces, {
+    sheetSize: sheetSize(request.sheetSizeId),
+    units: request.units,
+    copies: 1,
+    substitutes,
+    paperGsm: request.paperGsm,
   });
   const sheetLabel = sheetSize(request.sheetSizeId).label;
   return {

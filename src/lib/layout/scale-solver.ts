@@ -21,9 +21,8 @@ import {
   type BuildabilityShortfall,
   type BuildGradeBand,
 } from '../geometry/buildability';
-import { pointsBounds } from '../geometry/vec';
-import { SHEET_MARGIN_MM, sheetSize, type SheetSizeId } from './sheet-sizes';
-import { MAX_SHEETS, sheetPack } from './sheet-packer';
+import { sheetSize, type SheetSizeId } from './sheet-sizes';
+import { MAX_SHEETS, sheetPackKit } from './sheet-packer';
 import { USUAL_SCALE_DENOMINATORS } from './scale-ratios';
 import { solveVenueScale, type Venue, type VenueScale } from './venues';
 import type { UnitSystem } from './units';
@@ -64,26 +63,16 @@ interface ScaleCheck {
   floor: BuildabilityShortfall[];
   /** Shortfalls against the class's band. */
   band: BuildabilityShortfall[];
-  tiled: string[];
 }
 
-/** Pieces' buildability and which pieces overflow the sheet at 1:N. */
-function scaleCheck(model: Model, n: number, gsm: number, sheetId: SheetSizeId, band: BuildGradeBand): ScaleCheck {
+/** Pieces' buildability at 1:N. */
+function scaleCheck(model: Model, n: number, gsm: number, band: BuildGradeBand): ScaleCheck {
   const { pieces, substitutes } = modelPatterns(model, { scaleDenominator: n, paperGsm: gsm, gradeBand: band });
-  const sheet = sheetSize(sheetId);
-  const [pw, ph] = [sheet.widthMm - 2 * SHEET_MARGIN_MM, sheet.heightMm - 2 * SHEET_MARGIN_MM];
-  const tiled: string[] = [];
-  for (const p of pieces) {
-    const b = pointsBounds(p.outlineMm);
-    const [w, h] = [b.maxX - b.minX, b.maxY - b.minY];
-    if (!((w <= pw && h <= ph) || (h <= pw && w <= ph))) tiled.push(p.id);
-  }
   return {
     pieces,
     substitutes,
     floor: buildabilityShortfalls(pieces, BUILD_GRADE_BAND_FLOOR),
     band: buildabilityShortfalls(pieces, band),
-    tiled,
   };
 }
 
@@ -93,22 +82,26 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
   const size = sheetSize(req.sheetId);
   const checks = new Map<number, ScaleCheck>();
   const check = (n: number): ScaleCheck =>
-    checks.get(n) ?? checks.set(n, scaleCheck(model, n, req.paperGsm, req.sheetId, band)).get(n)!;
-  const counts = new Map<number, number>();
-  // Sheets of one kit at 1:N; Infinity past the packer's MAX_SHEETS.
-  const sheetCount = (n: number): number => {
-    if (!counts.has(n)) {
-      let count = Infinity;
+    checks.get(n) ?? checks.set(n, scaleCheck(model, n, req.paperGsm, band)).get(n)!;
+  // One kit at 1:N laid out as the pipeline does (pieces cut at folds to fit); null past MAX_SHEETS.
+  const kits = new Map<number, { sheets: number; tiled: string[] } | null>();
+  const kit = (n: number) => {
+    if (!kits.has(n)) {
+      let laid: { sheets: number; tiled: string[] } | null = null;
       try {
-        const options = { sheetSize: size, units: req.units ?? 'metric', copies: 1 } as const;
-        count = sheetPack(check(n).pieces, { ...options, substitutes: check(n).substitutes }).length;
+        const options = { sheetSize: size, units: req.units ?? 'metric', copies: 1, paperGsm: req.paperGsm } as const;
+        const { sheets } = sheetPackKit(check(n).pieces, { ...options, substitutes: check(n).substitutes });
+        const tiled = new Set(sheets.flatMap((s) => s.placements.filter((p) => p.tile).map((p) => p.pieceId)));
+        laid = { sheets: sheets.length, tiled: [...tiled] };
       } catch (err) {
         if (!(err instanceof InputError)) throw err;
       }
-      counts.set(n, count);
+      kits.set(n, laid);
     }
-    return counts.get(n)!;
+    return kits.get(n)!;
   };
+  // Sheets of one kit at 1:N; Infinity past the packer's MAX_SHEETS.
+  const sheetCount = (n: number): number => kit(n)?.sheets ?? Infinity;
   const smallestValid = largestDenominator((n) => check(n).floor.length === 0);
   if (smallestValid === null) {
     const worst = check(1).floor[0]!;
@@ -122,7 +115,7 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
     scaleDenominator: n,
     gradeBand: band,
     sheetCount: Number.isFinite(sheetCount(n)) ? sheetCount(n) : null,
-    tiledPieceIds: check(n).tiled,
+    tiledPieceIds: kit(n)?.tiled ?? [],
     shortfalls: check(n).band,
     buildableDenominator: buildable,
     smallestValidDenominator: smallestValid,
@@ -138,7 +131,7 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
         { scaleDenominator: [`1:${usualValid} or larger`] },
       );
     }
-    return answer(n, scaleWords(n, sheetCount(n), check(n), size.label, band));
+    return answer(n, scaleWords(n, sheetCount(n), check(n), kit(n)?.tiled ?? [], size.label, band));
   }
   const ratios = req.ratios ?? 'usual';
   const usualAtMost = (m: number) => [...USUAL_SCALE_DENOMINATORS].reverse().find((k) => k <= m) ?? m;
@@ -146,7 +139,7 @@ export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScal
   const feasible =
     buildable !== null && Number.isFinite(sheetCount(ratios === 'any' ? buildable : usualAtMost(buildable)));
   const n = bestDenominator(ratios, feasible ? buildable : smallestValid, sheetCount);
-  const words = scaleWords(n, sheetCount(n), check(n), size.label, band);
+  const words = scaleWords(n, sheetCount(n), check(n), kit(n)?.tiled ?? [], size.label, band);
   // The next smaller scale, to say what the sheets saved there would cost.
   const smaller = req.ratios === 'any' ? n + 1 : USUAL_SCALE_DENOMINATORS.find((k) => k > n && k <= smallestValid);
   if (smaller === undefined || smaller > smallestValid || check(smaller).band.length === 0) return answer(n, words);
@@ -186,7 +179,14 @@ function sheetsWords(count: number, sheet: string): string {
 }
 
 /** "1:20 on 3 US Letter sheets: the smallest piece is 18 mm, right for grades 6–8." and what falls short. */
-function scaleWords(n: number, sheets: number, c: ScaleCheck, sheet: string, band: BuildGradeBand): string {
+function scaleWords(
+  n: number,
+  sheets: number,
+  c: ScaleCheck,
+  tiledIds: string[],
+  sheet: string,
+  band: BuildGradeBand,
+): string {
   const smallest = c.pieces.reduce<Piece | null>(
     (a, p) => (a === null || pieceAcrossMm(p) < pieceAcrossMm(a) ? p : a),
     null,
@@ -194,9 +194,9 @@ function scaleWords(n: number, sheets: number, c: ScaleCheck, sheet: string, ban
   const who = BUILD_GRADE_BAND_WORDS[band];
   const head = `1:${n} on ${sheetsWords(sheets, sheet)}`;
   const tiled =
-    c.tiled.length === 0
+    tiledIds.length === 0
       ? ''
-      : ` ${c.tiled.length === 1 ? 'One piece is' : `${c.tiled.length} pieces are`} larger than ${sheet} (${c.tiled.join(', ')}) and ${c.tiled.length === 1 ? 'is' : 'are'} split across sheets.`;
+      : ` ${tiledIds.length === 1 ? 'One piece is' : `${tiledIds.length} pieces are`} larger than ${sheet} with no fold to cut it at (${tiledIds.join(', ')}), so ${tiledIds.length === 1 ? 'it is' : 'they are'} printed in tiles across sheets.`;
   if (c.band.length > 0)
     return `${head}: too small for ${who}, since ${buildabilityShortfallWords(c.band[0]!, band)}; choose a larger scale (a smaller N) or help the class with the smallest parts.${tiled}`;
   const size = smallest ? `the smallest piece is ${buildabilityMm(pieceAcrossMm(smallest))}` : 'it has no pieces';

@@ -21,11 +21,10 @@ describe('solvePaperScale', () => {
     expect(r.sheetCount).toBe(1);
     expect(r.tiledPieceIds).toEqual([]);
     // By hand (CRC: side of a regular hexagon with apothem 1.2 m is 2·1.2·tan 30° = 1.3856 m): at 1:25 the
-    // six-wall strip alone is 6 · 1385.6 / 25 = 332.6 mm, longer than Letter's printable 259.4 mm.
+    // six-wall strip alone is 6 · 1385.6 / 25 = 332.6 mm, longer than Letter's printable 259.4 mm: it is cut
+    // at a fold into parts that fit (issue 10, item 5), so nothing is tiled.
     expect((6 * 2 * 1200 * Math.tan(Math.PI / 6)) / 25).toBeGreaterThan(letter[1]);
-    expect(solvePaperScale(m, { sheetId: 'letter', paperGsm: 160, scaleDenominator: 25 }).tiledPieceIds).toContain(
-      'body',
-    );
+    expect(solvePaperScale(m, { sheetId: 'letter', paperGsm: 160, scaleDenominator: 25 }).tiledPieceIds).toEqual([]);
   });
 
   test('ranks buildability first: grades 6–8 get the Wren at 1:5, not the one-sheet 1:10 with 10 mm panels', () => {
@@ -97,11 +96,12 @@ describe('solvePaperScale', () => {
       expect(pieceAcrossMm(p)).toBeGreaterThanOrEqual(5);
   });
 
-  test('lists the pieces to tile at a requested large scale', () => {
+  test('lists the pieces no fold can cut, to tile at a requested large scale', () => {
     const r = solvePaperScale(demoModel('thermal-puck'), { sheetId: 'a4', paperGsm: 160, scaleDenominator: 1 });
-    // At 1:1 the wall strip is π·500 mm long and each cap 500 mm across, all over A4's 190 × 277 mm printable area.
-    expect(r.tiledPieceIds).toEqual(['body', 'body-top', 'body-bottom']);
-    expect(r.explanation).toMatch(/split across sheets/);
+    // At 1:1 the wall strip is π·500 mm long and each cap 500 mm across, all over A4's 190 × 277 mm printable
+    // area: the strip is cut at its folds into parts, the caps (one flat face each) are tiled.
+    expect(r.tiledPieceIds).toEqual(['body-top', 'body-bottom']);
+    expect(r.explanation).toMatch(/no fold to cut it at .* printed in tiles across sheets/);
   });
 });
 

@@ -2,8 +2,9 @@ import polygonClipping from 'polygon-clipping';
 import type { Ring } from 'polygon-clipping';
 import { describe, expect, test } from 'vitest';
 import { InputError } from '../../../src/lib/errors';
-import { placementOutline } from '../../../src/lib/layout/placement';
-import { MAX_SHEETS, sheetPack } from '../../../src/lib/layout/sheet-packer';
+import { freeSpaceRects } from '../../../src/lib/layout/free-space';
+import { placementBounds, placementOutline } from '../../../src/lib/layout/placement';
+import { MAX_SHEETS, SHEET_SPARSE_FILL, sheetPack, sheetPackKit } from '../../../src/lib/layout/sheet-packer';
 import { SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
 import { sheetFurnitureLayout } from '../../../src/lib/layout/sheet-furniture';
 import type { LaidOutSheet, RectMm } from '../../../src/lib/layout/types';
@@ -11,7 +12,7 @@ import type { Piece } from '../../../src/lib/geometry/types';
 import { cubeNetPiece, rectPiece, sectorPiece, smallKitPieces } from '../../fixtures/pieces/pieces';
 import { multiPolygonArea } from './polygon-area';
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
-import { demoModel } from '../geometry/fixtures';
+import { DEMO_IDS, demoModel } from '../geometry/fixtures';
 
 const rectRing = (r: RectMm): Ring => [
   [r.xMm, r.yMm],
@@ -160,4 +161,86 @@ describe('sheetPack', () => {
     expect(sheets).toHaveLength(1);
     expect(sheets[0]!.placements).toEqual([]);
   });
+});
+
+describe('sheetPackKit', () => {
+  // Issue 10, item 5: a piece that fits a sheet is never tiled; a piece with folds is cut at them, never tiled;
+  // a sheet after the first that is mostly blank holds something that fits on no other sheet. Checked on
+  // every demo kit at 1:10, 1:20, 1:25 and 1:50 on Letter and A4, by brute force here rather than by the
+  // packer's own free rectangles: each box turned in 1° steps, each free spot searched on a 2 mm grid.
+  const cases = DEMO_IDS.flatMap((id) =>
+    [10, 20, 25, 50].flatMap((n) =>
+      (['letter', 'a4'] as const).map((paper) => [`${id} 1:${n} ${paper}`, id, n, paper] as const),
+    ),
+  );
+  test.each(cases)(
+    'tiles only what no fold can cut and leaves no sheet of %s mostly blank needlessly',
+    (_, id, n, paper) => {
+      const sheetSize = SHEET_SIZES[paper];
+      const units = paper === 'letter' ? 'us' : 'metric';
+      const patterns = modelPatterns(demoModel(id), { scaleDenominator: n, paperGsm: 160 });
+      const { pieces, sheets } = sheetPackKit(patterns.pieces, {
+        sheetSize,
+        units,
+        copies: 1,
+        substitutes: patterns.substitutes,
+        paperGsm: 160,
+      });
+      const byId = new Map(pieces.map((p) => [p.id, p]));
+      const printable = sheets[0]!.printableMm;
+      const furniture = (first: boolean) => sheetFurnitureLayout(printable, units, first, 0).obstacles;
+      const otherFree = freeSpaceRects(printable, furniture(false));
+      const turnedBoxes = (piece: Piece) =>
+        Array.from({ length: 180 }, (_, deg) => {
+          const a = (deg * Math.PI) / 180;
+          const xs = piece.outlineMm.map(([x, y]) => x * Math.cos(a) - y * Math.sin(a));
+          const ys = piece.outlineMm.map(([x, y]) => x * Math.sin(a) + y * Math.cos(a));
+          return [Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)] as const;
+        });
+      for (const id of new Set(sheets.flatMap((s) => s.placements.filter((p) => p.tile).map((p) => p.pieceId)))) {
+        const piece = byId.get(id)!;
+        expect(piece.hinge.joints, `${id} is tiled though it has folds to cut at`).toEqual([]);
+        const fitsSomewhere = turnedBoxes(piece).some(([w, h]) =>
+          otherFree.some((r) => w <= r.widthMm - 0.5 && h <= r.heightMm - 0.5),
+        );
+        expect(fitsSomewhere, `${id} is tiled though it fits a sheet`).toBe(false);
+      }
+      const boxes = (s: LaidOutSheet): RectMm[] => [
+        ...furniture(s.number === 1),
+        ...s.placements.map((p) => (p.tile ? p.tile.windowMm : placementBounds(p, byId.get(p.pieceId)!))),
+        ...(s.gauges ?? []).map((g) => ({ xMm: g.xMm, yMm: g.yMm, widthMm: g.toMm - g.fromMm, heightMm: 10 })),
+      ];
+      const spotFor = (w: number, h: number, s: LaidOutSheet) => {
+        const taken = boxes(s);
+        for (let y = printable.yMm; y + h <= printable.yMm + printable.heightMm; y += 2)
+          for (let x = printable.xMm; x + w <= printable.xMm + printable.widthMm; x += 2)
+            if (
+              taken.every(
+                (b) =>
+                  x + w + 4 <= b.xMm || b.xMm + b.widthMm + 4 <= x || y + h + 4 <= b.yMm || b.yMm + b.heightMm + 4 <= y,
+              )
+            )
+              return true;
+        return false;
+      };
+      for (const sheet of sheets.slice(1)) {
+        if (sheet.placements.some((p) => p.tile) || sheet.gauges?.length) continue;
+        const fill =
+          sheet.placements.reduce((a, p) => {
+            const b = placementBounds(p, byId.get(p.pieceId)!);
+            return a + b.widthMm * b.heightMm;
+          }, 0) /
+          (printable.widthMm * printable.heightMm);
+        if (fill >= SHEET_SPARSE_FILL) continue;
+        const allMovable = sheet.placements.every((p) => {
+          const b = placementBounds(p, byId.get(p.pieceId)!);
+          return sheets.some(
+            (other) =>
+              other !== sheet && (spotFor(b.widthMm, b.heightMm, other) || spotFor(b.heightMm, b.widthMm, other)),
+          );
+        });
+        expect(allMovable, `sheet ${sheet.number} is mostly blank and its pieces fit elsewhere`).toBe(false);
+      }
+    },
+  );
 });

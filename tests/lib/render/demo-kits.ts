@@ -1,6 +1,6 @@
 /** Every demo model laid out at the scales and paper sizes the label tests sweep (test-only helper). */
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
-import { sheetPack } from '../../../src/lib/layout/sheet-packer';
+import { sheetPackKit } from '../../../src/lib/layout/sheet-packer';
 import { SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
 import type { KitLayout } from '../../../src/lib/layout/types';
 import { InputError } from '../../../src/lib/errors';
@@ -14,11 +14,18 @@ export const SWEEP_PAPER_IDS = Object.values(SHEET_SIZES)
 
 /** One demo kit as the renderers get it; null when the packer refuses it (more than MAX_SHEETS sheets). */
 export function demoKit(id: string, scaleDenominator: number, sheetSizeId: string): KitLayout | null {
-  const { pieces, threads, substitutes } = modelPatterns(demoModel(id), { scaleDenominator, paperGsm: 160 });
+  const patterns = modelPatterns(demoModel(id), { scaleDenominator, paperGsm: 160 });
+  const { threads, substitutes } = patterns;
   const sheetSize = SHEET_SIZES[sheetSizeId as keyof typeof SHEET_SIZES];
   const units = sheetSize.id === 'letter' || sheetSize.id === 'legal' || sheetSize.id === 'tabloid' ? 'us' : 'metric';
   try {
-    const sheets = sheetPack(pieces, { sheetSize, units, copies: 1, substitutes });
+    const { pieces, sheets } = sheetPackKit(patterns.pieces, {
+      sheetSize,
+      units,
+      copies: 1,
+      substitutes,
+      paperGsm: 160,
+    });
     return {
       title: id,
       scaleDenominator,

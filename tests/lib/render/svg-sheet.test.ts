@@ -56,7 +56,7 @@ describe('svgSheet', () => {
 
   test('clips a tiled piece to its window so no cut runs outside it', () => {
     const tiled = kit.sheets.find((s) => s.placements.some((p) => p.tile))!;
-    const w = tiled.placements[0]!.tile!.windowMm;
+    const w = tiled.placements.find((p) => p.tile)!.tile!.windowMm;
     const cutPaths = [...group(svgSheet(kit, tiled), 'cut').matchAll(/<path d="([^"]*)"/g)].map((m) => m[1]!);
     for (const d of cutPaths) {
       const box = SVGPathCommander.getPathBBox(d);
