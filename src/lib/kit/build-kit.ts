@@ -19,6 +19,7 @@ import { stlBinary } from '../render/stl';
 import { svgSheet } from '../render/svg-sheet';
 import { contentHash } from './content-hash';
 import { ENGINE_VERSION } from './engine-version';
+import { kitMaterialLines } from './kit-materials';
 import { kitPrintScale, kitPrintView, type KitPrintView } from './kit-print';
 import type { KitRequest } from './kit-request';
 
@@ -101,6 +102,7 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
     threads,
     substitutes,
     gradeBand: request.gradeBand,
+    ...kitMaterialLines({ threads, substitutes, gradeBand: request.gradeBand, units: request.units }),
     smallestLabelMm: BUILDABILITY_MINIMUMS[request.gradeBand].labelMm,
     cutList: size.kind === 'stock' ? cutListRows(pieces, sheets) : [],
     qrUrl: request.qrUrl,

@@ -46,7 +46,10 @@ export function kitPageData(row: KitRow) {
       venue,
       units: request.units,
     }),
-    steps: assemblySteps(pieces),
+    steps: assemblySteps(
+      pieces,
+      substitutes.flatMap((s) => (s.kind === 'boom-stock' ? [s] : [])),
+    ),
     threads,
     materials: kitMaterials({ threads, substitutes, gradeBand: request.gradeBand, units: request.units }),
     preview: {

@@ -98,6 +98,10 @@ export interface KitLayout {
    * default (GLUE_MARK_MIN_MM_DEFAULT, grades 6–8) when absent.
    */
   smallestLabelMm?: number;
+  /** What to have ready besides paper and glue (thread, rods, …), one line each; printed on the instructions. */
+  materials?: string[];
+  /** Cautions for building the kit, one line each, ending with the school-rules note; printed likewise. */
+  cautions?: string[];
   /** Where the instructions pages go in the PDF: before the sheets or after them (the default). */
   instructionsAt?: 'first' | 'last';
 }

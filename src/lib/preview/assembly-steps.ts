@@ -7,8 +7,13 @@
  * same) piece. It is glued in the step that adds the later of its two pieces, so split pieces and new joints
  * are covered without knowing how they were made.
  */
+import { buildabilityMm } from '../geometry/buildability';
+import { BOOM_STOCK, type PartSubstitute } from '../geometry/part-substitutes';
 import type { Piece } from '../geometry/types';
 import { FOLD_WORDS } from '../render/fold-words';
+
+/** A rod (straw, skewer, dowel) standing in for a boom too thin for paper: one step of its own. */
+export type AssemblyRod = Extract<PartSubstitute, { kind: 'boom-stock' }>;
 
 /** Most glue joints in one step: a class glues four tabs before it needs to check the next ones. */
 export const ASSEMBLY_STEP_JOINTS_MAX = 4; // issue 10: "steps of at most four joints each"
@@ -39,8 +44,11 @@ export function assemblyStepPieceState(step: AssemblyStep | undefined, pieceId: 
   return step.builtPieceIds.includes(pieceId) ? 'built' : 'later';
 }
 
-/** The steps of `pieces`: pieces by assemblyStep, then in the given order; no pieces gives []. */
-export function assemblySteps(pieces: readonly Piece[]): AssemblyStep[] {
+/**
+ * The steps of `pieces`: pieces by assemblyStep, then in the given order, then one step per rod that replaces
+ * a boom (no pieces, no tabs: cut it to length and glue it on); nothing gives [].
+ */
+export function assemblySteps(pieces: readonly Piece[], rods: readonly AssemblyRod[] = []): AssemblyStep[] {
   const order = pieces
     .map((p, i) => ({ p, i }))
     .sort((a, b) => a.p.assemblyStep - b.p.assemblyStep || a.i - b.i)
@@ -67,13 +75,28 @@ export function assemblySteps(pieces: readonly Piece[]): AssemblyStep[] {
     built.push(piece.id);
   });
   const byId = new Map(order.map((p) => [p.id, p]));
-  return raw.map((step, i) => {
+  const total = raw.length + rods.length;
+  const pieceSteps = raw.map((step, i) => {
     const piece = byId.get(step.pieceIds[0]!)!;
     const first = i === 0 || raw[i - 1]!.pieceIds[0] !== piece.id;
     const action = first ? assemblyAction(piece, step.tabNumbers) : assemblyMore(step.tabNumbers);
-    const description = `Step ${i + 1} of ${raw.length}: ${piece.label}. ${action}`;
+    const description = `Step ${i + 1} of ${total}: ${piece.label}. ${action}`;
     return { number: i + 1, ...step, action, description };
   });
+  const rodSteps = rods.map((rod, k) => {
+    const number = raw.length + k + 1;
+    const action = `Cut ${BOOM_STOCK[rod.stock].words} to ${buildabilityMm(rod.lengthMm)} against its gauge on the sheet, then glue one end to the body where the boom stands.`;
+    return {
+      number,
+      pieceIds: [],
+      pieceLabels: [rod.label],
+      builtPieceIds: order.map((p) => p.id),
+      tabNumbers: [],
+      action,
+      description: `Step ${number} of ${total}: ${rod.label}. ${action}`,
+    };
+  });
+  return [...pieceSteps, ...rodSteps];
 }
 
 /** Tab numbers in words with runs collapsed: [1, 2, 3, 5] → "tabs 1–3 and 5"; [] → "no tabs". */

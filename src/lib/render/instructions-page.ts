@@ -1,11 +1,11 @@
 /**
- * The kit's instructions pages: the fold words, then every assembly step in order, each with its number, a
+ * The kit's instructions pages: the fold words, what to have ready (the kit's materials list) and the
+ * cautions, then every assembly step in order (rods that replace booms last), each with its number, a
  * small drawing (step-drawing.ts) and what to do in words, in two columns. Page mm, y down; as many pages
  * as the steps need. The steps come from the same module as the 3D preview's and the pieces' step badges.
  */
-import type { Piece } from '../geometry/types';
-import type { RectMm } from '../layout/types';
-import { assemblySteps } from '../preview/assembly-steps';
+import type { KitLayout, RectMm } from '../layout/types';
+import { assemblySteps, type AssemblyRod } from '../preview/assembly-steps';
 import { FOLD_WORDS, foldWordsLine } from './fold-words';
 import type { LabelMeasure } from './label-placement';
 import { sceneWrapWords } from './scene-footer';
@@ -37,14 +37,20 @@ const text = (value: string, atMm: [number, number], sizeMm: number, bold = fals
   group: 'furniture',
 });
 
-/** The instructions pages of a kit's pieces on pages of `page` size, text measured by `measure`. */
+/** Heading of the materials list on the first instructions page. */
+export const INSTRUCTIONS_MATERIALS_TITLE = 'You need';
+/** Heading of the cautions on the first instructions page. */
+export const INSTRUCTIONS_CAUTIONS_TITLE = 'Be careful';
+
+/** The instructions pages of a kit on pages of `page` size, text measured by `measure`. */
 export function instructionsPages(
-  title: string,
-  pieces: readonly Piece[],
+  kit: Pick<KitLayout, 'title' | 'pieces' | 'substitutes' | 'materials' | 'cautions'>,
   page: { widthMm: number; heightMm: number },
   measure: LabelMeasure,
 ): InstructionsPage[] {
-  const steps = assemblySteps(pieces);
+  const { title, pieces } = kit;
+  const rods = kit.substitutes.filter((s): s is AssemblyRod => s.kind === 'boom-stock');
+  const steps = assemblySteps(pieces, rods);
   const pages: InstructionsPage[] = [];
   const columnMm = (page.widthMm - 2 * MARGIN_MM) / 2;
   let current: InstructionsPage | null = null;
@@ -67,6 +73,21 @@ export function instructionsPages(
         for (const l of sceneWrapWords(line, page.widthMm - 2 * MARGIN_MM, BODY_MM, measure)) {
           current.texts.push(text(l, [MARGIN_MM, y], BODY_MM));
           y += BODY_MM * LEADING_EM;
+        }
+      }
+      for (const [heading, lines] of [
+        [INSTRUCTIONS_MATERIALS_TITLE, kit.materials ?? []],
+        [INSTRUCTIONS_CAUTIONS_TITLE, kit.cautions ?? []],
+      ] as const) {
+        if (lines.length === 0) continue;
+        y += 2;
+        current.texts.push(text(heading, [MARGIN_MM, y], BODY_MM * 1.2, true));
+        y += BODY_MM * 1.2 * LEADING_EM;
+        for (const line of lines) {
+          sceneWrapWords(`• ${line}`, page.widthMm - 2 * MARGIN_MM - 3, BODY_MM, measure).forEach((l, i) => {
+            current!.texts.push(text(l, [MARGIN_MM + (i > 0 ? 3 : 0), y], BODY_MM));
+            y += BODY_MM * LEADING_EM;
+          });
         }
       }
       y += 3;

@@ -42,7 +42,7 @@ export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
     return doc.getTextWidth(text);
   };
   const pageSize = first ?? kit.sheetSize;
-  const instructions = instructionsPages(kit.title, kit.pieces, pageSize, measure);
+  const instructions = instructionsPages(kit, pageSize, measure);
   let pages = 0;
   const addPage = (format: [number, number]) => {
     if (pages++ > 0) doc.addPage(format, 'portrait');

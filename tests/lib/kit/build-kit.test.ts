@@ -52,7 +52,7 @@ describe('buildKit', () => {
   test('builds the Skein probe at 1:20 on Letter with the model engine: PDF pages = sheets + instructions = SVGs + instructions', async () => {
     const kit = await buildKit(request(), fonts);
     const pdf = await PDFDocument.load(kit.pdf!);
-    const instructions = instructionsPages(kit.layout.title, kit.layout.pieces, kit.layout.sheetSize, textWidthMm);
+    const instructions = instructionsPages(kit.layout, kit.layout.sheetSize, textWidthMm);
     expect(instructions.length).toBeGreaterThan(0);
     expect(pdf.getPageCount()).toBe(kit.layout.sheets.length + instructions.length);
     expect(kit.svgSheets).toHaveLength(kit.layout.sheets.length);

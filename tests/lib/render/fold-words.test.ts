@@ -36,7 +36,7 @@ describe('fold words', () => {
     'sheet legend': sheetScene(kit, kit.sheets[0]!)
       .texts.map((t) => t.text)
       .join('\n'),
-    'instructions page': instructionsPages(kit.title, kit.pieces, kit.sheetSize, textWidthMm)
+    'instructions page': instructionsPages(kit, kit.sheetSize, textWidthMm)
       .flatMap((p) => p.texts.map((t) => t.text))
       .join(' '),
     'preview steps': assemblySteps(kit.pieces)

@@ -1,5 +1,7 @@
 import { describe, expect, test } from 'vitest';
-import { assemblySteps, assemblyStepPieceState } from '../../../src/lib/preview/assembly-steps';
+import { assemblySteps, assemblyStepPieceState, type AssemblyRod } from '../../../src/lib/preview/assembly-steps';
+import type { KitLayout } from '../../../src/lib/layout/types';
+import { kitMaterialLines } from '../../../src/lib/kit/kit-materials';
 import { instructionsPages } from '../../../src/lib/render/instructions-page';
 import { pdfKit } from '../../../src/lib/render/pdf-kit';
 import { pieceTabsFold } from '../../../src/lib/preview/tab-fold';
@@ -12,12 +14,13 @@ import { DEMO_IDS } from '../geometry/fixtures';
 
 const fonts = fixtureFonts();
 const BOX = { xMm: 0, yMm: 0, widthMm: 44, heightMm: 44 };
+const rodsOf = (kit: KitLayout) => kit.substitutes.filter((s): s is AssemblyRod => s.kind === 'boom-stock');
 
 describe('instructionsPages', () => {
   test.each(DEMO_IDS)('puts every step of %s on the pages once, in order', (id) => {
     const kit = demoKit(id, 20, 'letter')!;
-    const pages = instructionsPages(kit.title, kit.pieces, kit.sheetSize, textWidthMm);
-    const steps = assemblySteps(kit.pieces);
+    const pages = instructionsPages(kit, kit.sheetSize, textWidthMm);
+    const steps = assemblySteps(kit.pieces, rodsOf(kit));
     expect(pages.flatMap((p) => p.stepNumbers)).toEqual(steps.map((s) => s.number));
   });
 
@@ -29,7 +32,7 @@ describe('instructionsPages', () => {
     async (at, _side) => {
       const kit = { ...demoKit('skein-probe', 20, 'letter')!, instructionsAt: at };
       const texts = await pdfPageTexts(pdfKit(kit, fonts));
-      const steps = assemblySteps(kit.pieces);
+      const steps = assemblySteps(kit.pieces, rodsOf(kit));
       const instructionPages = texts.filter(
         (t) => /^How to build it|\nStep 1\n|^Step \d+\n/m.test(t) && !/Sheet \d+ of/.test(t),
       );
@@ -47,6 +50,33 @@ describe('instructionsPages', () => {
       expect(numbers).toEqual(steps.map((s) => s.number));
     },
   );
+});
+
+describe('the first instructions page', () => {
+  // Issue 10: the kit's materials list and the cautions on the first instructions page, and a step for each
+  // rod that replaces a boom; read back from the PDF by pdf.js (a PDF library other than the writer).
+  test('lists the materials and cautions of the Skein at 1:20 and has a step for each skewer', async () => {
+    const base = demoKit('skein-probe', 20, 'letter')!;
+    const lines = kitMaterialLines({
+      threads: base.threads,
+      substitutes: base.substitutes,
+      gradeBand: '6-8',
+      units: 'us',
+    });
+    const kit = { ...base, ...lines, instructionsAt: 'first' as const };
+    const first = (await pdfPageTexts(pdfKit(kit, fonts)))[0]!.replace(/\s+/g, ' ');
+    expect(first).toMatch(/You need .*Scissors, a glue stick and a ruler/);
+    expect(first).toMatch(/Be careful .*scissors/i);
+    expect(first).toContain("Follow your school's safety rules and local codes.");
+    // The Skein's 35 m wire booms at 1:20 are 1.75 m of thread each; its 6 m axial booms 300 mm skewers.
+    expect(first).toMatch(/Wire boom \+X: thread, cut/);
+    expect(first).toMatch(/Axial boom, top: a bamboo skewer cut to 300 mm/);
+    expect(first.indexOf('You need')).toBeLessThan(first.indexOf('Step 1'));
+    const steps = assemblySteps(kit.pieces, rodsOf(kit));
+    const rodSteps = steps.filter((s) => s.pieceIds.length === 0);
+    expect(rodSteps.map((s) => s.pieceLabels[0])).toEqual(['Axial boom, top', 'Axial boom, bottom']);
+    for (const s of rodSteps) expect(s.action).toMatch(/Cut a bamboo skewer to 300 mm/);
+  });
 });
 
 describe('stepDrawing', () => {

@@ -32,7 +32,7 @@ describe('pdfKit', () => {
     const kit = fixtureKit('letter', 'us');
     const bytes = pdfKit(kit, fonts);
     const doc = await pdfjsPages(bytes);
-    const pages = kit.sheets.length + instructionsPages(kit.title, kit.pieces, kit.sheetSize, textWidthMm).length;
+    const pages = kit.sheets.length + instructionsPages(kit, kit.sheetSize, textWidthMm).length;
     expect(doc.numPages).toBe(pages);
     for (let n = 1; n <= doc.numPages; n++) {
       const [x0, y0, x1, y1] = (await doc.getPage(n)).view;
