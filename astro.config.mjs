@@ -8,6 +8,7 @@ import { COMPAT_LIBRARIES, PREACT_ISLANDS, REACT_ISLANDS, islandRuntimes } from 
 import { originAllowedHostnames } from './src/lib/http/origin-check.ts';
 import { CSP_DIRECTIVES, CSP_SCRIPT_SOURCES, CSP_STYLE_SOURCES } from './src/lib/http/security-headers.ts';
 import { precompress } from './config/precompress.mjs';
+import { clientChunks } from './config/client-chunks.mjs';
 import { serverEntries } from './config/server-entries.mjs';
 
 export default defineConfig({
@@ -45,7 +46,7 @@ export default defineConfig({
     },
   },
   vite: {
-    plugins: [islandRuntimes(), tailwindcss(), serverEntries()],
+    plugins: [islandRuntimes(), tailwindcss(), serverEntries(), clientChunks()],
     // The dev server's pre-bundler would bind these to React before the alias sees them.
     optimizeDeps: { exclude: COMPAT_LIBRARIES, include: ['preact/compat', 'preact/hooks', 'preact/jsx-runtime'] },
     ssr: {

@@ -15,7 +15,12 @@ export const FUZZ_LOCAL_ADDRESS = '127.0.0.73';
 const ANSWER_WAIT_MS = 15_000;
 
 const target = new URL(BASE_URL);
-const agent = new Agent({ keepAlive: true, maxSockets: 8, localAddress: FUZZ_LOCAL_ADDRESS });
+/**
+ * Idle kept-alive sockets are closed after this, well before the server's own keep-alive timeout (Node's 5 s):
+ * a socket reused just as the server closes it fails with "socket hang up", the client's race, not the server's.
+ */
+const IDLE_SOCKET_MS = 2_000;
+const agent = new Agent({ keepAlive: true, maxSockets: 8, timeout: IDLE_SOCKET_MS, localAddress: FUZZ_LOCAL_ADDRESS });
 
 export interface FuzzRequest {
   method: string;

@@ -86,24 +86,26 @@ async function cookieFor(caller: Caller, cast: Cast): Promise<Record<string, str
   return { cookie: await userSessionCookie(knex, cast[caller].id) };
 }
 
-const schemasByFile = new Map<string, Promise<ZodTypeAny[]>>();
-let importsDone: Promise<unknown> = Promise.resolve();
+/** The zod schemas each route file checks its input with (the plugin's export), filled by routeSchemasLoad. */
+const schemasByFile = new Map<string, ZodTypeAny[]>();
 
 /**
- * The zod schemas a route file checks its input with (the plugin's export), or none. Route modules are imported
- * one at a time: concurrent dynamic imports of modules that import each other in a cycle can wait on each other
- * forever in vitest's module runner, which stalled every concurrent test that imported a worker-pool route.
+ * Imports every route module, one at a time, before any request is timed. Concurrent dynamic imports of modules
+ * that import each other in a cycle can wait on each other forever in vitest's module runner, and an import
+ * during the cases (transforming and evaluating a module graph on this thread) delays reading the answers of the
+ * requests in flight, which then look slow.
  */
-function routeSchemas(file: string): Promise<ZodTypeAny[]> {
-  let schemas = schemasByFile.get(file);
-  if (!schemas) {
-    schemas = importsDone.then(async () => {
-      const module = (await import(/* @vite-ignore */ file)) as Record<string, unknown>;
-      return Object.values((module[ROUTE_INPUT_SCHEMAS_EXPORT] ?? {}) as Record<string, ZodTypeAny>);
-    });
-    importsDone = schemas.catch(() => undefined);
-    schemasByFile.set(file, schemas);
+async function routeSchemasLoad(files: Iterable<string>): Promise<void> {
+  for (const file of files) {
+    const module = (await import(/* @vite-ignore */ file)) as Record<string, unknown>;
+    schemasByFile.set(file, Object.values((module[ROUTE_INPUT_SCHEMAS_EXPORT] ?? {}) as Record<string, ZodTypeAny>));
   }
+}
+
+/** The schemas of a route file loaded by routeSchemasLoad. */
+function routeSchemas(file: string): ZodTypeAny[] {
+  const schemas = schemasByFile.get(file);
+  if (!schemas) throw new Error(`${file} was not loaded before the cases`);
   return schemas;
 }
 
@@ -301,11 +303,13 @@ const byFile = new Map<string, RouteOnDisk[]>();
 for (const r of routes) byFile.set(r.file, [...(byFile.get(r.file) ?? []), r]);
 
 describe.concurrent('fuzz: every route method on disk, with inputs derived from its own schemas', () => {
-  // Imports every route module (the plugin's transform of each): over 30 s on a loaded two-core machine.
-  it('finds the routes and the schemas they check input with', { timeout: 120_000 }, async () => {
+  // The plugin's transform of every route module: over 30 s on a loaded two-core machine.
+  beforeAll(() => routeSchemasLoad(byFile.keys()), 300_000);
+
+  it('finds the routes and the schemas they check input with', () => {
     expect(routes.length).toBeGreaterThan(10);
     const posts = routes.filter((r) => r.method === 'POST');
-    const withSchemas = await Promise.all(posts.map(async (r) => (await routeSchemas(r.file)).length > 0));
+    const withSchemas = posts.map((r) => routeSchemas(r.file).length > 0);
     // Most POST routes read a body through a zod schema; the plugin must find them.
     expect(withSchemas.filter(Boolean).length).toBeGreaterThan(posts.length / 2);
   });
@@ -316,7 +320,7 @@ describe.concurrent('fuzz: every route method on disk, with inputs derived from 
     it(`${r.method} ${r.route}: ${runs} cases`, { timeout: 120_000 }, async () => {
       const cast = await castCreate(`${r.method}-${r.route}`, r.route.startsWith('/api/kits/['));
       const caller = await callerAdmitted(r.method, r.route, cast);
-      const schemas = await routeSchemas(r.file);
+      const schemas = routeSchemas(r.file);
       const method = r.method === 'ALL' ? fc.constantFrom(...STANDARD_METHODS) : fc.constant(r.method);
       const bodies = stateChanging ? bodyArbitrary(schemas) : fc.constant<BodyCase>({ type: null, body: undefined });
       // A read-only route's schemas check its query: query strings are derived from them as well.

@@ -92,7 +92,8 @@ describe('POST /api/kits/preview', () => {
   });
 
   it('refuses more than 200 sheets with the packer message', async () => {
-    const res = await postJson('/api/kits/preview', { ...INPUTS, scaleDenominator: 2 }, as(teacherCookie));
+    // Life size: 743 Letter sheets (1:2 needs 197 since long nets are cut at a fold instead of tiled).
+    const res = await postJson('/api/kits/preview', { ...INPUTS, scaleDenominator: 1 }, as(teacherCookie));
     expect(res.status).toBe(400);
     expect((await body(res)).error.message).toMatch(/200 is the most a kit may have/);
   });
@@ -146,7 +147,7 @@ describe('POST /api/kits/preview', () => {
     });
 
     it('ends with an error line (status 400) when the layout needs more than 200 sheets', async () => {
-      const got = await lines(await streamed({ ...INPUTS, scaleDenominator: 2 }));
+      const got = await lines(await streamed({ ...INPUTS, scaleDenominator: 1 }));
       expect(got[0]).toMatchObject({ type: 'stage', stage: 'patterns' });
       const last = got[got.length - 1];
       expect(last).toMatchObject({ type: 'error', status: 400, error: { code: 'invalid_input' } });
