@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CLASS_CODE_ALPHABET } from '../../src/lib/auth/class-code';
 import { CLASS_SESSION_COOKIE } from '../../src/lib/auth/cookies';
+import type { ErrorBody } from '../../src/lib/http/respond';
 import { testKnex } from '../db/database';
 import { api, BASE_URL, postJson } from './harness';
 import {
@@ -60,6 +61,15 @@ describe('POST /api/classes', () => {
       { cookie: teacherCookie },
     );
     expect(res.status).toBe(400);
+    const { error } = (await res.json()) as ErrorBody;
+    expect(error.code).toBe('invalid_input');
+    // The strict schema refuses the extra key on the object itself (path ""), naming it; the three allowed
+    // fields were valid, so no error is filed under them.
+    expect(error.fields?.['']).toEqual([expect.stringContaining("'students'")]);
+    expect(Object.keys(error.fields ?? {})).toEqual(['']);
+    expect(error.message).toContain("'students'");
+    // Nothing was stored under the refused request.
+    expect(await knex('classes').where({ name: 'Period 1', teacher_id: teacher.id }).first()).toBeUndefined();
   });
 });
 
