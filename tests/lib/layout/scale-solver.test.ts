@@ -1,6 +1,12 @@
 import { describe, expect, test } from 'vitest';
 import { solveKitScale, solvePaperScale } from '../../../src/lib/layout/scale-solver';
-import { buildabilityShortfalls, pieceAcrossMm, pieceTabDepthMm } from '../../../src/lib/geometry/buildability';
+import {
+  buildabilityShortfalls,
+  convexHull,
+  pieceAcrossMm,
+  pieceTabDepthMm,
+} from '../../../src/lib/geometry/buildability';
+import { vec2Sub } from '../../../src/lib/geometry/vec';
 import { sheetPack } from '../../../src/lib/layout/sheet-packer';
 import { VENUES, venueCustom } from '../../../src/lib/layout/venues';
 import { SHEET_MARGIN_MM, SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
@@ -20,10 +26,20 @@ describe('solvePaperScale', () => {
     expect(r.scaleDenominator).toBe(50);
     expect(r.sheetCount).toBe(1);
     expect(r.tiledPieceIds).toEqual([]);
-    // By hand (CRC: side of a regular hexagon with apothem 1.2 m is 2·1.2·tan 30° = 1.3856 m): at 1:25 the
-    // six-wall strip alone is 6 · 1385.6 / 25 = 332.6 mm, longer than Letter's printable 259.4 mm: it is cut
-    // at a fold into parts that fit (issue 10, item 5), so nothing is tiled.
-    expect((6 * 2 * 1200 * Math.tan(Math.PI / 6)) / 25).toBeGreaterThan(letter[1]);
+    // CRC Handbook (regular polygons): the side of a regular hexagon with apothem 1.2 m (2.4 m across the
+    // flats, the model file) is 2·1.2·tan 30° = 1.3856 m, so at 1:25 the six-wall strip is 6 · 1385.6 / 25 =
+    // 332.6 mm long and 900 / 25 = 36 mm tall. Measured on the strip the engine lays out: the long side of
+    // its walls' outline (convex hull, collinear corners dropped) and its narrowest width.
+    const wall = modelPatterns(m, { scaleDenominator: 25, paperGsm: 160 }).pieces.find((p) => p.id === 'body')!;
+    expect(wall.hinge.faces).toHaveLength(6);
+    const outline = convexHull(wall.hinge.faces.flatMap((f) => f.polygonMm));
+    const sides = outline.map((p, i) => Math.hypot(...vec2Sub(outline[(i + 1) % outline.length]!, p)));
+    const stripMm = (6 * 2 * 1200 * Math.tan(Math.PI / 6)) / 25;
+    expect(Math.max(...sides)).toBeCloseTo(stripMm, 6);
+    expect(pieceAcrossMm(wall)).toBeCloseTo(900 / 25, 6);
+    // Longer than Letter's printable 259.4 mm: the solver cuts it at a fold into parts that fit (issue 10,
+    // item 5), so nothing is tiled.
+    expect(Math.max(...sides)).toBeGreaterThan(letter[1]);
     expect(solvePaperScale(m, { sheetId: 'letter', paperGsm: 160, scaleDenominator: 25 }).tiledPieceIds).toEqual([]);
   });
 
