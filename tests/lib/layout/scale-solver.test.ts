@@ -6,7 +6,8 @@ import {
   pieceAcrossMm,
   pieceTabDepthMm,
 } from '../../../src/lib/geometry/buildability';
-import { vec2Sub } from '../../../src/lib/geometry/vec';
+import { tabFit } from '../../../src/lib/geometry/tab-fit';
+import { vec2Add, vec2Scale, vec2Sub, vec2Unit } from '../../../src/lib/geometry/vec';
 import { sheetPack } from '../../../src/lib/layout/sheet-packer';
 import { VENUES, venueCustom } from '../../../src/lib/layout/venues';
 import { SHEET_MARGIN_MM, SHEET_SIZES } from '../../../src/lib/layout/sheet-sizes';
@@ -14,7 +15,7 @@ import { InputError } from '../../../src/lib/errors';
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
 import { demoModel } from '../geometry/fixtures';
 import { ModelSchema } from '../../../src/lib/geometry/model-schema';
-import type { Piece } from '../../../src/lib/geometry/types';
+import type { Piece, Vec2Mm } from '../../../src/lib/geometry/types';
 
 // ASME Y14.1: Letter 8.5 × 11 in; printable area inside the 10 mm margin.
 const letter = [8.5 * 25.4 - 2 * SHEET_MARGIN_MM, 11 * 25.4 - 2 * SHEET_MARGIN_MM] as const;
@@ -163,10 +164,33 @@ describe('pieceTabDepthMm', () => {
   });
 
   test('measures the trimmed depth, so a crowded tab is refused at a scale where the untrimmed one passes', () => {
-    // A 12-gon's hinged cap used to crowd the tabs beside its hinge wall to a wedge of 30°.
-    const fake = { ...modelPatterns(cylinder(16), { scaleDenominator: 5, paperGsm: 160 }).pieces[0]! };
-    fake.tabs = fake.tabs.map((t, i) => (i === 1 ? { ...t, depthMm: 1.7 } : t));
-    expect(pieceTabDepthMm(fake)).toBe(1.7);
+    // A 12-gon's hinged cap used to crowd the tabs beside its hinge wall to a wedge of 30°. Here a neighbour
+    // 1.7 mm out from a wall tab's edge, along all of it, crowds that tab; the engine's fitter trims it.
+    const wall = modelPatterns(cylinder(16), { scaleDenominator: 5, paperGsm: 160 }).pieces[0]!;
+    expect(buildabilityShortfalls([wall], 'adult')).toEqual([]);
+    const tab = wall.tabs[1]!;
+    // A fitted tab is [b, a, a', b'] on edge a→b, outside to its right (tab-fit.ts).
+    const [b, a] = tab.polygonMm as [Vec2Mm, Vec2Mm];
+    const along = vec2Unit(vec2Sub(b, a));
+    const out: Vec2Mm = [along[1], -along[0]];
+    const at = (p: Vec2Mm, outMm: number, alongMm: number) =>
+      vec2Add(vec2Add(p, vec2Scale(out, outMm)), vec2Scale(along, alongMm));
+    const neighbour = [at(b, 1.7, 10), at(a, 1.7, -10), at(a, 20, -10), at(b, 20, 10)];
+    const fitted = tabFit(a, b, tab.depthMm!, [neighbour]);
+    const crowded = {
+      ...wall,
+      tabs: wall.tabs.map((t, i) => (i === 1 ? { ...t, polygonMm: fitted.polygonMm, depthMm: fitted.depthMm } : t)),
+    };
+    // Measured from the drawn polygon, the trimmed tab reaches the neighbour (to the fitter's 16 bisection
+    // steps), and the piece's tab depth is that trimmed depth, stated or read off the polygon alike.
+    expect(foldedTabReachMm(crowded, tab.number)).toBeCloseTo(1.7, 3);
+    expect(pieceTabDepthMm(crowded)).toBeCloseTo(foldedTabReachMm(crowded, tab.number)!, 6);
+    const unstated = crowded.tabs.map(({ depthMm: _stated, ...t }) => t);
+    expect(pieceTabDepthMm({ tabs: unstated })).toBeCloseTo(1.7, 3);
+    // So the adult floor (a 3 mm tab) refuses the crowded piece, naming the tab depth it measured.
+    const shortfalls = buildabilityShortfalls([crowded], 'adult');
+    expect(shortfalls).toEqual([expect.objectContaining({ pieceId: wall.id, what: 'tabMm', minimumMm: 3 })]);
+    expect(shortfalls[0]!.measuredMm).toBeCloseTo(1.7, 3);
   });
 });
 
