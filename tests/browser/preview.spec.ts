@@ -65,14 +65,16 @@ describe('fold preview', () => {
     const { page } = await pageNew(browser);
     await previewOpen(page);
     const canvas = page.getByTestId('fold-canvas');
+    // data-rendered-view counts the view actions the frame on screen shows (FoldCanvas): none yet.
+    expect(await canvas.getAttribute('data-rendered-view')).toBe('0');
     const before = await canvas.screenshot();
     await canvas.focus();
     await page.keyboard.press('ArrowRight');
-    await page.waitForTimeout(200);
+    await page.waitForSelector('[data-testid="fold-canvas"][data-rendered-view="1"]');
     const turned = await canvas.screenshot();
     expect(await pixelDifference(before, turned)).toBeGreaterThan(0.001);
     await page.keyboard.press('r');
-    await page.waitForTimeout(200);
+    await page.waitForSelector('[data-testid="fold-canvas"][data-rendered-view="2"]');
     // Same camera, same scene: the reset frame matches the first one (SwiftShader renders deterministically).
     expect(await pixelDifference(before, await canvas.screenshot())).toBeLessThan(0.001);
     expect(await page.getByText('R resets the view').isVisible()).toBe(true);

@@ -3,6 +3,7 @@ import type { Piece } from '../../lib/geometry/types';
 import type { PreviewRod } from './fold-preview-props';
 import type { AssemblyStep } from '../../lib/preview/assembly-steps';
 import FoldScene from './FoldScene';
+import type { FrameShown } from './SceneReadySignal';
 import SceneCanvas from './SceneCanvas';
 import { viewCommandRun, viewKeyCommand, type ViewActions } from '../../lib/preview/view-keys';
 import { viewCamera, viewFrame } from './view-frame';
@@ -23,7 +24,9 @@ export interface FoldCanvasProps {
 
 /**
  * The WebGL view (loaded lazily, with three.js): a focusable region whose keys orbit, zoom and reset; it
- * sets data-scene-ready and fires the window event 'kitwright:scene-ready' after its first frame.
+ * sets data-scene-ready and fires the window event 'kitwright:scene-ready' after its first frame. Once a
+ * frame is on screen it sets data-rendered-fold to the fold percent it shows and data-rendered-view to the
+ * number of view actions (keys and buttons) applied before it, so tests wait for the frame, not a delay.
  */
 export default function FoldCanvas({
   pieces,
@@ -36,6 +39,7 @@ export default function FoldCanvas({
   hintId,
 }: FoldCanvasProps) {
   const wrapper = useRef<HTMLDivElement>(null);
+  const viewVersion = useRef(0);
   const frame = useMemo(() => viewFrame(pieces), [pieces]);
   const onKeyDown = useCallback(
     (e: KeyboardEvent<HTMLDivElement>) => {
@@ -47,13 +51,14 @@ export default function FoldCanvas({
     },
     [actionsRef],
   );
-  const onRendered = useCallback((percent: number, first: boolean) => {
+  const onRendered = useCallback((shown: FrameShown, first: boolean) => {
     const el = wrapper.current;
     if (!el) return;
-    el.dataset.renderedFold = String(percent);
+    el.dataset.renderedFold = String(shown.foldPercent);
+    el.dataset.renderedView = String(shown.viewVersion);
     if (first) {
       el.dataset.sceneReady = 'true';
-      window.dispatchEvent(new CustomEvent('kitwright:scene-ready', { detail: { foldPercent: percent } }));
+      window.dispatchEvent(new CustomEvent('kitwright:scene-ready', { detail: { foldPercent: shown.foldPercent } }));
     }
   }, []);
   return (
@@ -76,6 +81,7 @@ export default function FoldCanvas({
           step={step}
           frame={frame}
           actionsRef={actionsRef}
+          viewVersion={viewVersion}
           onRendered={onRendered}
         />
       </SceneCanvas>

@@ -5,7 +5,7 @@ import PieceMesh, { type PieceState } from './PieceMesh';
 import RodMesh from './RodMesh';
 import type { PreviewRod } from './fold-preview-props';
 import ViewRig from './ViewRig';
-import SceneReadySignal from './SceneReadySignal';
+import SceneReadySignal, { type FrameShown } from './SceneReadySignal';
 import type { ViewActions } from '../../lib/preview/view-keys';
 import type { ViewFrame } from './view-frame';
 
@@ -20,7 +20,8 @@ interface Props {
   step: AssemblyStep | undefined;
   frame: ViewFrame;
   actionsRef: RefObject<ViewActions | null>;
-  onRendered(foldPercent: number, first: boolean): void;
+  viewVersion: RefObject<number>;
+  onRendered(shown: FrameShown, first: boolean): void;
 }
 
 const stateOf = (piece: Piece, step: AssemblyStep | undefined): PieceState => assemblyStepPieceState(step, piece.id);
@@ -34,6 +35,7 @@ export default function FoldScene({
   step,
   frame,
   actionsRef,
+  viewVersion,
   onRendered,
 }: Props) {
   const fraction = foldPercent / 100;
@@ -53,8 +55,8 @@ export default function FoldScene({
       {rods.map((r) => (
         <RodMesh key={r.partId} name={r.partId} fromMm={r.fromMm} toMm={r.toMm} diameterMm={r.diameterMm} />
       ))}
-      <ViewRig frame={frame} actionsRef={actionsRef} />
-      <SceneReadySignal foldPercent={foldPercent} onRendered={onRendered} />
+      <ViewRig frame={frame} actionsRef={actionsRef} viewVersion={viewVersion} />
+      <SceneReadySignal foldPercent={foldPercent} viewVersion={viewVersion} onRendered={onRendered} />
     </>
   );
 }

@@ -13,7 +13,7 @@ import {
 import { formationArrow, formationSizeCm, type FormationDetail } from '../../lib/preview/formation-event';
 import type { ViewActions } from '../../lib/preview/view-keys';
 import SceneCanvas from './SceneCanvas';
-import SceneReadySignal from './SceneReadySignal';
+import SceneReadySignal, { type FrameShown } from './SceneReadySignal';
 import ViewRig from './ViewRig';
 import { viewCamera, viewFrameOfPoints } from './view-frame';
 
@@ -76,7 +76,7 @@ export default function FormationCanvas({ formation }: { formation: FormationDet
     },
     [objects],
   );
-  const onRendered = useCallback((_v: number, first: boolean) => {
+  const onRendered = useCallback((_shown: FrameShown, first: boolean) => {
     const el = wrapper.current;
     if (!el) return;
     if (first) el.dataset.sceneReady = 'true';

@@ -16,10 +16,12 @@ const ELEVATION_LIMIT_RAD = 0.05;
 interface Props {
   frame: ViewFrame;
   actionsRef: RefObject<ViewActions | null>;
+  /** Counted up by every view action applied (keys and buttons), for SceneReadySignal to report. */
+  viewVersion?: RefObject<number>;
 }
 
 /** Orbit controls (drag, wheel, pinch) plus the same moves as actions for the keyboard and the buttons. */
-export default function ViewRig({ frame, actionsRef }: Props) {
+export default function ViewRig({ frame, actionsRef, viewVersion }: Props) {
   const controls = useRef<OrbitControlsImpl>(null);
   const camera = useThree((s) => s.camera);
   const invalidate = useThree((s) => s.invalidate);
@@ -30,6 +32,7 @@ export default function ViewRig({ frame, actionsRef }: Props) {
     const apply = () => {
       camera.position.copy(c.target).add(offset);
       c.update();
+      if (viewVersion) viewVersion.current += 1;
       invalidate();
     };
     actionsRef.current = {
@@ -58,7 +61,7 @@ export default function ViewRig({ frame, actionsRef }: Props) {
     return () => {
       actionsRef.current = null;
     };
-  }, [camera, invalidate, frame, actionsRef]);
+  }, [camera, invalidate, frame, actionsRef, viewVersion]);
 
   return (
     <OrbitControls
