@@ -4,6 +4,7 @@ import { describe, expect, test } from 'vitest';
 import { dataSheetPdf } from '../../../src/lib/activities/data-sheet-pdf';
 import { guidePdf } from '../../../src/lib/activities/guide-pdf';
 import { HAZARD_CAUTIONS, SAFETY_GENERAL_NOTE } from '../../../src/lib/activities/safety';
+import { pdfTextSquash as squash } from '../../fixtures/pdf-text';
 import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
 import { activitiesParsed, activityFiles } from './activity-files';
 
@@ -23,12 +24,6 @@ async function pdfRead(bytes: Uint8Array) {
   }
   return pages;
 }
-
-/**
- * Text with all whitespace removed, so line breaks chosen by the layout do not matter, in Unicode NFKC
- * because pdf.js normalises what it extracts (the micro sign U+00B5 comes back as Greek mu U+03BC).
- */
-const squash = (s: string) => s.normalize('NFKC').replace(/\s+/g, '');
 
 // ISO 32000-1:2008 §8.3.2.3: 1 unit = 1/72 in, so Letter (ASME Y14.1, 8.5 × 11 in) is 612 × 792 pt and A4
 // (ISO 216, 210 × 297 mm) is 595.276 × 841.890 pt. jspdf rounds the MediaBox to 0.01 pt: tolerance 0.01 pt.
