@@ -4,11 +4,13 @@
  * next mail; the event fills and the next registrant lands on the waiting list; the coordinator sees both and
  * records attendance as a count per school.
  */
+import { readFile } from 'node:fs/promises';
 import type { Knex } from 'knex';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { accountCreate, emailUnique, linkIn, mailWait, userSessionCookie } from '../api/auth-helpers';
+import { pdfPageTexts } from '../fixtures/pdf-text';
 import { BASE_URL, browserLaunch, hydrated, pageNew } from './browser';
 
 let browser: Browser;
@@ -114,4 +116,24 @@ describe('events in the browser', () => {
     expect(recorded.map((r) => r.attendee_count)).toEqual([14]);
     expect(errors).toEqual([]);
   }, 90_000);
+
+  it("downloads the big build's plan for another venue, which says the span does not fit there", async () => {
+    const { page, errors } = await pageAsCoordinator();
+    const event = (await knex('events').where({ kind: 'big_build', state: 'published' }).first('id')) as { id: string };
+    // The plan's form is plain HTML: it works before (or without) the page's islands.
+    await page.goto(`/events/manage/${event.id}`);
+    const plan = page.getByRole('region', { name: 'Big-build plan' });
+    await plan.getByLabel('Venue').selectOption({ label: 'classroom (9 × 7 m)' });
+    await plan.getByLabel('Paper').selectOption('a4');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      plan.getByRole('button', { name: 'Download the plan (PDF)' }).click(),
+    ]);
+    // Read back with pdf.js, not the code that wrote it.
+    const text = (await pdfPageTexts(new Uint8Array(await readFile((await download.path())!)))).join('\n');
+    expect(text).toContain('classroom (9 × 7 m)');
+    expect(text).toContain('It does not fit at 1:');
+    expect(text).toContain('Stake-out table');
+    expect(errors).toEqual([]);
+  }, 60_000);
 });

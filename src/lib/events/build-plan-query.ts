@@ -15,10 +15,11 @@ const metres = (what: string) =>
 
 export const BuildPlanQuerySchema = z
   .object({
-    /** A venue preset instead of the event's venue. */
-    venue: z
-      .enum(VENUE_IDS, { errorMap: () => ({ message: `venue must be one of ${VENUE_IDS.join(', ')}` }) })
-      .optional(),
+    /** A venue preset instead of the event's venue; empty (a form's "the event's venue") is none. */
+    venue: z.preprocess(
+      (v) => (v === '' ? undefined : v),
+      z.enum(VENUE_IDS, { errorMap: () => ({ message: `venue must be one of ${VENUE_IDS.join(', ')}` }) }).optional(),
+    ),
     /** A typed venue size instead, m (both or neither). */
     lengthM: metres('lengthM').optional(),
     widthM: metres('widthM').optional(),
