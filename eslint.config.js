@@ -4,7 +4,7 @@ import tseslint from 'typescript-eslint';
 import astro from 'eslint-plugin-astro';
 import globals from 'globals';
 
-/** Pure domain folders import nothing framework- or server-specific (architecture.md, "Direction"). */
+/** Pure domain folders import nothing framework- or server-specific (DEVELOPERS.md, "Where things are"). */
 const PURE_RESTRICTIONS = {
   patterns: [
     {

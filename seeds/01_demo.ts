@@ -1,5 +1,5 @@
 /**
- * The invented demo scenario (product.md): the Northfield Space Science Lab's outreach office, five
+ * The invented demo scenario: the Northfield Space Science Lab's outreach office, five
  * fictional schools, teachers and classes (student counts only), kits of the demo models, journal entries in
  * every state, one big-build event and two live links. Runs only on an empty database (scripts/db.ts).
  */

@@ -1,7 +1,8 @@
 /**
- * Invented reach history for the demo (product.md's fictional schools): directory fields of the five schools,
- * two proposed schools (one a near-duplicate name), kits, published entries, past events with attendance per
- * school and teachers' sign-in days spread over the past year, so the reach dashboard has something to show.
+ * Invented reach history for the demo (the fictional schools of seeds/01_demo.ts): directory fields of the
+ * five schools, two proposed schools (one a near-duplicate name), kits, published entries, past events with
+ * attendance per school and teachers' sign-in days spread over the past year, so the reach dashboard has
+ * something to show.
  * Runs after the main demo seed, on its rows.
  */
 import type { Knex } from 'knex';

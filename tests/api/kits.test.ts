@@ -74,7 +74,7 @@ describe('POST /api/kits/preview', () => {
     const data = await body(res);
     expect(data.sheetCount).toBe(data.sheets.length);
     expect(data.sheets[0]).toContain('<svg');
-    // product.md's worked example: 2.4 m / 20 = 12 cm across; 35 m / 20 = 1.75 m per wire boom.
+    // The Skein probe (content/models/skein-probe.json): 2.4 m / 20 = 12 cm across; 35 m / 20 = 1.75 m per wire boom.
     expect(data.summary.text).toContain('body 12 cm across the flats');
     expect(data.summary.text).toContain('each wire boom 1.75 m long');
     expect(data.summary.spanFitsVenue).toBe(true);

@@ -45,7 +45,7 @@ describe('home page', () => {
     await page.waitForFunction(() =>
       document.querySelector('[data-testid="scale-teaser-result"]')?.textContent?.includes('1:5 '),
     );
-    // 2.4 m / 5 = 480 mm = 18.9 in across (product.md's probe).
+    // 2.4 m / 5 = 480 mm = 18.9 in across (the Skein probe, content/models/skein-probe.json).
     expect(await result.textContent()).toContain('18.9 in');
     const kit = page.getByTestId('scale-teaser-kit');
     expect(await kit.getByRole('link', { name: 'ask the scale solver' }).getAttribute('href')).toBe(

@@ -63,7 +63,7 @@ describe('kit builder', () => {
     await page.waitForFunction(
       () => document.querySelector('[data-testid="build-status"]')?.getAttribute('data-building') === 'false',
     );
-    // 2.4 m across the flats at 1:20 is 12 cm (product.md's worked example).
+    // 2.4 m across the flats at 1:20 is 12 cm (the Skein probe, content/models/skein-probe.json).
     expect(await page.getByTestId('kit-summary').textContent()).toContain('Body 12 cm across the flats');
     expect(await sheetsText(page)).not.toBe(before);
 

@@ -49,7 +49,7 @@ describe('iso14644Limit', () => {
 
 describe('iso14644SamplingLocations', () => {
   it('looks up ISO 14644-1:2015 Table A.1 by area', () => {
-    // Table A.1 rows (from memory, see iso-14644.ts): ≤2 → 1, ≤10 → 5, ≤24 → 6, ≤52 → 10 (checks.md), ≤1000 → 27.
+    // Table A.1 rows (from memory, see iso-14644.ts): ≤2 → 1, ≤10 → 5, ≤24 → 6, ≤52 → 10, ≤1000 → 27.
     expect(iso14644SamplingLocations(1)).toBe(1);
     expect(iso14644SamplingLocations(2)).toBe(1);
     expect(iso14644SamplingLocations(2.1)).toBe(2);

@@ -49,8 +49,9 @@ describe('stakeOutPlan', () => {
   const plan = stakeOutPlan(skein, venue, 1);
   const tip = (label: string) => plan.points.find((p) => p.label === label)!;
 
-  // The Skein probe (product.md): hexagon 2.4 m across the flats, so the apothem is 1.2 m; radial booms of 35 m
-  // leave the middle of a side along its normal, so their tips lie 1.2 + 35 = 36.2 m from the centre.
+  // The Skein probe (content/models/skein-probe.json): hexagon 2.4 m across the flats, so the apothem is 1.2 m;
+  // radial booms of 35 m leave the middle of a side along its normal, so their tips lie 1.2 + 35 = 36.2 m from
+  // the centre.
   test('puts each radial boom tip at the half-width plus the boom length from the centre stake (within 1 mm)', () => {
     expect(Math.abs(tip('Wire boom +X').distanceM - 36.2)).toBeLessThan(0.001);
     expect(Math.abs(tip('Wire boom −X').distanceM - 36.2)).toBeLessThan(0.001);

@@ -32,7 +32,8 @@ describe('bodyNet (through modelPatterns)', () => {
     for (const n of [3, 6, 8]) {
       // Small enough (50 mm across corners at 1:20) for the one-piece net to fit office paper.
       const piece = bodyOf(prism(n, 1, 0.25), 20);
-      // Euler / net theory (checks.md): a one-piece net of F faces has F − 1 folds.
+      // A one-piece net joins its F faces in a tree, and a tree on F vertices has F − 1 edges (from memory:
+      // Diestel, Graph Theory, §1.5): F − 1 folds.
       expect(piece.hinge.faces.length).toBe(n + 2);
       expect(piece.hinge.joints.length).toBe(n + 1);
       expect(piece.folds.filter((f) => f.tabNumber === undefined).length).toBe(n + 1);

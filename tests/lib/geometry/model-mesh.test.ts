@@ -55,7 +55,7 @@ describe('modelMesh', () => {
       }
       // Closed and consistently oriented: every directed edge has its reverse.
       for (const e of directed) expect(directed.has(e.split('>').reverse().join('>'))).toBe(true);
-      // Euler's formula for a convex polyhedron (checks.md).
+      // Euler's polyhedron formula, V − E + F = 2 for a convex polyhedron (a classical theorem).
       expect(verts.size - directed.size / 2 + tris.length).toBe(2);
       // Counter-clockwise seen from outside: positive volume.
       expect(volume(mesh.positions, mesh.indices, tris)).toBeGreaterThan(0);

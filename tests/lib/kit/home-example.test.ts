@@ -1,8 +1,8 @@
 /**
  * The home page's worked example against the engine: the text is the scale solver's own answer, and the
  * sheet count it states is the number of sheets the kit pipeline really lays out and draws for the same inputs
- * (one SVG document per sheet). The example's model is product.md's scenario probe: a hexagonal body 2.4 m
- * across the flats, which the home page's body sizes are computed from.
+ * (one SVG document per sheet). The example's model is the demo Skein probe (content/models/skein-probe.json):
+ * a hexagonal body 2.4 m across the flats, which the home page's body sizes are computed from.
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';

@@ -8,7 +8,7 @@ const demo = (id: string) =>
   ModelContentSchema.parse(JSON.parse(readFileSync(`content/models/${id}.json`, 'utf8'))).model;
 
 describe('kitSummary', () => {
-  it('reads the Skein at 1:20 on Letter as product.md’s worked example does', () => {
+  it('reads the Skein probe at 1:20 on Letter: its body and booms divided by 20', () => {
     const s = kitSummary({
       model: demo('skein-probe'),
       scaleDenominator: 20,
@@ -16,7 +16,8 @@ describe('kitSummary', () => {
       venue: VENUES.classroom,
       units: 'metric',
     });
-    // product.md: "body 12 cm across on Letter at 1:20; each wire boom 1.75 m of thread" — 2400 mm / 20 and 35 m / 20.
+    // content/models/skein-probe.json: 2.4 m across the flats, 0.9 m tall, 35 m wire booms — 2400 mm / 20,
+    // 900 mm / 20 and 35 m / 20.
     expect(s.clauses[0]).toBe('body 12 cm across the flats, 4.5 cm tall on US Letter at 1:20');
     expect(s.clauses[1]).toMatch(/^each wire boom 1\.75 m long \(cut 1\.85 m of thread\)$/);
     expect(s.text).toContain('fits the classroom (9 × 7 m)');
@@ -90,7 +91,8 @@ describe('kitSummary', () => {
 
 describe('kitSummaryBody', () => {
   it('gives a 3U small satellite at 1:2 as 5 cm × 5 cm × 17 cm', () => {
-    // 3U taken as 10 × 10 × 34 cm (product.md); halved.
+    // from memory: the CubeSat design specification's 3U is 100 × 100 × 340.5 mm, which body-shape.ts rounds to
+    // 10 × 10 × 34 cm; halved.
     const model = ModelSchema.parse({ schemaVersion: 1, name: 'Wren', body: { kind: 'box', smallsat: '3U' } });
     expect(kitSummaryBody(model, 2, 'metric')).toBe('5 cm × 5 cm × 17 cm');
   });
