@@ -8,8 +8,20 @@
  * base centre.
  */
 
+declare const planeSpace: unique symbol;
+
+/** The two planes 2D points live in: a piece's flat plane (y up) and a sheet or page (y down). */
+export type PlaneSpace = 'flat' | 'sheet';
+
+/**
+ * A 2D point in millimetres in the plane `S`. The tag exists for the compiler only (at run time the point is a
+ * plain [x, y] tuple, and an untagged tuple is accepted as either), so a point of one plane is refused where a
+ * point of the other is expected. Layout's `placementApply` holds the rule that carries a flat point onto a sheet.
+ */
+export type PlanePointMm<S extends PlaneSpace> = readonly [number, number] & { readonly [planeSpace]?: S };
+
 /** A point in a piece's flat plane, millimetres at kit scale, y up. */
-export type Vec2Mm = readonly [number, number];
+export type Vec2Mm = PlanePointMm<'flat'>;
 
 /** A point in model space, millimetres at kit scale, z up along the body axis. */
 export type Vec3Mm = readonly [number, number, number];

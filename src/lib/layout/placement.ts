@@ -3,12 +3,12 @@
  * src/lib/layout/types.ts, and the bounding boxes that follow from it.
  */
 import type { Piece, Vec2Mm } from '../geometry/types';
-import type { Placement, RectMm } from './types';
+import type { Placement, RectMm, SheetVec2Mm } from './types';
 
 type PlacementPose = Pick<Placement, 'xMm' | 'yMm' | 'rotationRad' | 'mirrored'>;
 
 /** A flat point (mm, y up) placed on the sheet (mm from the top-left corner, y down). */
-export function placementApply(placement: PlacementPose, p: Vec2Mm): Vec2Mm {
+export function placementApply(placement: PlacementPose, p: Vec2Mm): SheetVec2Mm {
   const qx = placement.mirrored ? -p[0] : p[0];
   const qy = -p[1];
   const c = Math.cos(placement.rotationRad);
@@ -27,7 +27,7 @@ export function placementApplyAngle(placement: PlacementPose, angleRad: number):
 }
 
 /** The axis-aligned box around some points, mm; an empty list gives a zero box at the origin. */
-export function placementBoundsOfPoints(points: readonly Vec2Mm[]): RectMm {
+export function placementBoundsOfPoints(points: readonly SheetVec2Mm[]): RectMm {
   if (points.length === 0) return { xMm: 0, yMm: 0, widthMm: 0, heightMm: 0 };
   let minX = Infinity;
   let minY = Infinity;
@@ -43,7 +43,7 @@ export function placementBoundsOfPoints(points: readonly Vec2Mm[]): RectMm {
 }
 
 /** A piece's cut outline placed on the sheet, mm, y down. */
-export function placementOutline(placement: PlacementPose, piece: Pick<Piece, 'outlineMm'>): Vec2Mm[] {
+export function placementOutline(placement: PlacementPose, piece: Pick<Piece, 'outlineMm'>): SheetVec2Mm[] {
   return piece.outlineMm.map((p) => placementApply(placement, p));
 }
 

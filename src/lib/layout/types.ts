@@ -7,10 +7,13 @@
  * page for positive angles (the y-down convention of SVG's rotate()). See `placementApply` in
  * src/lib/layout/placement.ts, the single implementation of this rule.
  */
-import type { Piece, Vec2Mm, WireBoomThread } from '../geometry/types';
+import type { Piece, PlanePointMm, WireBoomThread } from '../geometry/types';
 import type { BuildGradeBand } from '../geometry/buildability';
 import type { PartSubstitute } from '../geometry/part-substitutes';
 import type { PlacedCutGauge } from './cut-gauge';
+
+/** A point on a sheet or page: millimetres from its top-left corner, y down. */
+export type SheetVec2Mm = PlanePointMm<'sheet'>;
 
 /** Paper sizes and sheet stock by name, with their size in mm (portrait: width ≤ height). */
 export interface SheetSize {
@@ -46,7 +49,7 @@ export interface Placement {
 
 /** A short cross printed where two tiles of one piece must line up, with the letter both tiles show. */
 export interface AlignmentMark {
-  atMm: Vec2Mm;
+  atMm: SheetVec2Mm;
   letter: string;
 }
 

@@ -4,8 +4,7 @@
  * rod starts (part 1) and where it is cut (the last part).
  */
 import { CUT_GAUGE_HEIGHT_MM, CUT_GAUGE_TEXT_MM, cutGaugeCaption } from '../layout/cut-gauge';
-import type { LaidOutSheet } from '../layout/types';
-import type { Vec2Mm } from '../geometry/types';
+import type { LaidOutSheet, SheetVec2Mm } from '../layout/types';
 import { TEXT_COLOR } from './line-styles';
 import type { SceneStroke, SceneText } from './scene-types';
 
@@ -17,7 +16,7 @@ const END_TICK_MM = 4;
 export function gaugeScene(sheet: LaidOutSheet): { texts: SceneText[]; strokes: SceneStroke[] } {
   const texts: SceneText[] = [];
   const strokes: SceneStroke[] = [];
-  const line = (points: Vec2Mm[], widthMm: number) =>
+  const line = (points: SheetVec2Mm[], widthMm: number) =>
     strokes.push({ points, widthMm, color: TEXT_COLOR, dashMm: [], group: 'labels' });
   for (const g of sheet.gauges ?? []) {
     const [x, top] = [g.xMm, g.yMm];

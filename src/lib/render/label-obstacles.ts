@@ -3,7 +3,7 @@
  * as segments and furniture (QR code, check square, legend) as convex polygons, in sheet mm (y down),
  * bucketed in a uniform grid so a label's box is tested only against what lies near it.
  */
-import type { Vec2Mm } from '../geometry/types';
+import type { SheetVec2Mm } from '../layout/types';
 import { labelBoxesOverlap } from './label-placement';
 
 /** Side of a grid cell, mm: about a label's length, so a query touches a few cells. */
@@ -13,7 +13,7 @@ const CELL_MM = 8;
 export const LABEL_LINE_CLEARANCE_MM = 0.35;
 
 interface Obstacle {
-  points: readonly Vec2Mm[];
+  points: readonly SheetVec2Mm[];
   minX: number;
   minY: number;
   maxX: number;
@@ -29,13 +29,13 @@ export class LabelObstacles {
   constructor(private readonly padMm: number) {}
 
   /** Adds every segment of a polyline (closed: the last point joins the first). */
-  addPolyline(points: readonly Vec2Mm[], closed = false) {
+  addPolyline(points: readonly SheetVec2Mm[], closed = false) {
     for (let i = 0; i + 1 < points.length; i++) this.add([points[i]!, points[i + 1]!]);
     if (closed && points.length > 2) this.add([points[points.length - 1]!, points[0]!]);
   }
 
   /** Adds a convex polygon (or a single segment) as one obstacle. */
-  add(points: readonly Vec2Mm[]) {
+  add(points: readonly SheetVec2Mm[]) {
     const o: Obstacle = { points, minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity, seen: 0 };
     for (const [x, y] of points) {
       o.minX = Math.min(o.minX, x);
@@ -51,7 +51,7 @@ export class LabelObstacles {
   }
 
   /** Whether a convex box (corners) comes within the clearance of any obstacle. */
-  hits(box: readonly Vec2Mm[]): boolean {
+  hits(box: readonly SheetVec2Mm[]): boolean {
     const pad = this.padMm;
     let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
     for (const [x, y] of box) [x0, y0, x1, y1] = [Math.min(x0, x), Math.min(y0, y), Math.max(x1, x), Math.max(y1, y)];
@@ -80,9 +80,9 @@ export class LabelObstacles {
 }
 
 /** A box (corners p0…p3, p0→p1 along the baseline) grown by padMm on every side. */
-export function labelBoxGrown(box: readonly Vec2Mm[], padMm: number): Vec2Mm[] {
-  const [p0, p1, p2, p3] = box as [Vec2Mm, Vec2Mm, Vec2Mm, Vec2Mm];
-  const unit = (a: Vec2Mm, b: Vec2Mm): Vec2Mm => {
+export function labelBoxGrown(box: readonly SheetVec2Mm[], padMm: number): SheetVec2Mm[] {
+  const [p0, p1, p2, p3] = box as [SheetVec2Mm, SheetVec2Mm, SheetVec2Mm, SheetVec2Mm];
+  const unit = (a: SheetVec2Mm, b: SheetVec2Mm): SheetVec2Mm => {
     const l = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
     return [((b[0] - a[0]) / l) * padMm, ((b[1] - a[1]) / l) * padMm];
   };
@@ -97,15 +97,15 @@ export function labelBoxGrown(box: readonly Vec2Mm[], padMm: number): Vec2Mm[] {
 }
 
 /** The point of a convex box's boundary nearest to p (p itself when inside is not expected: p is outside). */
-export function labelBoxNearestPoint(box: readonly Vec2Mm[], p: Vec2Mm): Vec2Mm {
-  let best: Vec2Mm = box[0]!;
+export function labelBoxNearestPoint(box: readonly SheetVec2Mm[], p: SheetVec2Mm): SheetVec2Mm {
+  let best: SheetVec2Mm = box[0]!;
   let bestD = Infinity;
   for (let i = 0; i < box.length; i++) {
     const a = box[i]!;
     const b = box[(i + 1) % box.length]!;
     const [dx, dy] = [b[0] - a[0], b[1] - a[1]];
     const t = Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / (dx * dx + dy * dy || 1)));
-    const q: Vec2Mm = [a[0] + t * dx, a[1] + t * dy];
+    const q: SheetVec2Mm = [a[0] + t * dx, a[1] + t * dy];
     const d = Math.hypot(p[0] - q[0], p[1] - q[1]);
     if (d < bestD) [best, bestD] = [q, d];
   }

@@ -4,7 +4,8 @@
  * "OBBTree", SIGGRAPH 1996, §4 for the 2-D case of rectangles), and the points of a face farthest from its
  * edges (its pole of inaccessibility, found by a coarse grid refined twice, after Agafonkin's polylabel, 2016).
  */
-import type { Vec2Mm } from '../geometry/types';
+import type { PlanePointMm, PlaneSpace } from '../geometry/types';
+import type { SheetVec2Mm } from '../layout/types';
 
 /** Width of a text in mm at a size (em height) mm, bold or not. */
 export type LabelMeasure = (text: string, sizeMm: number, bold: boolean) => number;
@@ -17,12 +18,12 @@ export const LABEL_BOX_HEIGHT_EM = 1.1;
  * middle), the baseline turned clockwise by angleRad on the sheet.
  */
 export function labelBox(
-  atMm: Vec2Mm,
+  atMm: SheetVec2Mm,
   angleRad: number,
   widthMm: number,
   heightMm: number,
   anchor: 'start' | 'middle',
-): Vec2Mm[] {
+): SheetVec2Mm[] {
   const c = Math.cos(angleRad);
   const s = Math.sin(angleRad);
   const [x0, x1] = anchor === 'middle' ? [-widthMm / 2, widthMm / 2] : [0, widthMm];
@@ -39,9 +40,13 @@ export function labelBox(
 
 /**
  * Whether two convex polygons (corner lists) overlap by more than `slackMm` along every axis (separating
- * axis theorem; the x and y axes are tried first, as a cheap bounding-box rejection).
+ * axis theorem; the x and y axes are tried first, as a cheap bounding-box rejection). Both in one plane.
  */
-export function labelBoxesOverlap(a: readonly Vec2Mm[], b: readonly Vec2Mm[], slackMm = 0): boolean {
+export function labelBoxesOverlap<S extends PlaneSpace>(
+  a: readonly PlanePointMm<S>[],
+  b: readonly PlanePointMm<NoInfer<S>>[],
+  slackMm = 0,
+): boolean {
   if (separatedAlong(a, b, 1, 0, slackMm) || separatedAlong(a, b, 0, 1, slackMm)) return false;
   for (const poly of [a, b]) {
     for (let i = 0; i < poly.length; i++) {
@@ -56,7 +61,13 @@ export function labelBoxesOverlap(a: readonly Vec2Mm[], b: readonly Vec2Mm[], sl
 }
 
 /** True when the projections of a and b on the axis (nx, ny) overlap by no more than slackMm. */
-function separatedAlong(a: readonly Vec2Mm[], b: readonly Vec2Mm[], nx: number, ny: number, slackMm: number): boolean {
+function separatedAlong(
+  a: readonly (readonly [number, number])[],
+  b: readonly (readonly [number, number])[],
+  nx: number,
+  ny: number,
+  slackMm: number,
+): boolean {
   let [aMin, aMax, bMin, bMax] = [Infinity, -Infinity, Infinity, -Infinity];
   for (const v of a) {
     const d = v[0] * nx + v[1] * ny;
@@ -71,8 +82,11 @@ function separatedAlong(a: readonly Vec2Mm[], b: readonly Vec2Mm[], nx: number, 
   return aMax <= bMin + slackMm || bMax <= aMin + slackMm;
 }
 
-/** Whether point p lies inside a simple polygon (even-odd rule). */
-export function labelPointInside(p: Vec2Mm, poly: readonly Vec2Mm[]): boolean {
+/** Whether point p lies inside a simple polygon of the same plane (even-odd rule). */
+export function labelPointInside<S extends PlaneSpace>(
+  p: PlanePointMm<S>,
+  poly: readonly PlanePointMm<NoInfer<S>>[],
+): boolean {
   let inside = false;
   for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
     const a = poly[i]!;
@@ -82,8 +96,11 @@ export function labelPointInside(p: Vec2Mm, poly: readonly Vec2Mm[]): boolean {
   return inside;
 }
 
-/** Distance from p to the nearest edge of a polygon, mm. */
-export function labelEdgeClearanceMm(p: Vec2Mm, poly: readonly Vec2Mm[]): number {
+/** Distance from p to the nearest edge of a polygon of the same plane, mm. */
+export function labelEdgeClearanceMm<S extends PlaneSpace>(
+  p: PlanePointMm<S>,
+  poly: readonly PlanePointMm<NoInfer<S>>[],
+): number {
   let best = Infinity;
   for (let i = 0; i < poly.length; i++) {
     const a = poly[i]!;
@@ -100,16 +117,19 @@ export function labelEdgeClearanceMm(p: Vec2Mm, poly: readonly Vec2Mm[]): number
  * Points inside a polygon, best first: the pole of inaccessibility, then the other grid points by their
  * clearance from the edges (at most `count`); an empty or degenerate polygon gives [].
  */
-export function labelCandidatePoints(poly: readonly Vec2Mm[], count = 24): Vec2Mm[] {
+export function labelCandidatePoints<S extends PlaneSpace>(
+  poly: readonly PlanePointMm<S>[],
+  count = 24,
+): PlanePointMm<S>[] {
   if (poly.length < 3) return [];
   let [minX, minY, maxX, maxY] = [Infinity, Infinity, -Infinity, -Infinity];
   for (const [x, y] of poly)
     [minX, minY, maxX, maxY] = [Math.min(minX, x), Math.min(minY, y), Math.max(maxX, x), Math.max(maxY, y)];
-  const scored: { p: Vec2Mm; d: number }[] = [];
+  const scored: { p: PlanePointMm<S>; d: number }[] = [];
   const grid = (x0: number, y0: number, w: number, h: number, steps: number) => {
     for (let i = 0; i <= steps; i++) {
       for (let j = 0; j <= steps; j++) {
-        const p: Vec2Mm = [x0 + (w * i) / steps, y0 + (h * j) / steps];
+        const p: PlanePointMm<S> = [x0 + (w * i) / steps, y0 + (h * j) / steps];
         if (labelPointInside(p, poly)) scored.push({ p, d: labelEdgeClearanceMm(p, poly) });
       }
     }

@@ -5,9 +5,8 @@
  * fonts.server.ts).
  */
 import { jsPDF } from 'jspdf';
-import type { Vec2Mm } from '../geometry/types';
 import { placementApply } from '../layout/placement';
-import type { KitLayout, LaidOutSheet } from '../layout/types';
+import type { KitLayout, LaidOutSheet, SheetVec2Mm } from '../layout/types';
 import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { pieceLines } from './piece-lines';
 import { pdfFontsAdd, pdfFontUse } from './pdf-fonts';
@@ -130,7 +129,7 @@ function pdfInstructionsPage(doc: jsPDF, page: InstructionsPage) {
 
 function pdfPolylines(
   doc: jsPDF,
-  polylines: readonly (readonly Vec2Mm[])[],
+  polylines: readonly (readonly SheetVec2Mm[])[],
   style: { widthMm: number; color: string; dashMm: readonly number[] },
 ) {
   if (polylines.length === 0) return;
@@ -145,7 +144,7 @@ function pdfPolylines(
   doc.stroke();
 }
 
-function pdfPolygonFill(doc: jsPDF, polygon: readonly Vec2Mm[]) {
+function pdfPolygonFill(doc: jsPDF, polygon: readonly SheetVec2Mm[]) {
   if (polygon.length < 3) return;
   doc.moveTo(polygon[0]![0], polygon[0]![1]);
   for (let i = 1; i < polygon.length; i++) doc.lineTo(polygon[i]![0], polygon[i]![1]);

@@ -6,19 +6,19 @@
  * placementApply), so both draw the same lines.
  */
 import type { Piece, Vec2Mm } from '../geometry/types';
-import type { Placement } from '../layout/types';
+import type { Placement, SheetVec2Mm } from '../layout/types';
 import { segmentClipOutline, segmentClipPolyline } from './segment-clip';
 
 /** Maps flat points (mm, y up) of one piece to sheet points (mm, y down), order kept. */
-export type PiecePointTransform = (polylines: readonly (readonly Vec2Mm[])[]) => Vec2Mm[][];
+export type PiecePointTransform = (polylines: readonly (readonly Vec2Mm[])[]) => SheetVec2Mm[][];
 
 export interface PieceLines {
   /** Closed outlines, each repeating its first point: the piece's, or each part of it inside its tile. */
-  cut: Vec2Mm[][];
-  mountain: Vec2Mm[][];
-  valley: Vec2Mm[][];
+  cut: SheetVec2Mm[][];
+  mountain: SheetVec2Mm[][];
+  valley: SheetVec2Mm[][];
   /** Closed polygons to tint (tabs); unclipped, the renderer clips fills to the window. */
-  tabs: Vec2Mm[][];
+  tabs: SheetVec2Mm[][];
 }
 
 /** The lines of one placed piece; a piece without folds or tabs gives empty lists for those. */

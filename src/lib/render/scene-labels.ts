@@ -2,7 +2,7 @@
  * The label texts of a sheet and their boxes: each new label is kept clear of the drawing, of the labels before
  * it and of callout leaders; a mark with no room on its piece is printed beside it with a leader line.
  */
-import type { Vec2Mm } from '../geometry/types';
+import type { SheetVec2Mm } from '../layout/types';
 import { LABEL_BOX_HEIGHT_EM, type LabelMeasure, labelBox } from './label-placement';
 import { LABEL_LINE_CLEARANCE_MM, LabelObstacles, labelBoxNearestPoint } from './label-obstacles';
 import { GLUE_MARK_UNDERLINE_EM, glueMarkUnderlined } from './glue-marks';
@@ -10,7 +10,7 @@ import { TEXT_COLOR } from './line-styles';
 import type { SceneText, SheetScene } from './scene-types';
 
 /** The box a text covers on the sheet, measured with `measure`. */
-export function sceneTextBox(t: SceneText, measure: LabelMeasure): Vec2Mm[] {
+export function sceneTextBox(t: SceneText, measure: LabelMeasure): SheetVec2Mm[] {
   return labelBox(t.atMm, t.angleRad, measure(t.text, t.sizeMm, t.bold), t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor);
 }
 
@@ -26,7 +26,7 @@ export class SceneLabels {
     readonly obstacles: LabelObstacles,
   ) {}
 
-  box(t: SceneText): Vec2Mm[] {
+  box(t: SceneText): SheetVec2Mm[] {
     const key = `${t.bold ? 'b' : 'r'}${t.sizeMm}|${t.text}`;
     let width = this.widths.get(key);
     if (width === undefined) this.widths.set(key, (width = this.measure(t.text, t.sizeMm, t.bold)));
@@ -42,7 +42,7 @@ export class SceneLabels {
    * Adds the first of the candidate texts whose box is clear of every label and drawn element and passes
    * `fits`; false when none is.
    */
-  tryPlace(candidates: Iterable<SceneText>, fits: (box: Vec2Mm[]) => boolean = () => true): boolean {
+  tryPlace(candidates: Iterable<SceneText>, fits: (box: SheetVec2Mm[]) => boolean = () => true): boolean {
     for (const t of candidates) {
       const box = this.box(t);
       if (fits(box) && !this.placed.hits(box) && !this.obstacles.hits(box) && !this.leaders.hits(box)) {
@@ -58,18 +58,18 @@ export class SceneLabels {
    * paper near the first target, with a thin leader line from the mark to one of `targets` that no label
    * covers; false when nothing within CALLOUT_RADII_MM is clear.
    */
-  tryCallout(t: SceneText, targets: readonly Vec2Mm[], fits: (box: Vec2Mm[]) => boolean): boolean {
+  tryCallout(t: SceneText, targets: readonly SheetVec2Mm[], fits: (box: SheetVec2Mm[]) => boolean): boolean {
     const home = targets[0]!;
     const free = targets.filter((p) => !this.placed.hits([p, p]));
     for (const r of CALLOUT_RADII_MM)
       for (let k = 0; k < CALLOUT_DIRECTIONS; k++) {
         const a = (2 * Math.PI * k) / CALLOUT_DIRECTIONS;
-        const candidate = { ...t, atMm: [home[0] + r * Math.cos(a), home[1] + r * Math.sin(a)] as Vec2Mm };
+        const candidate = { ...t, atMm: [home[0] + r * Math.cos(a), home[1] + r * Math.sin(a)] as SheetVec2Mm };
         const box = this.box(candidate);
         if (!fits(box) || this.placed.hits(box) || this.obstacles.hits(box) || this.leaders.hits(box)) continue;
         // The leader runs from the box's nearest side to a point of the mark's place and crosses no label.
         for (const target of free) {
-          const leader: Vec2Mm[] = [labelBoxNearestPoint(box, target), target];
+          const leader: SheetVec2Mm[] = [labelBoxNearestPoint(box, target), target];
           if (this.placed.hits(leader)) continue;
           this.push({ ...candidate, calloutMm: target }, box);
           this.scene.strokes.push({
@@ -86,7 +86,7 @@ export class SceneLabels {
     return false;
   }
 
-  private push(t: SceneText, box: Vec2Mm[]) {
+  private push(t: SceneText, box: SheetVec2Mm[]) {
     this.scene.texts.push(t);
     this.placed.add(box);
     if (t.mark && glueMarkUnderlined(t.text)) {
@@ -95,7 +95,7 @@ export class SceneLabels {
       const width = this.measure(t.text, t.sizeMm, t.bold);
       const [x0, x1] = t.anchor === 'middle' ? [-width / 2, width / 2] : [0, width];
       const down = GLUE_MARK_UNDERLINE_EM.offset * t.sizeMm;
-      const at = (x: number): Vec2Mm => [t.atMm[0] + c * x - s * down, t.atMm[1] + s * x + c * down];
+      const at = (x: number): SheetVec2Mm => [t.atMm[0] + c * x - s * down, t.atMm[1] + s * x + c * down];
       this.scene.strokes.push({
         points: [at(x0), at(x1)],
         widthMm: GLUE_MARK_UNDERLINE_EM.width * t.sizeMm,

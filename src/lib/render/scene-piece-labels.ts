@@ -9,7 +9,7 @@ import { labelBoxGrown } from './label-obstacles';
 import { assemblySteps } from '../preview/assembly-steps';
 import { polygonArea } from '../geometry/vec';
 import { outlineOf } from '../geometry/piece-builder';
-import type { Placement, RectMm } from '../layout/types';
+import type { Placement, RectMm, SheetVec2Mm } from '../layout/types';
 import { type SceneMark, type SceneText, sceneRectContains as inside, sceneText as text } from './scene-types';
 import { SceneLabels } from './scene-labels';
 
@@ -35,11 +35,11 @@ const LEADER_END_INSET_MM = 0.05;
 /** A mark its piece had no room for, to print beside the piece once every piece's own marks are placed. */
 export interface SceneCallout {
   /** Points on the piece the leader may end at, best first (the mark's home first). */
-  targets: Vec2Mm[];
+  targets: SheetVec2Mm[];
   callout: SceneText;
   /** Printed at its home whatever it covers when no clear spot is found (so no joint loses a mark). */
   fallback: SceneText;
-  fits: (box: Vec2Mm[]) => boolean;
+  fits: (box: SheetVec2Mm[]) => boolean;
 }
 
 /**
@@ -60,7 +60,7 @@ export function scenePieceMarks(
   const visible = sceneNameWindow(placement);
   const faces = piece.hinge.faces.map((f) => f.polygonMm);
   const tabPolys = piece.tabs.map((t) => t.polygonMm);
-  const inWindow = (b: Vec2Mm[]) => b.every((p) => inside(p, window));
+  const inWindow = (b: SheetVec2Mm[]) => b.every((p) => inside(p, window));
   const place = (
     mark: SceneMark,
     home: Vec2Mm,
@@ -86,18 +86,19 @@ export function scenePieceMarks(
     // A tab without a fold line (a rolled part's overlap strip) has no drawn edge on its face's side: its
     // mark's whole box must lie within it.
     const placedZone = zone?.map((p) => placementApply(placement, p));
-    const fitsZone = (b: Vec2Mm[]) => inWindow(b) && (!placedZone || b.every((p) => labelPointInside(p, placedZone)));
+    const fitsZone = (b: SheetVec2Mm[]) =>
+      inWindow(b) && (!placedZone || b.every((p) => labelPointInside(p, placedZone)));
     if (labels.tryPlace(candidates(), fitsZone)) return;
     const at = placementApply(placement, home);
     const smallest = sizesMm[sizesMm.length - 1]!;
-    const targets: Vec2Mm[] = [];
+    const targets: SheetVec2Mm[] = [];
     // A leader may end a little either side of the home (a part's mark on a face can sit on its edge), at a
     // point inside its place by LEADER_END_INSET_MM each way: an edge mark's home lies on the edge itself,
     // where rounding can put the leader's end a hair outside the face.
     const e = LEADER_END_INSET_MM;
     const clearlyWithin = (p: Vec2Mm) =>
       [p, [p[0] + e, p[1]], [p[0] - e, p[1]], [p[0], p[1] + e], [p[0], p[1] - e]].every((q) => within(q as Vec2Mm));
-    const near: Vec2Mm[] = [];
+    const near: SheetVec2Mm[] = [];
     for (const a of [...across, ...across.map((x) => -x)])
       for (const d of MARK_SHIFTS_MM) {
         const flat: Vec2Mm = [home[0] + c * d + acrossDir[0] * a, home[1] + s * d + acrossDir[1] * a];
@@ -264,7 +265,7 @@ function sceneNameWindow(placement: Placement): RectMm | undefined {
 }
 
 /** A test that a text box lies inside a polygon (and the window): corners inside, no edge crossing it. */
-function sceneInside(region: readonly Vec2Mm[], window?: RectMm): (box: Vec2Mm[]) => boolean {
+function sceneInside(region: readonly SheetVec2Mm[], window?: RectMm): (box: SheetVec2Mm[]) => boolean {
   const edges = region.map((a, i) => {
     const b = region[(i + 1) % region.length]!;
     return {

@@ -1,7 +1,6 @@
 /** Tile guides of a tiled piece (window, overlap strips, caption) and the registration crosses with their letters. */
-import type { Vec2Mm } from '../geometry/types';
 import { TILE_CAPTION_MM } from '../layout/tiling';
-import type { Placement, RectMm } from '../layout/types';
+import type { Placement, RectMm, SheetVec2Mm } from '../layout/types';
 import { GLUE_TINT, GUIDE_STYLE, TEXT_COLOR } from './line-styles';
 import { type SceneText, type SheetScene, sceneText as text } from './scene-types';
 import { SceneLabels } from './scene-labels';
@@ -13,7 +12,7 @@ export const ALIGNMENT_STYLE = { widthMm: 0.25, color: TEXT_COLOR, dashMm: [], g
 const ALIGNMENT_ARM_MM = 3;
 
 /** The two strokes of a registration cross centred on a point. */
-export function sceneAlignmentCross([x, y]: Vec2Mm): Vec2Mm[][] {
+export function sceneAlignmentCross([x, y]: SheetVec2Mm): SheetVec2Mm[][] {
   const arm = ALIGNMENT_ARM_MM;
   return [
     [
@@ -28,16 +27,16 @@ export function sceneAlignmentCross([x, y]: Vec2Mm): Vec2Mm[][] {
 }
 
 /** A registration cross's letter in the first clear spot round the cross. */
-export function sceneAlignmentLetter(labels: SceneLabels, at: Vec2Mm, letter: string) {
+export function sceneAlignmentLetter(labels: SceneLabels, at: SheetVec2Mm, letter: string) {
   // Above right first, then the other quarters, then farther out.
-  const homes: [Vec2Mm, SceneText['anchor']][] = [0.6, 2.5, 5].flatMap((gap) => {
+  const homes: [SheetVec2Mm, SceneText['anchor']][] = [0.6, 2.5, 5].flatMap((gap) => {
     const d = ALIGNMENT_ARM_MM + gap;
     return [
       [[at[0] + d, at[1] - d], 'start'],
       [[at[0] + d, at[1] + d], 'start'],
       [[at[0] - d, at[1] - d], 'middle'],
       [[at[0] - d, at[1] + d], 'middle'],
-    ] as [Vec2Mm, SceneText['anchor']][];
+    ] as [SheetVec2Mm, SceneText['anchor']][];
   });
   const candidates = homes.map(([p, anchor]) => text(letter, p, NUMBER_SIZE_MM, 'labels', { bold: true, anchor }));
   if (!labels.tryPlace(candidates)) labels.reserve(candidates[0]!);

@@ -1,11 +1,10 @@
 /** The renderer-neutral primitives of a sheet scene (texts, strokes, fills in sheet mm, y down) and their helpers. */
-import type { Vec2Mm } from '../geometry/types';
-import type { RectMm } from '../layout/types';
+import type { RectMm, SheetVec2Mm } from '../layout/types';
 
 export interface SceneText {
   text: string;
   /** Centre of the text's left end (anchor start) or middle (anchor middle), mm. */
-  atMm: Vec2Mm;
+  atMm: SheetVec2Mm;
   /** Baseline direction, radians clockwise from +x on the sheet. */
   angleRad: number;
   sizeMm: number;
@@ -17,7 +16,7 @@ export interface SceneText {
   /** True on a piece's step badge. */
   badge?: boolean;
   /** Present on a mark printed beside its piece: the point on the piece its leader line ends at, mm. */
-  calloutMm?: Vec2Mm;
+  calloutMm?: SheetVec2Mm;
 }
 /** A glue mark's joint and side: the tab, or the edge the tab glues to. */
 export interface SceneMark {
@@ -26,7 +25,7 @@ export interface SceneMark {
   pieceId: string;
 }
 export interface SceneStroke {
-  points: Vec2Mm[];
+  points: SheetVec2Mm[];
   widthMm: number;
   color: string;
   dashMm: readonly number[];
@@ -45,7 +44,7 @@ export interface SheetScene {
 
 export function sceneText(
   value: string,
-  atMm: Vec2Mm,
+  atMm: SheetVec2Mm,
   sizeMm: number,
   group: SceneText['group'],
   extra: Partial<SceneText> = {},
@@ -53,6 +52,6 @@ export function sceneText(
   return { text: value, atMm, angleRad: 0, sizeMm, bold: false, anchor: 'middle', group, ...extra };
 }
 
-export function sceneRectContains(p: Vec2Mm, w?: RectMm): boolean {
+export function sceneRectContains(p: SheetVec2Mm, w?: RectMm): boolean {
   return !w || (p[0] >= w.xMm && p[0] <= w.xMm + w.widthMm && p[1] >= w.yMm && p[1] <= w.yMm + w.heightMm);
 }

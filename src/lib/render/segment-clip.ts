@@ -5,11 +5,10 @@
  * is closed (it runs along the window edge where the tile ends) and a cutting machine frees the tile.
  */
 import polygonClipping from 'polygon-clipping';
-import type { Vec2Mm } from '../geometry/types';
-import type { RectMm } from '../layout/types';
+import type { RectMm, SheetVec2Mm } from '../layout/types';
 
 /** The part of segment a→b inside the rectangle, or null when none of it is. */
-export function segmentClipToRect(a: Vec2Mm, b: Vec2Mm, rect: RectMm): [Vec2Mm, Vec2Mm] | null {
+export function segmentClipToRect(a: SheetVec2Mm, b: SheetVec2Mm, rect: RectMm): [SheetVec2Mm, SheetVec2Mm] | null {
   const dx = b[0] - a[0];
   const dy = b[1] - a[1];
   let t0 = 0;
@@ -40,10 +39,10 @@ export function segmentClipToRect(a: Vec2Mm, b: Vec2Mm, rect: RectMm): [Vec2Mm, 
  * A polyline (closed when `closed`) clipped to the rectangle, as the open polylines that stay inside;
  * a rectangle of undefined (no window) returns the polyline itself.
  */
-export function segmentClipPolyline(points: readonly Vec2Mm[], closed: boolean, rect?: RectMm): Vec2Mm[][] {
+export function segmentClipPolyline(points: readonly SheetVec2Mm[], closed: boolean, rect?: RectMm): SheetVec2Mm[][] {
   if (!rect) return [closed && points.length > 0 ? [...points, points[0]!] : [...points]];
-  const out: Vec2Mm[][] = [];
-  let current: Vec2Mm[] = [];
+  const out: SheetVec2Mm[][] = [];
+  let current: SheetVec2Mm[] = [];
   const count = closed ? points.length : points.length - 1;
   for (let i = 0; i < count; i++) {
     const clipped = segmentClipToRect(points[i]!, points[(i + 1) % points.length]!, rect);
@@ -64,7 +63,7 @@ export function segmentClipPolyline(points: readonly Vec2Mm[], closed: boolean, 
  * The closed outlines of a closed polygon's area inside the rectangle (several when the window cuts a
  * concave piece in parts), each repeating its first point at the end; no window returns the outline itself.
  */
-export function segmentClipOutline(points: readonly Vec2Mm[], rect?: RectMm): Vec2Mm[][] {
+export function segmentClipOutline(points: readonly SheetVec2Mm[], rect?: RectMm): SheetVec2Mm[][] {
   if (!rect) return segmentClipPolyline(points, true);
   if (points.length < 3) return [];
   const { xMm: x, yMm: y, widthMm: w, heightMm: h } = rect;
@@ -76,5 +75,5 @@ export function segmentClipOutline(points: readonly Vec2Mm[], rect?: RectMm): Ve
   ];
   const area = polygonClipping.intersection([points.map((p): [number, number] => [p[0], p[1]])], [window]);
   // Outer rings and holes alike are cut lines; polygon-clipping closes each ring by repeating its first point.
-  return area.flatMap((polygon) => polygon.map((ring) => ring.map((p): Vec2Mm => [p[0], p[1]])));
+  return area.flatMap((polygon) => polygon.map((ring) => ring.map((p): SheetVec2Mm => [p[0], p[1]])));
 }

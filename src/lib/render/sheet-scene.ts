@@ -3,7 +3,7 @@
  * labels, tab and edge numbers, alignment marks, tile guides, and the furniture (footer, check square,
  * legend, and the QR code or, for a kit with no page yet, a note in its place). The SVG and PDF renderers draw the same scene.
  */
-import type { Piece, Vec2Mm } from '../geometry/types';
+import type { Piece } from '../geometry/types';
 import { placementApply, placementBoundsOfPoints } from '../layout/placement';
 import { type LabelMeasure, labelPointInside } from './label-placement';
 import { LABEL_LINE_CLEARANCE_MM, LabelObstacles } from './label-obstacles';
@@ -11,7 +11,7 @@ import { glueMarkSizesMm } from './glue-marks';
 import { pieceLines } from './piece-lines';
 import { textWidthMm } from './text-width';
 import { sheetFurnitureLayout } from '../layout/sheet-furniture';
-import type { KitLayout, LaidOutSheet, RectMm } from '../layout/types';
+import type { KitLayout, LaidOutSheet, RectMm, SheetVec2Mm } from '../layout/types';
 import { gaugeScene } from './gauge-scene';
 import { type SheetScene, sceneRectContains as inside } from './scene-types';
 import { SceneLabels, sceneTextBox } from './scene-labels';
@@ -70,7 +70,7 @@ export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMe
  * A test that a box lies on blank paper: inside the printable area and outside every placed piece (a box
  * that crosses no line is wholly inside or wholly outside each outline, so its centre decides).
  */
-function sceneFreePaper(sheet: LaidOutSheet, byId: ReadonlyMap<string, Piece>): (box: Vec2Mm[]) => boolean {
+function sceneFreePaper(sheet: LaidOutSheet, byId: ReadonlyMap<string, Piece>): (box: SheetVec2Mm[]) => boolean {
   const outlines = sheet.placements.flatMap((placement) => {
     const piece = byId.get(placement.pieceId);
     if (!piece) return [];
@@ -79,7 +79,7 @@ function sceneFreePaper(sheet: LaidOutSheet, byId: ReadonlyMap<string, Piece>): 
   });
   return (box) => {
     if (!box.every((p) => inside(p, sheet.printableMm))) return false;
-    const c: Vec2Mm = [(box[0]![0] + box[2]![0]) / 2, (box[0]![1] + box[2]![1]) / 2];
+    const c: SheetVec2Mm = [(box[0]![0] + box[2]![0]) / 2, (box[0]![1] + box[2]![1]) / 2];
     return !outlines.some(({ outline, bounds: r }) => inside(c, r) && labelPointInside(c, outline));
   };
 }
@@ -113,7 +113,7 @@ function sceneObstacles(
   return obstacles;
 }
 
-function rectCorners(r: RectMm): Vec2Mm[] {
+function rectCorners(r: RectMm): SheetVec2Mm[] {
   return [
     [r.xMm, r.yMm],
     [r.xMm + r.widthMm, r.yMm],

@@ -7,14 +7,14 @@
  * Output in drawing mm, y down, fitted to a box.
  */
 import { hingeTreeFold } from '../geometry/hinge-tree';
-import type { Piece, Vec2Mm, Vec3Mm } from '../geometry/types';
+import type { Piece, Vec3Mm } from '../geometry/types';
 import { assemblyStepPieceState, type AssemblyStep } from '../preview/assembly-steps';
 import { pieceTabsFold } from '../preview/tab-fold';
-import type { RectMm } from '../layout/types';
+import type { RectMm, SheetVec2Mm } from '../layout/types';
 
 /** One filled and outlined polygon of a drawing, or an open polyline when fill is null. */
 export interface StepDrawingShape {
-  points: Vec2Mm[];
+  points: SheetVec2Mm[];
   closed: boolean;
   fill: string | null;
   stroke: string;
@@ -29,7 +29,7 @@ export interface StepDrawing {
 
 const COS30 = Math.sqrt(3) / 2;
 /** Isometric projection to drawing mm (y down) and the depth toward the viewer at (+x, +y, +z). */
-const project = ([x, y, z]: Vec3Mm): Vec2Mm => [(x - y) * COS30, (x + y) / 2 - z];
+const project = ([x, y, z]: Vec3Mm): SheetVec2Mm => [(x - y) * COS30, (x + y) / 2 - z];
 const depth = ([x, y, z]: Vec3Mm): number => x + y + z;
 
 export const STEP_DRAWING_COLOURS = {
@@ -75,7 +75,7 @@ export function stepDrawing(pieces: readonly Piece[], step: AssemblyStep, box: R
   const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
   const k = Math.min(box.widthMm / (x1 - x0 || 1), box.heightMm / (y1 - y0 || 1));
   const [ox, oy] = [box.xMm + (box.widthMm - (x1 - x0) * k) / 2, box.yMm + (box.heightMm - (y1 - y0) * k) / 2];
-  const place = (p: Vec3Mm): Vec2Mm => {
+  const place = (p: Vec3Mm): SheetVec2Mm => {
     const [u, v] = project(p);
     return [ox + (u - x0) * k, oy + (v - y0) * k];
   };

@@ -6,8 +6,8 @@
  */
 import SVGPathCommander from 'svg-path-commander';
 import type { PathArray } from 'svg-path-commander';
-import type { Vec2Mm } from '../geometry/types';
-import type { KitLayout, LaidOutSheet, Placement } from '../layout/types';
+import type { PlanePointMm, PlaneSpace } from '../geometry/types';
+import type { KitLayout, LaidOutSheet, Placement, SheetVec2Mm } from '../layout/types';
 import { GLUE_TINT, LINE_STYLES, TEXT_COLOR } from './line-styles';
 import { pieceLines } from './piece-lines';
 import type { PiecePointTransform } from './piece-lines';
@@ -123,9 +123,9 @@ export function svgPlacementTransform(placement: Placement): PiecePointTransform
         origin: [0, 0],
       }),
     );
-    const out: Vec2Mm[][] = [];
+    const out: SheetVec2Mm[][] = [];
     for (const seg of moved) {
-      const point: Vec2Mm = [Number(seg[seg.length - 2]), Number(seg[seg.length - 1])];
+      const point: SheetVec2Mm = [Number(seg[seg.length - 2]), Number(seg[seg.length - 1])];
       if (seg[0] === 'M') out.push([point]);
       else out[out.length - 1]!.push(point);
     }
@@ -133,7 +133,11 @@ export function svgPlacementTransform(placement: Placement): PiecePointTransform
   };
 }
 
-function svgPathArray(polylines: readonly (readonly Vec2Mm[])[], closed: boolean): PathArray {
+/** Path commands of polylines in either plane (flat ones go through transformPath onto the sheet). */
+function svgPathArray<S extends PlaneSpace>(
+  polylines: readonly (readonly PlanePointMm<S>[])[],
+  closed: boolean,
+): PathArray {
   const path: (string | number)[][] = [];
   for (const line of polylines) {
     line.forEach(([x, y], i) => path.push([i === 0 ? 'M' : 'L', x, y]));
@@ -143,7 +147,7 @@ function svgPathArray(polylines: readonly (readonly Vec2Mm[])[], closed: boolean
 }
 
 /** A path string of polylines (closed when asked), rounded to µm, built by svg-path-commander. */
-export function svgPathOf(polylines: readonly (readonly Vec2Mm[])[], closed: boolean): string {
+export function svgPathOf(polylines: readonly (readonly SheetVec2Mm[])[], closed: boolean): string {
   return SVGPathCommander.pathToString(svgPathArray(polylines, closed), DIGITS);
 }
 

@@ -7,6 +7,7 @@
 import { describe, expect, test } from 'vitest';
 import { BUILDABILITY_MINIMUMS } from '../../../src/lib/geometry/buildability';
 import type { Vec2Mm } from '../../../src/lib/geometry/types';
+import type { SheetVec2Mm } from '../../../src/lib/layout/types';
 import { buildKit } from '../../../src/lib/kit/build-kit';
 import { KitRequestSchema } from '../../../src/lib/kit/kit-request';
 import { placementApply } from '../../../src/lib/layout/placement';
@@ -18,7 +19,7 @@ const fonts = fixtureFonts();
 const min = BUILDABILITY_MINIMUMS['6-8'];
 
 /** Smallest extent of points over directions 0…180° in half-degree steps (an upper bound within 0.004 %). */
-function sweptWidthMm(points: readonly Vec2Mm[]): number {
+function sweptWidthMm(points: readonly SheetVec2Mm[]): number {
   let best = Infinity;
   for (let i = 0; i < 360; i++) {
     const a = (i * Math.PI) / 360;
@@ -36,14 +37,14 @@ function sweptWidthMm(points: readonly Vec2Mm[]): number {
 }
 
 /** Distance from p to segment ab. */
-function pointSegment(p: Vec2Mm, a: Vec2Mm, b: Vec2Mm): number {
+function pointSegment(p: SheetVec2Mm, a: SheetVec2Mm, b: SheetVec2Mm): number {
   const [dx, dy] = [b[0] - a[0], b[1] - a[1]];
   const t = Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / (dx * dx + dy * dy || 1)));
   return Math.hypot(p[0] - a[0] - t * dx, p[1] - a[1] - t * dy);
 }
 
 /** Gap between two folds by sampling 200 points along each against the other (0 when they touch). */
-function sampledGapMm(f: [Vec2Mm, Vec2Mm], g: [Vec2Mm, Vec2Mm]): number {
+function sampledGapMm(f: [SheetVec2Mm, SheetVec2Mm], g: [SheetVec2Mm, SheetVec2Mm]): number {
   let best = Infinity;
   for (const [p, q] of [
     [f, g],
@@ -51,7 +52,7 @@ function sampledGapMm(f: [Vec2Mm, Vec2Mm], g: [Vec2Mm, Vec2Mm]): number {
   ] as const) {
     for (let i = 0; i <= 200; i++) {
       const t = i / 200;
-      const x: Vec2Mm = [p[0][0] + t * (p[1][0] - p[0][0]), p[0][1] + t * (p[1][1] - p[0][1])];
+      const x: SheetVec2Mm = [p[0][0] + t * (p[1][0] - p[0][0]), p[0][1] + t * (p[1][1] - p[0][1])];
       best = Math.min(best, pointSegment(x, q[0], q[1]));
     }
   }
@@ -86,7 +87,7 @@ describe.each(DEMO_IDS)('%s for grades 6–8', (id) => {
           expect(sweptWidthMm(faces.flat()), `${where} piece`).toBeGreaterThanOrEqual(min.pieceMm - 1e-6);
           for (const face of faces)
             expect(sweptWidthMm(face), `${where} strip`).toBeGreaterThanOrEqual(min.stripMm - 1e-6);
-          const folds = piece.folds.map((f) => [at(f.fromMm), at(f.toMm)] as [Vec2Mm, Vec2Mm]);
+          const folds = piece.folds.map((f) => [at(f.fromMm), at(f.toMm)] as [SheetVec2Mm, SheetVec2Mm]);
           for (const tab of piece.tabs) {
             const fold = piece.folds.find((f) => f.tabNumber === tab.number);
             const polygon = tab.polygonMm.map(at);

@@ -1,16 +1,16 @@
 import { describe, expect, test } from 'vitest';
-import type { Vec2Mm } from '../../../src/lib/geometry/types';
+import type { SheetVec2Mm } from '../../../src/lib/layout/types';
 import { segmentClipOutline } from '../../../src/lib/render/segment-clip';
 import { ringArea } from '../layout/polygon-area';
 
-const closed = (ring: readonly Vec2Mm[]) => {
+const closed = (ring: readonly SheetVec2Mm[]) => {
   const [a, b] = [ring[0]!, ring[ring.length - 1]!];
   return a[0] === b[0] && a[1] === b[1];
 };
 
 describe('segmentClipOutline', () => {
   test('closes a square cut by the window along the window edge: area 5 × 10 (shoelace formula)', () => {
-    const square: Vec2Mm[] = [
+    const square: SheetVec2Mm[] = [
       [0, 0],
       [10, 0],
       [10, 10],
@@ -24,7 +24,7 @@ describe('segmentClipOutline', () => {
 
   test('gives a U-shaped piece cut across its arms two closed contours of 2 × 4 each', () => {
     // A U: 6 wide, 6 tall, arms 2 wide, notch 2 wide and 4 deep; the window keeps y ≥ 2 (the arms only).
-    const u: Vec2Mm[] = [
+    const u: SheetVec2Mm[] = [
       [0, 0],
       [6, 0],
       [6, 6],
@@ -43,7 +43,7 @@ describe('segmentClipOutline', () => {
   });
 
   test('returns the outline closed when there is no window, and nothing for a window beside the piece', () => {
-    const tri: Vec2Mm[] = [
+    const tri: SheetVec2Mm[] = [
       [0, 0],
       [4, 0],
       [0, 3],
