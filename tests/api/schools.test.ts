@@ -167,6 +167,23 @@ describe('GET /api/schools/proposals', () => {
     expect(flagged.similar[0]!.similarity).toBeCloseTo(Number(rows[0].s), 3);
     expect(proposals.find((p) => p.school.id === lone)!.similar.map((s) => s.id)).not.toContain(existing);
   });
+
+  it('gives each proposal every directory field, so a coordinator can edit it where it waits', async () => {
+    const id = await schoolInsert(`Osprey Landing School ${tag}`, 'proposed');
+    await knex('schools').where({ id }).update({ district: 'Osprey District', high_need_year: 2024 });
+    const { proposals } = (await (await api('/api/schools/proposals', { headers: { cookie } })).json()) as {
+      proposals: { school: Record<string, unknown> }[];
+    };
+    expect(proposals.find((p) => p.school.id === id)!.school).toMatchObject({
+      name: `Osprey Landing School ${tag}`,
+      district: 'Osprey District',
+      region: `Merge Region ${tag}`,
+      highNeedYear: 2024,
+      status: 'proposed',
+      teacherCount: 0,
+      classCount: 0,
+    });
+  });
 });
 
 describe('PATCH /api/schools/[id]', () => {

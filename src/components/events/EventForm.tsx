@@ -17,6 +17,7 @@ import {
 } from '../../lib/events/event-schemas';
 import { VENUES } from '../../lib/layout/venues';
 import { FormAlert } from '../auth/FormAlert';
+import { numberOrNull } from '../auth/field-values';
 import FieldShell from '../tools/FieldShell';
 import RegisteredSelect, { type Option } from './RegisteredSelect';
 import { FormField } from '../auth/FormField';
@@ -34,9 +35,6 @@ interface Props {
 
 /** An empty field is "none" (null), as the schema wants; anything else is kept as typed. */
 const textOrNull = (v: string | null) => (v ? v : null);
-/** An empty number field is "none"; text that is not a number stays text, so the schema names the mistake. */
-const numberOrNull = (v: string | number | null) =>
-  v === '' || v === null ? null : Number.isNaN(Number(v)) ? v : Number(v);
 
 export default function EventForm({ eventId, initial, schools, kits, activities, timeZones }: Props) {
   const [saved, setSaved] = useState<string | null>(null);

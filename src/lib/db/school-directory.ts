@@ -5,27 +5,16 @@
  */
 import type { Knex } from 'knex';
 import { ConflictError, InputError, NotFoundError } from '../errors';
-import { SCHOOL_DUPLICATE_SIMILARITY, type SchoolDirectoryQuery, type SchoolUpdate } from '../reach/school-schema';
+import {
+  SCHOOL_DUPLICATE_SIMILARITY,
+  type SchoolDirectoryQuery,
+  type SchoolDuplicate,
+  type SchoolRecord,
+  type SchoolUpdate,
+} from '../reach/school-schema';
 import { auditRecord } from './audit';
 import { likeEscape, schoolFilterSql } from './reach';
 import { db } from './knex';
-
-export interface SchoolRecord {
-  id: string;
-  name: string;
-  city: string;
-  district: string;
-  region: string;
-  country: string;
-  setting: 'rural' | 'suburban' | 'urban';
-  gradeBands: string[];
-  highNeed: boolean;
-  highNeedBasis: string;
-  highNeedYear: number | null;
-  status: 'approved' | 'proposed';
-  teacherCount: number;
-  classCount: number;
-}
 
 const RECORD_COLUMNS = `s.id, s.name, s.city, s.district, s.region, s.country, s.setting, s.grade_bands,
   s.high_need, s.high_need_basis, s.high_need_year, s.status,
@@ -41,7 +30,7 @@ function schoolRecord(r: Record<string, unknown>): SchoolRecord {
     region: r.region as string,
     country: r.country as string,
     setting: r.setting as SchoolRecord['setting'],
-    gradeBands: pgArray(r.grade_bands),
+    gradeBands: pgArray(r.grade_bands) as SchoolRecord['gradeBands'],
     highNeed: r.high_need as boolean,
     highNeedBasis: r.high_need_basis as string,
     highNeedYear: (r.high_need_year as number | null) ?? null,
@@ -186,36 +175,30 @@ export async function schoolUpdate(id: string, input: SchoolUpdate, actorId: str
   return schoolRecordById(id, trx);
 }
 
-/** A school that may be the same as another: the pair and their name similarity (0–1). */
-export interface SchoolDuplicate {
-  school: { id: string; name: string; city: string; status: string };
-  similar: { id: string; name: string; city: string; status: string; similarity: number }[];
-}
-
 /**
  * Proposed schools, each with the schools whose names are similar (pg_trgm similarity of the lower-cased
  * names at or above SCHOOL_DUPLICATE_SIMILARITY, the trigram index finds them), most similar first.
  */
 export async function schoolProposals(trx: Knex = db()): Promise<SchoolDuplicate[]> {
   const { rows } = await trx.raw(
-    `SELECT p.id, p.name, p.city, p.status,
+    `SELECT ${RECORD_COLUMNS},
             COALESCE(json_agg(json_build_object('id', o.id, 'name', o.name, 'city', o.city, 'status', o.status,
-                     'similarity', round(similarity(lower(o.name), lower(p.name))::numeric, 3))
-                     ORDER BY similarity(lower(o.name), lower(p.name)) DESC, o.name)
+                     'similarity', round(similarity(lower(o.name), lower(s.name))::numeric, 3))
+                     ORDER BY similarity(lower(o.name), lower(s.name)) DESC, o.name)
                      FILTER (WHERE o.id IS NOT NULL), '[]') AS similar
-     FROM schools p
+     FROM schools s
      LEFT JOIN LATERAL (
        SELECT o.* FROM schools o
-       WHERE o.id <> p.id AND lower(o.name) % lower(p.name)
-         AND similarity(lower(o.name), lower(p.name)) >= :threshold
-       ORDER BY similarity(lower(o.name), lower(p.name)) DESC LIMIT 5
+       WHERE o.id <> s.id AND lower(o.name) % lower(s.name)
+         AND similarity(lower(o.name), lower(s.name)) >= :threshold
+       ORDER BY similarity(lower(o.name), lower(s.name)) DESC LIMIT 5
      ) o ON true
-     WHERE p.status = 'proposed'
-     GROUP BY p.id ORDER BY p.created_at, p.name`,
+     WHERE s.status = 'proposed'
+     GROUP BY s.id ORDER BY s.created_at, s.name`,
     { threshold: SCHOOL_DUPLICATE_SIMILARITY },
   );
   return rows.map((r: Record<string, unknown>) => ({
-    school: { id: r.id, name: r.name, city: r.city, status: r.status },
+    school: schoolRecord(r),
     similar: (r.similar as SchoolDuplicate['similar']).map((s) => ({ ...s, similarity: Number(s.similarity) })),
   }));
 }

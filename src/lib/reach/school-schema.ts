@@ -63,3 +63,27 @@ export const SchoolDirectoryQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
 export type SchoolDirectoryQuery = z.infer<typeof SchoolDirectoryQuerySchema>;
+
+/** One school of the directory with every field and its number of teachers and classes. */
+export interface SchoolRecord {
+  id: string;
+  name: string;
+  city: string;
+  district: string;
+  region: string;
+  country: string;
+  setting: (typeof SCHOOL_SETTINGS)[number];
+  gradeBands: (typeof GRADE_BANDS)[number][];
+  highNeed: boolean;
+  highNeedBasis: string;
+  highNeedYear: number | null;
+  status: 'approved' | 'proposed';
+  teacherCount: number;
+  classCount: number;
+}
+
+/** A proposed school (every directory field) and the schools it may duplicate, with name similarity (0–1). */
+export interface SchoolDuplicate {
+  school: SchoolRecord;
+  similar: { id: string; name: string; city: string; status: string; similarity: number }[];
+}
