@@ -92,6 +92,7 @@ const ROWS: Row[] = [
   // Schools
   { route: '/api/schools', method: 'GET', expect: all(200) },
   { route: '/api/schools/directory', method: 'GET', expect: staffOnly(200) },
+  { route: '/api/schools/directory.csv', method: 'GET', expect: staffOnly(200) },
   { route: '/api/schools/proposals', method: 'GET', expect: staffOnly(200) },
   { route: '/api/schools/[id]', method: 'GET', path: `/api/schools/${MISSING}`, expect: staffOnly(404) },
   { route: '/api/schools/[id]', method: 'PATCH', path: `/api/schools/${MISSING}`, body: {}, expect: staffOnly(400) },

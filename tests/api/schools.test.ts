@@ -5,6 +5,7 @@
  * no other test's rows fall in their period.
  */
 import type { Knex } from 'knex';
+import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { REACH_FIGURE_IDS, type ReachFigureId } from '../../src/lib/reach/figures';
 import { testKnex } from '../db/database';
@@ -183,6 +184,58 @@ describe('GET /api/schools/proposals', () => {
       teacherCount: 0,
       classCount: 0,
     });
+  });
+});
+
+describe('GET /api/schools/directory.csv', () => {
+  it('parses back with papaparse into the directory under the same filters, every page, row for row', async () => {
+    const names = ['Alder Point School', 'Birch Run School', 'Cobble Ford School', '=SUM(1+1) School'];
+    for (const [i, name] of names.entries()) {
+      const id = await schoolInsert(`${name} ${tag}`);
+      await knex('schools')
+        .where({ id })
+        .update({ high_need: i !== 1, high_need_basis: i !== 1 ? '70% free or reduced-price meals' : '' });
+    }
+    const filters = `q=${tag}&highNeed=true&status=approved`;
+    const pages: Record<string, unknown>[] = [];
+    for (let page = 1; page <= 2; page++) {
+      const res = await api(`/api/schools/directory?${filters}&pageSize=2&page=${page}`, { headers: { cookie } });
+      pages.push(...((await res.json()) as { schools: Record<string, unknown>[] }).schools);
+    }
+    expect(pages.length).toBe(3);
+    const res = await api(`/api/schools/directory.csv?${filters}&pageSize=2`, { headers: { cookie } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('text/csv; charset=utf-8');
+    // papaparse, an independent CSV reader, reads the file back (it keeps the byte-order mark out of the cells).
+    const parsed = Papa.parse<string[]>((await res.text()).replace(/^\uFEFF/, ''), { skipEmptyLines: true });
+    expect(parsed.errors).toEqual([]);
+    const [header, ...rows] = parsed.data;
+    expect(header).toEqual([
+      'School',
+      'City',
+      'District',
+      'Region',
+      'Country',
+      'Setting',
+      'Grade bands',
+      'High-need',
+      'High-need basis',
+      'Basis year',
+      'Status',
+      'Teachers',
+      'Classes',
+    ]);
+    // OWASP "CSV Injection": a cell starting with = is prefixed with ' so a spreadsheet reads it as text.
+    const cell = (name: unknown) => (String(name).startsWith('=') ? `'${name}` : String(name));
+    expect(rows.map((r) => [r[0], r[3], r[7], r[10]])).toEqual(
+      pages.map((s) => [cell(s.name), s.region, 'yes', 'approved']),
+    );
+  });
+
+  it('answers a bad filter with 400 and the field at fault', async () => {
+    const res = await api('/api/schools/directory.csv?setting=lunar', { headers: { cookie } });
+    expect(res.status).toBe(400);
+    expect(((await res.json()) as { error: { fields: object } }).error.fields).toHaveProperty('setting');
   });
 });
 

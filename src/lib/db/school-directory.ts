@@ -47,9 +47,13 @@ function pgArray(value: unknown): string[] {
   return text ? text.split(',').map((s) => s.replace(/^"|"$/g, '')) : [];
 }
 
-/** The directory, filtered and paged, by name; with the number of schools across all pages. */
+/**
+ * The directory, filtered and paged, by name; with the number of schools across all pages. With `all`, every
+ * school under the filters (the CSV export), the paging ignored.
+ */
 export async function schoolDirectory(
   query: SchoolDirectoryQuery,
+  all = false,
   trx: Knex = db(),
 ): Promise<{ schools: SchoolRecord[]; total: number }> {
   const bindings: Record<string, string | number | boolean | Date> = {
@@ -67,7 +71,7 @@ export async function schoolDirectory(
   }
   const { rows } = await trx.raw(
     `SELECT ${RECORD_COLUMNS}, count(*) OVER () AS total FROM schools s WHERE ${where.join(' AND ')}
-     ORDER BY s.name, s.city, s.id LIMIT :limit OFFSET :offset`,
+     ORDER BY s.name, s.city, s.id ${all ? '' : 'LIMIT :limit OFFSET :offset'}`,
     bindings,
   );
   return { schools: rows.map(schoolRecord), total: rows.length ? Number(rows[0].total) : 0 };

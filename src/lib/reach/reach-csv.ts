@@ -6,6 +6,7 @@
  */
 import Papa from 'papaparse';
 import { REACH_FIGURES } from './figures';
+import type { SchoolRecord } from './school-schema';
 
 export const CSV_BOM = '\uFEFF';
 
@@ -34,5 +35,41 @@ export function reachRowsCsv(
   return csvFile(
     header,
     rows.map((r) => [r.at.slice(0, 10), r.item, r.schoolName ?? '', ...(amountHeading ? [r.amount] : [])]),
+  );
+}
+
+/** The schools directory as CSV: one column per field, so a spreadsheet can sort and filter each. */
+export function schoolDirectoryCsv(schools: SchoolRecord[]): string {
+  return csvFile(
+    [
+      'School',
+      'City',
+      'District',
+      'Region',
+      'Country',
+      'Setting',
+      'Grade bands',
+      'High-need',
+      'High-need basis',
+      'Basis year',
+      'Status',
+      'Teachers',
+      'Classes',
+    ],
+    schools.map((s) => [
+      s.name,
+      s.city,
+      s.district,
+      s.region,
+      s.country,
+      s.setting,
+      s.gradeBands.join(' '),
+      s.highNeed ? 'yes' : 'no',
+      s.highNeedBasis,
+      s.highNeedYear ?? '',
+      s.status,
+      s.teacherCount,
+      s.classCount,
+    ]),
   );
 }
