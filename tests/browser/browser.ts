@@ -37,6 +37,14 @@ export async function pageNew(browser: Browser): Promise<{ page: Page; errors: s
   return { page, errors };
 }
 
+/** A new page like pageNew, signed in with a session's Cookie header value (`name=value`). */
+export async function pageWithSession(browser: Browser, cookie: string): Promise<{ page: Page; errors: string[] }> {
+  const opened = await pageNew(browser);
+  const [name, value] = cookie.split(/=(.*)/s) as [string, string];
+  await opened.page.context().addCookies([{ name, value, url: BASE_URL }]);
+  return opened;
+}
+
 /** Waits until every island on the page has hydrated (Astro drops the `ssr` attribute then). */
 export async function hydrated(page: Page): Promise<void> {
   await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'));

@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { accountCreate, emailUnique, linkIn, mailWait, userSessionCookie } from '../api/auth-helpers';
 import { pdfPageTexts } from '../fixtures/pdf-text';
-import { BASE_URL, browserLaunch, hydrated, pageNew } from './browser';
+import { browserLaunch, hydrated, pageNew, pageWithSession } from './browser';
 
 let browser: Browser;
 let knex: Knex;
@@ -28,11 +28,8 @@ afterAll(async () => {
   await knex?.destroy();
 });
 
-async function pageAsCoordinator(): Promise<{ page: Page; errors: string[] }> {
-  const opened = await pageNew(browser);
-  const [name, value] = coordinatorCookie.split(/=(.*)/s) as [string, string];
-  await opened.page.context().addCookies([{ name, value, url: BASE_URL }]);
-  return opened;
+function pageAsCoordinator(): Promise<{ page: Page; errors: string[] }> {
+  return pageWithSession(browser, coordinatorCookie);
 }
 
 /** Registers on the public page by name and e-mail and opens the confirmation link from the mail. */
