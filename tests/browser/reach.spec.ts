@@ -144,6 +144,14 @@ describe('proposed schools in the browser', () => {
 
     const freshCard = page.locator(`li[data-school="${fresh}"]`);
     await freshCard.getByRole('button', { name: 'Edit' }).click();
+    // Keyboard use: the form takes the focus, Escape closes it and gives the focus back to its button.
+    expect(await freshCard.getByLabel('Name').evaluate((el) => el === document.activeElement)).toBe(true);
+    await page.keyboard.press('Escape');
+    expect(await freshCard.getByLabel('Name').count()).toBe(0);
+    expect(await freshCard.getByRole('button', { name: 'Edit' }).evaluate((el) => el === document.activeElement)).toBe(
+      true,
+    );
+    await page.keyboard.press('Enter');
     await freshCard.getByLabel('District').fill('Sorrel Unified');
     await freshCard.getByLabel('Setting').selectOption('rural');
     await freshCard.getByLabel('K-2').check();

@@ -2,6 +2,7 @@
  * A coordinator's edit of one school's directory fields (PATCH /api/schools/ID): the API's own
  * SchoolUpdateSchema checks it in the browser, and the server's field errors land beside their fields.
  */
+import { useEffect } from 'react';
 import type { z } from 'zod';
 import { SCHOOL_SETTINGS } from '../../lib/reach/reach-query';
 import {
@@ -56,6 +57,7 @@ export default function SchoolEditForm({ school, onSaved, onCancel }: Props) {
     onSuccess: (data) => onSaved(data.school),
   });
   const { errors, isSubmitting } = form.formState;
+  useEffect(() => form.setFocus('name'), [form]);
   const prefix = `school-${school.id}`;
   return (
     <form noValidate onSubmit={(e) => void onSubmit(e)} className="mt-3 space-y-4" aria-label={`Edit ${school.name}`}>

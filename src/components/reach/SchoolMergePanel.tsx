@@ -33,6 +33,7 @@ export default function SchoolMergePanel({ school, similar, onMerged, onCancel }
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const confirmHeading = useRef<HTMLHeadingElement>(null);
+  const searchBox = useRef<HTMLInputElement>(null);
   const candidates: Target[] = [
     ...similar.map((s) => ({ ...s, note: `similar name, ${Math.round(s.similarity * 100)}%` })),
     ...found.filter((f) => f.id !== school.id && !similar.some((s) => s.id === f.id)),
@@ -49,7 +50,7 @@ export default function SchoolMergePanel({ school, similar, onMerged, onCancel }
       .catch((e: Error) => abort.signal.aborted || setError(e.message));
     return () => abort.abort();
   }, [search]);
-  useEffect(() => confirmHeading.current?.focus(), [people]);
+  useEffect(() => (people ? confirmHeading.current : searchBox.current)?.focus(), [people]);
 
   async function review() {
     setError(null);
@@ -99,6 +100,7 @@ export default function SchoolMergePanel({ school, similar, onMerged, onCancel }
       <label className="block text-sm">
         Find another school by name or city
         <input
+          ref={searchBox}
           className="field-input"
           type="search"
           value={search}

@@ -19,7 +19,9 @@ const PANELS = [
   ['edit', 'Edit'],
   ['merge', 'Merge into…'],
 ] as const;
-type Open = { id: string; mode: (typeof PANELS)[number][0] } | null;
+type Mode = (typeof PANELS)[number][0];
+type Open = { id: string; mode: Mode } | null;
+const panelButtonId = (schoolId: string, mode: Mode) => `proposal-${mode}-${schoolId}`;
 
 const fieldsText = (s: SchoolRecord) =>
   [
@@ -54,8 +56,15 @@ export default function SchoolProposals({ initial }: Props) {
 
   function edited(school: SchoolRecord) {
     setProposals((list) => list.map((p) => (p.school.id === school.id ? { ...p, school } : p)));
-    setOpen(null);
+    close();
     setDone(`Saved ${school.name}. It still waits to be accepted.`);
+  }
+
+  /** Closes the open panel and gives the focus back to the button that opened it. */
+  function close() {
+    const button = open && document.querySelector<HTMLButtonElement>(`#${panelButtonId(open.id, open.mode)}`);
+    setOpen(null);
+    button?.focus();
   }
 
   return (
@@ -90,6 +99,7 @@ export default function SchoolProposals({ initial }: Props) {
                     key={mode}
                     type="button"
                     className="btn-secondary text-sm"
+                    id={panelButtonId(school.id, mode)}
                     aria-expanded={open?.id === school.id && open.mode === mode}
                     onClick={() => setOpen({ id: school.id, mode })}
                   >
@@ -97,16 +107,19 @@ export default function SchoolProposals({ initial }: Props) {
                   </button>
                 ))}
               </div>
-              {open?.id === school.id && open.mode === 'edit' && (
-                <SchoolEditForm school={school} onSaved={edited} onCancel={() => setOpen(null)} />
-              )}
-              {open?.id === school.id && open.mode === 'merge' && (
-                <SchoolMergePanel
-                  school={school}
-                  similar={similar}
-                  onMerged={(message) => finish(school.id, message)}
-                  onCancel={() => setOpen(null)}
-                />
+              {open?.id === school.id && (
+                <div onKeyDown={(e) => e.key === 'Escape' && close()}>
+                  {open.mode === 'edit' ? (
+                    <SchoolEditForm school={school} onSaved={edited} onCancel={close} />
+                  ) : (
+                    <SchoolMergePanel
+                      school={school}
+                      similar={similar}
+                      onMerged={(message) => finish(school.id, message)}
+                      onCancel={close}
+                    />
+                  )}
+                </div>
               )}
             </li>
           ))}
