@@ -116,9 +116,17 @@ export function convexHull(points: readonly Vec2Mm[]): Vec2Mm[] {
  * Infinity when the piece has no tabs.
  */
 export function pieceTabDepthMm(piece: Pick<Piece, 'tabs'>): number {
-  let min = Infinity;
-  for (const t of piece.tabs) min = Math.min(min, t.depthMm ?? tabReachMm(t.polygonMm));
-  return min;
+  return pieceShallowestTab(piece)?.depthMm ?? Infinity;
+}
+
+/** The shallowest tab of a piece with its depth as cut (pieceTabDepthMm), or null when the piece has none. */
+export function pieceShallowestTab(piece: Pick<Piece, 'tabs'>): { number: number; depthMm: number } | null {
+  let best: { number: number; depthMm: number } | null = null;
+  for (const t of piece.tabs) {
+    const depthMm = t.depthMm ?? tabReachMm(t.polygonMm);
+    if (!best || depthMm < best.depthMm) best = { number: t.number, depthMm };
+  }
+  return best;
 }
 
 function tabReachMm(polygonMm: readonly Vec2Mm[]): number {
@@ -250,5 +258,30 @@ export function buildabilityShortfallWords(s: BuildabilityShortfall, band: Build
       return `the ${s.label} would have tabs ${got} deep (${need})`;
     case 'foldGapMm':
       return `the ${s.label} would have folds ${got} apart (${need})`;
+  }
+}
+
+/**
+ * A shortfall as a note printed beside the piece it concerns (the piece's name is shown with it), e.g.
+ * "Tab 12 is 3.1 mm deep; grades 3–5 need 6.0 mm". The tab named is the piece's shallowest.
+ */
+export function buildabilityNoteWords(
+  s: BuildabilityShortfall,
+  band: BuildGradeBand,
+  piece: Pick<Piece, 'tabs'>,
+): string {
+  const need = `${BUILD_GRADE_BAND_WORDS[band]} need ${buildabilityMm(s.minimumMm)}`;
+  const got = buildabilityMm(s.measuredMm);
+  switch (s.what) {
+    case 'pieceMm':
+      return `The piece is ${got} across; ${need}`;
+    case 'stripMm':
+      return `Its narrowest strip is ${got} wide; ${need}`;
+    case 'tabMm': {
+      const tab = pieceShallowestTab(piece);
+      return `${tab ? `Tab ${tab.number}` : 'A tab'} is ${got} deep; ${need}`;
+    }
+    case 'foldGapMm':
+      return `Two of its folds are ${got} apart; ${need}`;
   }
 }

@@ -66,11 +66,16 @@ export function coneTooSmall(diameterMm: number, band: BuildGradeBand): boolean 
  * (the paper tube would be 5.0 mm thick, thinner than a pencil)".
  */
 export function partSubstituteWords(s: PartSubstitute, band: BuildGradeBand): string {
+  return `${s.label}: ${partSubstituteUse(s, band)}`;
+}
+
+/** What stands in for the part and why, without its name (the materials line after the colon). */
+export function partSubstituteUse(s: PartSubstitute, band: BuildGradeBand): string {
   if (s.kind === 'boom-stock') {
     const stock = BOOM_STOCK[s.stock];
-    return `${s.label}: ${stock.words} cut to ${buildabilityMm(s.lengthMm)} (the paper tube would be ${buildabilityMm(s.diameterMm)} thick, thinner than a pencil)`;
+    return `${stock.words} cut to ${buildabilityMm(s.lengthMm)} (the paper tube would be ${buildabilityMm(s.diameterMm)} thick, thinner than a pencil)`;
   }
-  return `${s.label}: the flat disc on the sheet, ${buildabilityMm(s.diameterMm)} across (a cone that small is too fine for ${BUILD_GRADE_BAND_WORDS[band]} to roll)`;
+  return `the flat disc on the sheet, ${buildabilityMm(s.diameterMm)} across (a cone that small is too fine for ${BUILD_GRADE_BAND_WORDS[band]} to roll)`;
 }
 
 /** The usual caution for a substitute that can hurt someone, or null. */

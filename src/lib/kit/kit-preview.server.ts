@@ -23,6 +23,7 @@ import type { KitOutput } from './build-kit';
 import { kitPrintScale, kitPrintView, type KitPrintView } from './kit-print';
 import type { KitRequest } from './kit-request';
 import { AppError } from '../errors';
+import { kitSheetNotes, type KitSheetNotes } from './sheet-notes';
 
 export interface KitPreview {
   contentHash: string;
@@ -34,6 +35,8 @@ export interface KitPreview {
   copies: number;
   /** One SVG document per sheet, in order. */
   sheets: string[];
+  /** Buildability and substitute notes on the pieces of each sheet, with where each piece sits. */
+  notes: KitSheetNotes;
   summary: KitSummary;
   /** The STL's print plate on the chosen bed, or why none fits. */
   print: KitPrintView | { error: string };
@@ -56,6 +59,7 @@ export async function kitPreview(inputs: KitInputs, options: KitOutputBuildOptio
     sheetCount: build.layout.sheets.length,
     copies: request.copies,
     sheets: build.svgSheets ?? [],
+    notes: kitSheetNotes(build.layout),
     summary: kitSummary({
       model,
       scaleDenominator: request.scaleDenominator,
