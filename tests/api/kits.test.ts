@@ -80,6 +80,32 @@ describe('POST /api/kits/preview', () => {
     expect(data.summary.spanFitsVenue).toBe(true);
   });
 
+  it('notes no shortfall for grades 6–8 at 1:20, only the skewers that stand in for the axial booms', async () => {
+    const data = await body(await postJson('/api/kits/preview', { ...INPUTS, gradeBand: '6-8' }, as(teacherCookie)));
+    expect(data.notes.bandWords).toBe('grades 6–8');
+    expect(data.notes.shortPieces).toBe(0);
+    expect(data.notes.sheets).toHaveLength(data.sheetCount);
+    const notes = data.notes.sheets.flat();
+    expect(notes.map((n: { kind: string }) => n.kind)).toEqual(['substitute', 'substitute']);
+    // 6 m / 20 = 300 mm long and 0.1 m / 20 = 5 mm thick (content/models/skein-probe.json).
+    expect(notes[0].words[0]).toBe(
+      'A bamboo skewer cut to 300 mm (the paper tube would be 5.0 mm thick, thinner than a pencil)',
+    );
+  });
+
+  it('notes the pieces too small for grades K–2 at 1:50 on the sheet that holds them, where they sit', async () => {
+    const inputs = { ...INPUTS, scaleDenominator: 50, gradeBand: 'K-2' };
+    const data = await body(await postJson('/api/kits/preview', inputs, as(teacherCookie)));
+    expect(data.notes.shortPieces).toBeGreaterThan(0);
+    const dish = data.notes.sheets[0].find((n: { pieceId: string }) => n.pieceId === 'dish');
+    // 0.6 m / 50 = 12 mm across: under the 40 mm piece grades K–2 cut.
+    expect(dish.words).toContain('The piece is 12 mm across; grades K–2 need 40 mm');
+    expect(dish.at[0].x).toBeGreaterThan(0);
+    expect(dish.at[0].x).toBeLessThan(1);
+    expect(dish.at[0].y).toBeGreaterThan(0);
+    expect(dish.at[0].y).toBeLessThan(1);
+  });
+
   it('refuses a scale at which a piece is under the 5 mm floor, naming the ratio that works', async () => {
     const res = await postJson('/api/kits/preview', { ...INPUTS, scaleDenominator: 500 }, as(teacherCookie));
     expect(res.status).toBe(400);

@@ -149,6 +149,7 @@ export default function KitBuilderForm(props: KitBuilderProps) {
               title={data.title}
               stale={building || (saved !== null && savedSheets.isFetching)}
               qr={saved && savedSheets.data ? 'saved' : 'note'}
+              notes={data.notes}
             />
           ) : (
             <p className="text-ink-soft">{building ? 'Building…' : 'No sheets yet.'}</p>
