@@ -8,7 +8,7 @@ import { describe, expect, test } from 'vitest';
 import type { Vec2Mm } from '../../../src/lib/geometry/types';
 import { buildKit } from '../../../src/lib/kit/build-kit';
 import { KitRequestSchema } from '../../../src/lib/kit/kit-request';
-import { kitSheetNotes } from '../../../src/lib/kit/sheet-notes';
+import { kitSheetNotes, pieceSpotMm } from '../../../src/lib/kit/sheet-notes';
 import { placementApply } from '../../../src/lib/layout/placement';
 import { fixtureFonts } from '../../fixtures/pieces/kit-layout';
 import { demoModel } from '../geometry/fixtures';
@@ -123,5 +123,25 @@ describe('kitSheetNotes', () => {
       'The piece is 30 mm across; grades K–2 need 40 mm',
       'The flat disc on the sheet, 30 mm across (a cone that small is too fine for grades K–2 to roll)',
     ]);
+  });
+
+  test('puts the mark of a tiled piece on the part its tile shows', async () => {
+    const layout = await layoutOf('wren-3u', 10, 'K-2');
+    const body = layout.pieces.find((p) => p.id === 'body')!;
+    const pose = { xMm: 100, yMm: 100, rotationRad: 0, mirrored: false };
+    const outline = body.outlineMm.map((p) => placementApply(pose, p));
+    const xs = outline.map((p) => p[0]);
+    const ys = outline.map((p) => p[1]);
+    // A tile showing only the right-hand third of the piece's box.
+    const x0 = Math.min(...xs) + (2 / 3) * (Math.max(...xs) - Math.min(...xs));
+    const windowMm = { xMm: x0, yMm: Math.min(...ys), widthMm: Math.max(...xs) - x0, heightMm: Math.max(...ys) };
+    const tile = { row: 0, col: 2, rows: 1, cols: 3, windowMm, overlapMm: 10 };
+    const spot = pieceSpotMm({ pieceId: 'body', ...pose, tile }, body);
+    expect(spot[0]).toBeGreaterThanOrEqual(x0);
+    expect(inside(spot, outline)).toBe(true);
+    // Untiled, the mark goes elsewhere on the piece: left of that third.
+    const whole = pieceSpotMm({ pieceId: 'body', ...pose }, body);
+    expect(inside(whole, outline)).toBe(true);
+    expect(whole[0]).toBeLessThan(x0);
   });
 });
