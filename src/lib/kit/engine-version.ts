@@ -3,4 +3,4 @@
  * changed engine never serves a stale cached kit. Bump it whenever output for the same input changes;
  * tests/lib/kit/engine-output.test.ts fails when the demo kits' files change without a bump.
  */
-export const ENGINE_VERSION = '0.4.0';
+export const ENGINE_VERSION = '0.4.1';

@@ -49,13 +49,13 @@ export function tilingPiece(
       const ys = tileSpan(r, stepY, window.heightMm, box.heightMm);
       if (c + 1 < cols) {
         const x = (c + 1) * stepX + overlapMm / 2;
-        for (const f of [0.25, 0.75])
-          marks.push({ xMm: x, yMm: ys.from + f * (ys.to - ys.from), letter: tilingLetter(letter++) });
+        for (const y of tilingMarkStops(ys, r, rows, overlapMm))
+          marks.push({ xMm: x, yMm: y, letter: tilingLetter(letter++) });
       }
       if (r + 1 < rows) {
         const y = (r + 1) * stepY + overlapMm / 2;
-        for (const f of [0.25, 0.75])
-          marks.push({ xMm: xs.from + f * (xs.to - xs.from), yMm: y, letter: tilingLetter(letter++) });
+        for (const x of tilingMarkStops(xs, c, cols, overlapMm))
+          marks.push({ xMm: x, yMm: y, letter: tilingLetter(letter++) });
       }
     }
   }
@@ -79,6 +79,27 @@ export function tilingPiece(
     }
   }
   return tiles;
+}
+
+/**
+ * Shortest stretch of strip that carries two registration marks rather than one, mm: two crosses 6 mm across
+ * with their letters and clear paper between (common practice, no source).
+ */
+export const TILING_TWO_MARKS_MM = 24;
+
+/**
+ * Where the marks of the strip joining a tile to its next neighbour go along the tile's span (index of n along
+ * that axis): within the stretch no third tile shares, so each cross joins exactly two tiles and never lands in
+ * a corner where the strips of four tiles cross; at its quarter points, or at its middle when the stretch is
+ * short (a last row or column barely wider than the overlap).
+ */
+function tilingMarkStops(span: { from: number; to: number }, index: number, n: number, overlapMm: number): number[] {
+  const from = span.from + (index > 0 ? overlapMm : 0);
+  const to = span.to - (index + 1 < n ? overlapMm : 0);
+  const length = to - from;
+  // A window under twice the overlap leaves no stretch of its own: the mark goes to the span's middle.
+  if (length <= 0) return [(span.from + span.to) / 2];
+  return length >= TILING_TWO_MARKS_MM ? [from + 0.25 * length, from + 0.75 * length] : [from + 0.5 * length];
 }
 
 /**

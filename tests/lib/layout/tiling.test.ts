@@ -54,27 +54,46 @@ describe('tilingPiece', () => {
     expect(at(0, 0).tile!.rows * at(0, 0).tile!.cols).toBe(tiles.length);
   });
 
-  test('prints each alignment mark at the same point of the piece on both tiles it joins', () => {
-    const tiles = tilingPiece(rectPiece('sq', 500, 450), 0, window, 12);
-    const byLetter = new Map<string, [number, number][]>();
-    for (const t of tiles) {
-      for (const m of t.alignmentMarks) {
-        // Back to flat coordinates through the inverse of the rule; forward-check with placementApply.
-        const c = Math.cos(t.placement.rotationRad);
-        const s = Math.sin(t.placement.rotationRad);
-        const dx = m.atMm[0] - t.placement.xMm;
-        const dy = m.atMm[1] - t.placement.yMm;
-        const flat: [number, number] = [c * dx + s * dy, -(-s * dx + c * dy)];
-        expect(placementApply(t.placement, flat)[0]).toBeCloseTo(m.atMm[0], 9);
-        byLetter.set(m.letter, [...(byLetter.get(m.letter) ?? []), flat]);
+  // A piece 10 mm longer each way than the window leaves a last row and column barely wider than the overlap,
+  // where the strips of four tiles cross (the ring caps of the stack at 1:10 on A5).
+  test.each([
+    ['a large piece', rectPiece('sq', 500, 450)],
+    ['a piece whose last row and column are short', rectPiece('cap', 200, 210)],
+  ])(
+    'prints each alignment mark of %s at the same point of the piece on exactly the two tiles it joins',
+    (_, piece) => {
+      const tiles = tilingPiece(piece, 0, window, 12);
+      const byLetter = new Map<string, [number, number][]>();
+      for (const t of tiles) {
+        for (const m of t.alignmentMarks) {
+          // Back to flat coordinates through the inverse of the rule; forward-check with placementApply.
+          const c = Math.cos(t.placement.rotationRad);
+          const s = Math.sin(t.placement.rotationRad);
+          const dx = m.atMm[0] - t.placement.xMm;
+          const dy = m.atMm[1] - t.placement.yMm;
+          const flat: [number, number] = [c * dx + s * dy, -(-s * dx + c * dy)];
+          expect(placementApply(t.placement, flat)[0]).toBeCloseTo(m.atMm[0], 9);
+          byLetter.set(m.letter, [...(byLetter.get(m.letter) ?? []), flat]);
+        }
       }
-    }
-    expect(byLetter.size).toBeGreaterThan(0);
-    for (const points of byLetter.values()) {
-      expect(points).toHaveLength(2);
-      expect(points[0]![0]).toBeCloseTo(points[1]![0], 9);
-      expect(points[0]![1]).toBeCloseTo(points[1]![1], 9);
-    }
+      expect(byLetter.size).toBeGreaterThan(0);
+      for (const points of byLetter.values()) {
+        expect(points).toHaveLength(2);
+        expect(points[0]![0]).toBeCloseTo(points[1]![0], 9);
+        expect(points[0]![1]).toBeCloseTo(points[1]![1], 9);
+      }
+    },
+  );
+
+  test('keeps the crosses of one tile apart: arms 3 mm long never meet when centres are over 6 mm apart', () => {
+    const tiles = tilingPiece(rectPiece('cap', 200, 210), 0, window, 12);
+    expect(tiles).toHaveLength(4);
+    for (const { alignmentMarks: marks } of tiles)
+      for (let i = 0; i < marks.length; i++)
+        for (let j = i + 1; j < marks.length; j++) {
+          const [a, b] = [marks[i]!.atMm, marks[j]!.atMm];
+          expect(Math.hypot(a[0] - b[0], a[1] - b[1]), `${marks[i]!.letter} ${marks[j]!.letter}`).toBeGreaterThan(6);
+        }
   });
 
   test('returns no tiles when the window is no wider than the overlap', () => {
