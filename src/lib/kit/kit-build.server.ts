@@ -3,12 +3,9 @@
  * at which a piece falls below the buildability floor (with the solver's message of what would work), timing each
  * stage, and caching the result by content hash. The build itself runs on the worker pool (src/lib/work).
  */
-import { BUILD_GRADE_BAND_FLOOR, buildabilityShortfalls, buildabilityShortfallWords } from '../geometry/buildability';
-import { InputError } from '../errors';
-import { solvePaperScale } from '../layout/scale-solver';
-import type { Piece } from '../geometry/types';
 import { buildKit, GEOMETRY_KIT_ENGINE, type KitBuild, type KitEngine, type KitOutput } from './build-kit';
 import { contentHash } from './content-hash';
+import { kitScaleGuard } from './kit-scale-guard';
 import { kitFonts } from './fonts.server';
 import { workRun } from '../work/work-pool.server';
 import type { KitRequest } from './kit-request';
@@ -21,23 +18,6 @@ export type KitTimingsMs = Partial<Record<'patterns' | 'layout' | KitOutput, num
 export interface KitOutputBuild {
   build: KitBuild;
   timingsMs: KitTimingsMs;
-}
-
-/** Throws the solver's InputError when a piece falls below the buildability floor (what nobody can cut). */
-export function kitScaleGuard(request: KitRequest, pieces: readonly Piece[]): void {
-  const worst = buildabilityShortfalls(pieces, BUILD_GRADE_BAND_FLOOR)[0];
-  if (!worst) return;
-  // The slow path (the solver searches for the smallest workable scale) runs only for a refused request.
-  solvePaperScale(request.model, {
-    sheetId: request.sheetSizeId,
-    paperGsm: request.paperGsm,
-    scaleDenominator: request.scaleDenominator,
-    gradeBand: request.gradeBand,
-  });
-  throw new InputError(
-    `At 1:${request.scaleDenominator} ${buildabilityShortfallWords(worst, BUILD_GRADE_BAND_FLOOR)}; choose a larger scale (a smaller N).`,
-    { scaleDenominator: ['too small to cut and glue'] },
-  );
 }
 
 function guardedEngine(request: KitRequest): KitEngine {

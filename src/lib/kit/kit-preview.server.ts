@@ -15,7 +15,8 @@ import {
   type PatternsRequestSchema,
   type ScaleSolveRequestSchema,
 } from './kit-inputs';
-import { kitOutputBuild, kitScaleGuard, type KitOutputBuildOptions, type KitTimingsMs } from './kit-build.server';
+import { kitOutputBuild, type KitOutputBuildOptions, type KitTimingsMs } from './kit-build.server';
+import { kitScaleGuard } from './kit-scale-guard';
 import { KitCache } from './kit-cache.server';
 import { workRun } from '../work/work-pool.server';
 import { kitSummary, type KitSummary } from './kit-summary';
