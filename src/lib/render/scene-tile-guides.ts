@@ -4,6 +4,7 @@ import type { Placement, RectMm, SheetVec2Mm } from '../layout/types';
 import { GLUE_TINT, GUIDE_STYLE, TEXT_COLOR } from './line-styles';
 import { type SceneText, type SheetScene, sceneText as text } from './scene-types';
 import { SceneLabels } from './scene-labels';
+import type { LabelMeasure } from './label-placement';
 
 const NUMBER_SIZE_MM = 2.6;
 
@@ -42,7 +43,8 @@ export function sceneAlignmentLetter(labels: SceneLabels, at: SheetVec2Mm, lette
   if (!labels.tryPlace(candidates)) labels.reserve(candidates[0]!);
 }
 
-export function sceneTileGuides(scene: SheetScene, placement: Placement) {
+/** A tile's window outline, its overlap strips shaded, and its caption (measured with `measure`) below it. */
+export function sceneTileGuides(scene: SheetScene, placement: Placement, measure: LabelMeasure) {
   const tile = placement.tile!;
   const w = tile.windowMm;
   const o = tile.overlapMm;
@@ -68,6 +70,14 @@ export function sceneTileGuides(scene: SheetScene, placement: Placement) {
   const step = strips.length
     ? ': glue the shaded strip under the next tile, letters on letters'
     : ': lay it over the tiles before it';
-  const where = `Tile row ${tile.row + 1} of ${tile.rows}, column ${tile.col + 1} of ${tile.cols}${step}`;
-  scene.texts.push(text(where, [w.xMm, b + TILE_CAPTION_MM / 2], 2.2, 'furniture', { anchor: 'start' }));
+  const [row, col] = [tile.row + 1, tile.col + 1];
+  const where = `row ${row} of ${tile.rows}, column ${col} of ${tile.cols}`;
+  // The caption stays under its own window, so tiles packed side by side keep theirs apart: the longest form
+  // that fits the window's width (the gluing step is on the wider tiles of the same piece too).
+  const forms = [`Tile ${where}${step}`, `Tile ${where}`, `Row ${row}, column ${col}`, `Row ${row} col ${col}`];
+  const caption = forms.find((f) => measure(f, CAPTION_SIZE_MM, false) <= w.widthMm) ?? forms.at(-1)!;
+  scene.texts.push(text(caption, [w.xMm, b + TILE_CAPTION_MM / 2], CAPTION_SIZE_MM, 'furniture', { anchor: 'start' }));
 }
+
+/** Text size of a tile's caption, mm. */
+const CAPTION_SIZE_MM = 2.2;

@@ -33,7 +33,7 @@ import {
 export function sheetScene(kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure = textWidthMm): SheetScene {
   const scene: SheetScene = { texts: [], strokes: [], fills: [] };
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
-  for (const placement of sheet.placements) if (placement.tile) sceneTileGuides(scene, placement);
+  for (const placement of sheet.placements) if (placement.tile) sceneTileGuides(scene, placement, measure);
   const labels = new SceneLabels(scene, measure, sceneObstacles(kit, sheet, byId, scene, measure));
   const gauges = gaugeScene(sheet);
   for (const t of gauges.texts) labels.reserve(t);

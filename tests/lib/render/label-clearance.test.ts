@@ -105,6 +105,17 @@ function labelClearanceProblems(id: string, n: number, paper: string): string[] 
         if (boxesMeet(label.box, o.box) && overlapMm2(label.poly, o.poly) > 1e-6)
           problems.push(`sheet ${sheet.number}: ${label.what} covers ${o.what}`);
     });
+    // The furniture's own texts (tile captions beside each other, footer, check square) neither cover one
+    // another nor run off the paper.
+    const furniture = scene.texts.filter((t) => t.group === 'furniture').map((t) => element(`"${t.text}"`, textBox(t)));
+    const paper = rect({ xMm: 0, yMm: 0, widthMm: sheet.widthMm, heightMm: sheet.heightMm });
+    furniture.forEach((text, i) => {
+      for (const o of furniture.slice(i + 1))
+        if (boxesMeet(text.box, o.box) && overlapMm2(text.poly, o.poly) > 1e-6)
+          problems.push(`sheet ${sheet.number}: ${text.what} covers ${o.what}`);
+      if (overlapMm2(text.poly, paper) < multiPolygonArea([[text.poly]]) - 1e-6)
+        problems.push(`sheet ${sheet.number}: ${text.what} runs off the paper`);
+    });
   }
   return problems;
 }
