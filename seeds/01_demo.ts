@@ -1,14 +1,15 @@
 /**
  * The invented demo scenario: the Northfield Space Science Lab's outreach office, five
  * fictional schools, teachers and classes (student counts only), kits of the demo models, journal entries in
- * every state, one big-build event and two live links. Runs only on an empty database (scripts/db.ts).
+ * every state, one big-build event, two live links of the office and one per kit. Runs only on an empty
+ * database (scripts/db.ts).
  */
 import type { Knex } from 'knex';
 import { passwordHash } from '../src/lib/auth/password';
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
+import { kitInsertWithLink } from '../src/lib/db/kits';
 import { buildKit } from '../src/lib/kit/build-kit';
-import { ENGINE_VERSION } from '../src/lib/kit/engine-version';
 import { kitFonts } from '../src/lib/kit/fonts.server';
 import { KitInputsSchema, kitRequestOf } from '../src/lib/kit/kit-inputs';
 import { ModelContentSchema } from '../src/lib/geometry/model-schema';
@@ -241,7 +242,10 @@ const DEMO_KIT_DEFAULTS = {
   venue: { kind: 'preset', id: 'classroom' },
 };
 
-/** Saves demo kits the way the kit API does: validated inputs, a real build for the hash and sheet count. */
+/**
+ * Saves demo kits the way the kit API does: validated inputs, a real build for the hash and sheet count, and each
+ * kit's own live link.
+ */
 async function seedKits(
   knex: Knex,
   classBy: (name: string) => { id: string; teacher_id: string },
@@ -254,20 +258,22 @@ async function seedKits(
     const owner = classBy(kit.className);
     const file = new URL(`../content/models/${inputs.modelId}.json`, import.meta.url);
     const content = ModelContentSchema.parse(JSON.parse(readFileSync(file, 'utf8')));
-    const id = randomUUID();
-    const qrUrl = `${siteUrl}/kits/${id}`;
-    const build = await buildKit(kitRequestOf(inputs, content, qrUrl), fonts, { outputs: ['svg'] });
-    await knex('kits').insert({
-      id,
-      class_id: owner.id,
-      teacher_id: owner.teacher_id,
-      title: content.title,
-      model_id: content.id,
-      activity_slug: inputs.activitySlug ?? null,
-      inputs: JSON.stringify({ ...inputs, qrUrl }),
-      engine_version: ENGINE_VERSION,
-      content_hash: build.contentHash,
-      sheet_count: build.layout.sheets.length,
-    });
+    await kitInsertWithLink(
+      {
+        id: randomUUID(),
+        classId: owner.id,
+        teacherId: owner.teacher_id,
+        title: content.title,
+        modelId: content.id,
+        activitySlug: inputs.activitySlug ?? null,
+        inputs,
+      },
+      {
+        requestFor: (qrUrl) => kitRequestOf(inputs, content, qrUrl),
+        build: (request) => buildKit(request, fonts, { outputs: ['svg'] }),
+        siteUrl,
+      },
+      knex,
+    );
   }
 }

@@ -1,13 +1,10 @@
 /**
  * The big-build plan and the printed live link through the running server: the demo's life-size build plan for
  * a coordinator and for a teacher with a confirmed place (not for one without), another venue by preset or
- * typed size, JSON 400s for a bad query and 409 for an event without a kit; a link's bookmark sheet; a kit with
- * its own live link prints the /go/ address in its QR code.
+ * typed size, JSON 400s for a bad query and 409 for an event without a kit; a link's bookmark sheet.
  */
 import { randomBytes } from 'node:crypto';
-import jsQR from 'jsqr';
 import type { Knex } from 'knex';
-import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { pdfPageTexts } from '../fixtures/pdf-text';
@@ -105,30 +102,5 @@ describe('GET /api/links/[id]/poster.pdf', () => {
     expect(await text(res)).toContain(`${BASE_URL}/go/SKEN42`);
     const bad = await api(`/api/links/${link.id}/poster.pdf?format=flyer`, { headers: { cookie: staffCookie } });
     expect(bad.status).toBe(400);
-  });
-});
-
-/** The QR code on a kit's first sheet, decoded by jsQR from the SVG rasterised by sharp (librsvg). */
-async function kitSheetQr(kitId: string, cookie: string): Promise<string | null> {
-  const svg = await api(`/api/kits/${kitId}.svg?sheet=1`, { headers: { cookie } });
-  expect(svg.status).toBe(200);
-  const { data, info } = await sharp(Buffer.from(await svg.arrayBuffer()), { density: 200 })
-    .flatten({ background: '#ffffff' })
-    .ensureAlpha()
-    .raw()
-    .toBuffer({ resolveWithObject: true });
-  return jsQR(new Uint8ClampedArray(data), info.width, info.height)?.data ?? null;
-}
-
-describe('a kit with its own live link', () => {
-  it('prints the /go/ address in its QR code instead of the kit page', async () => {
-    const kit = await knex('kits').first('id', 'teacher_id');
-    const cookie = await userSessionCookie(knex, kit.teacher_id);
-    expect(await kitSheetQr(kit.id, cookie)).toMatch(new RegExp(`/kits/${kit.id}$`));
-    const [link] = await knex('live_links')
-      .insert({ code: 'KT7WQ2', title: 'Kit', target_url: `/kits/${kit.id}`, kit_id: kit.id })
-      .returning('id');
-    expect(await kitSheetQr(kit.id, cookie)).toBe(`${BASE_URL}/go/KT7WQ2`);
-    await knex('live_links').where({ id: link.id }).delete();
   });
 });

@@ -6,9 +6,15 @@
  */
 import type { Knex } from 'knex';
 import type { Actor } from '../auth/actor';
+import type { KitBuild } from '../kit/build-kit';
+import { contentHash } from '../kit/content-hash';
+import { ENGINE_VERSION } from '../kit/engine-version';
 import type { KitInputs } from '../kit/kit-inputs';
+import type { KitRequest } from '../kit/kit-request';
+import { linkAddress, linkCodeNew } from '../links/link-code';
 import { isUuid } from './accounts';
 import { db } from './knex';
+import { liveLinkInsert } from './live-links';
 
 /** What a saved kit keeps to rebuild its files exactly: the inputs as validated and the QR code's URL. */
 export type KitStoredInputs = KitInputs & { qrUrl: string };
@@ -36,10 +42,16 @@ export interface KitInsert {
   title: string;
   modelId: string;
   activitySlug: string | null;
-  inputs: KitStoredInputs;
-  engineVersion: string;
-  contentHash: string;
-  sheetCount: number;
+  /** The validated inputs; the QR code's URL is added on saving. */
+  inputs: KitInputs;
+}
+
+/** How a kit is built before it is saved: its engine request for a QR URL, and a build of that request. */
+export interface KitSaveBuild {
+  requestFor: (qrUrl: string) => KitRequest;
+  build: (request: KitRequest) => Promise<KitBuild>;
+  /** The public base URL of the /go/ address. */
+  siteUrl: string;
 }
 
 function kitSelect(trx: Knex) {
@@ -79,33 +91,56 @@ export async function kitListForActor(actor: Actor, classId?: string, trx: Knex 
   return (await query) as KitRow[];
 }
 
-/** Inserts a kit with a chosen id (the QR code's URL names the id before the row exists). */
-export async function kitInsert(kit: KitInsert, trx: Knex = db()): Promise<void> {
-  await trx('kits').insert({
-    id: kit.id,
-    class_id: kit.classId,
-    teacher_id: kit.teacherId,
-    title: kit.title,
-    model_id: kit.modelId,
-    activity_slug: kit.activitySlug,
-    inputs: JSON.stringify(kit.inputs),
-    engine_version: kit.engineVersion,
-    content_hash: kit.contentHash,
-    sheet_count: kit.sheetCount,
+/**
+ * Builds a kit and saves it with its own live link: a code is drawn first so the build prints its /go/CODE
+ * address, then one transaction stores the link (titled after the kit, sending /go/CODE to the kit's page as a
+ * path, so it follows the site to a new host) and the kit with the hash and sheet count of that build. Should
+ * another link hold the drawn code by then, the link takes a fresh one and the hash is taken again for that
+ * address, so the stored hash is always the hash of what the kit's files print. Returns the code.
+ */
+export async function kitInsertWithLink(kit: KitInsert, how: KitSaveBuild, knex: Knex = db()): Promise<string> {
+  const drawn = linkCodeNew();
+  const request = how.requestFor(linkAddress(how.siteUrl, drawn));
+  const build = await how.build(request);
+  return knex.transaction(async (trx) => {
+    const link = await liveLinkInsert(
+      { title: kit.title, target: `/kits/${kit.id}`, createdBy: kit.teacherId, code: drawn },
+      trx,
+    );
+    const qrUrl = linkAddress(how.siteUrl, link.code);
+    const hash = link.code === drawn ? build.contentHash : await contentHash({ ...request, qrUrl });
+    await trx('kits').insert({
+      id: kit.id,
+      class_id: kit.classId,
+      teacher_id: kit.teacherId,
+      title: kit.title,
+      model_id: kit.modelId,
+      activity_slug: kit.activitySlug,
+      inputs: JSON.stringify({ ...kit.inputs, qrUrl }),
+      engine_version: ENGINE_VERSION,
+      content_hash: hash,
+      sheet_count: build.layout.sheets.length,
+    });
+    // The link row comes first for its code, so it learns its kit once the kit row exists (a foreign key).
+    await trx('live_links').where({ id: link.id }).update({ kit_id: kit.id });
+    return link.code;
   });
 }
 
-/** Renames a kit: the title shown in lists and (as inputs.title) printed on its sheets. */
+/** Renames a kit: the title shown in lists and (as inputs.title) printed on its sheets; its live link follows. */
 export async function kitRename(
   id: string,
   title: string,
   inputs: KitStoredInputs,
   contentHash: string,
-  trx: Knex = db(),
+  knex: Knex = db(),
 ) {
-  await trx('kits')
-    .where({ id })
-    .update({ title, inputs: JSON.stringify(inputs), content_hash: contentHash, updated_at: trx.fn.now() });
+  await knex.transaction(async (trx) => {
+    await trx('kits')
+      .where({ id })
+      .update({ title, inputs: JSON.stringify(inputs), content_hash: contentHash, updated_at: trx.fn.now() });
+    await trx('live_links').where({ kit_id: id }).update({ title, updated_at: trx.fn.now() });
+  });
 }
 
 /** Deletes a kit; true when a row went. */

@@ -50,15 +50,18 @@ export async function liveLinkScan(code: string, trx: Knex = db()): Promise<stri
   return result.rows[0]?.target_url ?? null;
 }
 
-/** Creates a link with a fresh code (a new code on the rare collision). */
+/**
+ * Creates a link with `code` when given and free, else a fresh code (a new code on the rare collision); the
+ * caller reads the code it got from the answer.
+ */
 export async function liveLinkInsert(
-  o: { title: string; target: string; createdBy: string | null; kitId?: string | null },
+  o: { title: string; target: string; createdBy: string | null; kitId?: string | null; code?: string },
   trx: Knex = db(),
 ): Promise<LiveLinkView> {
   for (let attempt = 0; ; attempt++) {
     const rows = await trx('live_links')
       .insert({
-        code: linkCodeNew(),
+        code: attempt === 0 && o.code ? o.code : linkCodeNew(),
         title: o.title,
         target_url: o.target,
         created_by: o.createdBy,

@@ -1,12 +1,15 @@
 /**
- * Server adapter: saving, listing, renaming and duplicating kits for the API and the pages. A kit's id is
- * drawn before it is built so its QR code can point at its own page (`${SITE_URL}/kits/${id}`).
+ * Server adapter: saving, listing, renaming and duplicating kits for the API and the pages. A kit's id and its
+ * live link's code are drawn before it is built, so its QR code prints its own /go/CODE address, which sends a
+ * scan to the kit's page (`/kits/${id}`) until a coordinator re-targets it.
  */
 import { randomUUID } from 'node:crypto';
 import type { Actor } from '../auth/actor';
 import { classOwned } from '../auth/class-access.server';
-import { kitForActor, kitInsert, kitOwned, kitRename, type KitRow, type KitStoredInputs } from '../db/kits';
+import { kitForActor, kitInsertWithLink, kitOwned, kitRename, type KitRow, type KitStoredInputs } from '../db/kits';
+import { liveLinkCodeForKit } from '../db/live-links';
 import { ConflictError, NotFoundError } from '../errors';
+import { linkAddress } from '../links/link-code';
 import { contentHash } from './content-hash';
 import { demoModelById, demoModelResolve } from './demo-models.server';
 import { ENGINE_VERSION } from './engine-version';
@@ -17,9 +20,18 @@ import { kitLinks, type KitView } from './kit-view';
 
 const NOT_FOUND = 'There is no kit with that id among the kits you can open.';
 
-/** The URL a kit's QR code points at. */
+/** The URL of a kit's page. */
 export function kitPageUrl(siteUrl: string, id: string): string {
   return `${siteUrl.replace(/\/+$/, '')}/kits/${id}`;
+}
+
+/**
+ * The address a kit's QR code prints now: its live link's /go/ address, or its page when the link was retired
+ * (or the kit was saved before kits had links).
+ */
+export async function kitQrUrl(row: KitRow, siteUrl: string): Promise<string> {
+  const code = await liveLinkCodeForKit(row.id);
+  return code ? linkAddress(siteUrl, code) : kitPageUrl(siteUrl, row.id);
 }
 
 /** A kit row as the API answers it. */
@@ -76,26 +88,27 @@ export async function kitSave(actor: Actor, classId: string, inputs: KitInputs, 
   if (actor.kind !== 'user') throw new NotFoundError(NOT_FOUND);
   const resolved = demoModelResolve(inputs);
   const id = randomUUID();
-  const stored: KitStoredInputs = { ...inputs, qrUrl: kitPageUrl(siteUrl, id) };
-  const request = kitRequestOf(inputs, resolved, stored.qrUrl);
-  // Building once proves the kit can be made (sheet limit, piece sizes) and counts its sheets.
-  const { build } = await kitOutputBuild(request, 'svg');
-  await kitInsert({
-    id,
-    classId: owned.id,
-    teacherId: actor.userId,
-    title: inputs.title ?? resolved.title,
-    modelId: resolved.id,
-    activitySlug: inputs.activitySlug ?? null,
-    inputs: stored,
-    engineVersion: ENGINE_VERSION,
-    contentHash: build.contentHash,
-    sheetCount: build.layout.sheets.length,
-  });
+  await kitInsertWithLink(
+    {
+      id,
+      classId: owned.id,
+      teacherId: actor.userId,
+      title: inputs.title ?? resolved.title,
+      modelId: resolved.id,
+      activitySlug: inputs.activitySlug ?? null,
+      inputs,
+    },
+    {
+      requestFor: (qrUrl) => kitRequestOf(inputs, resolved, qrUrl),
+      // Building once proves the kit can be made (sheet limit, piece sizes) and counts its sheets.
+      build: async (request) => (await kitOutputBuild(request, 'svg')).build,
+      siteUrl,
+    },
+  );
   return id;
 }
 
-/** A copy of an owned kit, in the same class or another of the teacher's classes, with a new QR URL. */
+/** A copy of an owned kit, in the same class or another of the teacher's classes, with its own live link. */
 export async function kitDuplicate(actor: Actor, row: KitRow, siteUrl: string, classId?: string, title?: string) {
   const { qrUrl: _q, ...inputs } = row.inputs;
   return kitSave(

@@ -31,6 +31,11 @@ export function linkCodeNew(length = LINK_CODE_LENGTH): string {
   return code;
 }
 
+/** The printed address of a code, `${siteUrl}/go/CODE`: what its QR code encodes and what people type. */
+export function linkAddress(siteUrl: string, code: string): string {
+  return new URL(`/go/${code}`, siteUrl).toString();
+}
+
 /** A typed or scanned code in its stored form, or null when it cannot be one. */
 export function linkCodeNormal(typed: string): string | null {
   const code = typed.trim().toUpperCase();

@@ -1,24 +1,21 @@
 import type { APIContext } from 'astro';
 import { siteUrl } from '../../../lib/auth/site-url';
-import { liveLinkCodeForKit } from '../../../lib/db/live-links';
 import type { KitOutput } from '../../../lib/kit/build-kit';
 import { kitFileResponse } from '../../../lib/kit/kit-files.server';
 import { kitOutputBuild } from '../../../lib/kit/kit-build.server';
-import { kitRequestForRow, kitVisible } from '../../../lib/kit/saved-kit.server';
+import { kitQrUrl, kitRequestForRow, kitVisible } from '../../../lib/kit/saved-kit.server';
 import { endpoint } from '../../../lib/http/endpoint';
 import { KIT_VIEWERS } from './_access';
 
 /**
- * A GET route serving one file of a saved kit, rebuilt from its inputs (or cached by content hash). A kit with
- * its own live link prints that /go/CODE address in its QR code instead of the kit page's, so the paper keeps
- * working when the link is re-targeted.
+ * A GET route serving one file of a saved kit, rebuilt from its inputs (or cached by content hash). The QR code
+ * prints the kit's own /go/CODE address, so the paper keeps working when the link is re-targeted; the kit page's
+ * once that link is retired.
  */
 export function kitDownloadRoute(output: KitOutput) {
   return endpoint({ access: KIT_VIEWERS }, async (context: APIContext) => {
     const row = await kitVisible(context.locals.actor, context.params.id ?? '');
-    const code = await liveLinkCodeForKit(row.id);
-    const saved = kitRequestForRow(row);
-    const request = code ? { ...saved, qrUrl: new URL(`/go/${code}`, siteUrl(context.url)).toString() } : saved;
+    const request = { ...kitRequestForRow(row), qrUrl: await kitQrUrl(row, siteUrl(context.url)) };
     const { build } = await kitOutputBuild(request, output, { signal: context.request.signal });
     const q = context.url.searchParams;
     return kitFileResponse(context.request, request, build, output, {
