@@ -5,9 +5,11 @@
  */
 import type { Knex } from 'knex';
 import jsQR from 'jsqr';
+import { PDFDocument } from 'pdf-lib';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
+import { pdfPageTexts } from '../fixtures/pdf-text';
 import { accountCreate, userSessionCookie } from './auth-helpers';
 import { api, BASE_URL } from './harness';
 
@@ -68,5 +70,43 @@ describe('live links', () => {
       .toBuffer({ resolveWithObject: true });
     const decoded = jsQR(new Uint8ClampedArray(data), info.width, info.height);
     expect(decoded?.data).toBe(`${BASE_URL}/go/${link.code}`);
+  });
+
+  // ISO 32000-1:2008, 8.3.2.3: 1/72 in per point; Tabloid is 11 × 17 in (ASME Y14.1, ANSI B), so 792 × 1224 pt.
+  it('prints a poster on Tabloid with the /go/ address and the code, and refuses an unknown size', async () => {
+    const { link } = await (await send('POST', '/api/links', { title: 'Hall poster', target: '/activities' })).json();
+    const res = await api(`/api/links/${link.id}/poster.pdf?format=poster&paper=tabloid`, { headers: { cookie } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-disposition')).toContain(`${link.code}-poster-tabloid.pdf`);
+    const bytes = new Uint8Array(await res.arrayBuffer());
+    const size = (await PDFDocument.load(bytes)).getPage(0).getSize();
+    expect(size.width).toBeCloseTo(792, 2);
+    expect(size.height).toBeCloseTo(1224, 2);
+    const text = (await pdfPageTexts(bytes))[0]!;
+    expect(text).toContain(`${BASE_URL}/go/${link.code}`);
+    expect(text).toContain(`Code ${link.code}`);
+    const bad = await api(`/api/links/${link.id}/poster.pdf?format=poster&paper=b5`, { headers: { cookie } });
+    expect(bad.status).toBe(400);
+    const { error } = await bad.json();
+    expect(error.fields.paper[0]).toContain('letter, a4, tabloid, a3');
+  });
+
+  it('offers the poster and the bookmarks on every print size on the /links page, each a PDF', async () => {
+    await send('POST', '/api/links', { title: 'Listed', target: '/activities' });
+    const html = await (await api('/links', { headers: { cookie } })).text();
+    const hrefs = [...html.matchAll(/href="(\/api\/links\/[0-9a-f-]{36}\/poster\.pdf\?[^"]+)"/g)].map((m) =>
+      m[1]!.replaceAll('&amp;', '&'),
+    );
+    const first = hrefs.filter((h) => h.startsWith(hrefs[0]!.split('?')[0]!));
+    expect(first.map((h) => h.split('?')[1]).sort()).toEqual(
+      ['a3', 'a4', 'letter', 'tabloid']
+        .flatMap((p) => [`format=bookmark&paper=${p}`, `format=poster&paper=${p}`])
+        .sort(),
+    );
+    for (const href of first) {
+      const res = await api(href, { headers: { cookie } });
+      expect(res.status).toBe(200);
+      expect(res.headers.get('content-type')).toBe('application/pdf');
+    }
   });
 });

@@ -1,12 +1,20 @@
 /**
  * The coordinator's live links: create one (title and target, checked with the API's LinkCreateSchema),
  * change a target (the next scan goes there), retire or restore a code, download its QR code (SVG or PNG,
- * level Q) and see its scans by day.
+ * level Q), a sheet of bookmarks or a poster on each print size, and see its scans by day.
  */
 import { useState } from 'react';
 import type { z } from 'zod';
 import { apiSettle } from '../../lib/http/client';
-import { LINK_TARGET_MAX, LINK_TITLE_MAX, LinkCreateSchema, LinkPatchSchema } from '../../lib/links/link-code';
+import { SHEET_SIZES } from '../../lib/layout/sheet-sizes';
+import {
+  linkAddress,
+  LINK_PRINT_PAPERS,
+  LINK_TARGET_MAX,
+  LINK_TITLE_MAX,
+  LinkCreateSchema,
+  LinkPatchSchema,
+} from '../../lib/links/link-code';
 import { FormAlert } from '../auth/FormAlert';
 import { FormField } from '../auth/FormField';
 import { useApiForm } from '../auth/useApiForm';
@@ -151,7 +159,7 @@ function LinkRow({
   const [target, setTarget] = useState(link.target);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
-  const short = new URL(`/go/${link.code}`, site).toString();
+  const short = linkAddress(site, link.code);
 
   async function patch(body: z.input<typeof LinkPatchSchema>) {
     setError(null);
@@ -261,7 +269,30 @@ function LinkRow({
             {link.retired ? 'Restore' : 'Retire'}
           </button>
         </div>
+        <PrintLinks link={link} format="poster" label="Poster PDF" />
+        <PrintLinks link={link} format="bookmark" label="Bookmarks PDF" />
       </td>
     </tr>
+  );
+}
+
+/** One download per print size of a link's poster or bookmark sheet: "Poster PDF: US Letter · A4 · …". */
+function PrintLinks({ link, format, label }: { link: LiveLinkView; format: 'poster' | 'bookmark'; label: string }) {
+  return (
+    <p className="mt-2 text-sm">
+      {label}:{' '}
+      {LINK_PRINT_PAPERS.map((paper, i) => (
+        <span key={paper}>
+          {i > 0 && ' · '}
+          <a
+            href={`/api/links/${link.id}/poster.pdf?format=${format}&paper=${paper}`}
+            download={`${link.code}-${format}-${paper}.pdf`}
+            aria-label={`${label} of ${link.code} on ${SHEET_SIZES[paper].label}`}
+          >
+            {SHEET_SIZES[paper].label}
+          </a>
+        </span>
+      ))}
+    </p>
   );
 }

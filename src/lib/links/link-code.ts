@@ -16,6 +16,12 @@ export const LINK_CODE_PATTERN = new RegExp(`^[${LINK_CODE_ALPHABET}]{6,8}$`);
  */
 export const LINK_QR_ERROR_CORRECTION = 'Q' as const;
 export const LINK_TITLE_MAX = 120;
+/**
+ * The sheet sizes (ids of the engine's SHEET_SIZES) a link prints on: the office sizes of both paper systems
+ * and the next size up of each for a poster on a wall. Each is at least 210 mm wide, so three bookmarks fit.
+ */
+export const LINK_PRINT_PAPERS = ['letter', 'a4', 'tabloid', 'a3'] as const;
+export type LinkPrintPaper = (typeof LINK_PRINT_PAPERS)[number];
 export const LINK_TARGET_MAX = 2000;
 
 /** A random code from crypto.getRandomValues (rejection sampling, so every character is equally likely). */

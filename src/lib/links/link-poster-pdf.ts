@@ -1,14 +1,15 @@
 /**
- * A live link printed: a sheet of bookmarks (three to a page, with cut lines) or a poster (one page), each with
- * the title, the QR code as vector squares (error correction LINK_QR_ERROR_CORRECTION) pointing at the /go/CODE
- * address, and that address and code spelled out under the symbol for people without a camera. Pure: the caller
- * passes the address and the font bytes. Lengths in mm.
+ * A live link printed: a sheet of bookmarks (three to a page, with cut lines) or a poster (one page, its symbol
+ * and type growing with the sheet), each with the title, the QR code as vector squares (error correction
+ * LINK_QR_ERROR_CORRECTION) pointing at the /go/CODE address, and that address and code spelled out under the
+ * symbol for people without a camera. Pure: the caller passes the address and the font bytes. Lengths in mm.
  */
 import { jsPDF } from 'jspdf';
 import { z } from 'zod';
+import { SHEET_SIZES } from '../layout/sheet-sizes';
 import { pdfFontsAdd, pdfFontUse, type PdfFonts } from '../render/pdf-fonts';
 import { qrRects } from '../render/qr';
-import { LINK_QR_ERROR_CORRECTION } from './link-code';
+import { LINK_PRINT_PAPERS, LINK_QR_ERROR_CORRECTION, type LinkPrintPaper } from './link-code';
 
 export const LINK_PRINT_FORMATS = ['bookmark', 'poster'] as const;
 export type LinkPrintFormat = (typeof LINK_PRINT_FORMATS)[number];
@@ -18,15 +19,24 @@ export const LinkPrintQuerySchema = z
     format: z
       .enum(LINK_PRINT_FORMATS, { errorMap: () => ({ message: 'format must be bookmark or poster' }) })
       .default('poster'),
-    paper: z.enum(['letter', 'a4']).default('letter'),
+    paper: z
+      .enum(LINK_PRINT_PAPERS, {
+        errorMap: () => ({ message: `paper must be one of ${LINK_PRINT_PAPERS.join(', ')}` }),
+      })
+      .default('letter'),
   })
   .strict();
 
 /** Bookmarks on one sheet and their size, mm (a usual bookmark is about 2 × 7 in; common practice, no source). */
 export const BOOKMARKS_PER_SHEET = 3;
 export const BOOKMARK_SIZE_MM: [number, number] = [60, 190];
-/** Side of the QR symbol (quiet zone included), mm: at least 2 cm for a phone at arm's length (common practice, no source). */
+/**
+ * Side of the QR symbol (quiet zone included), mm, on a bookmark and on a Letter poster: at least 2 cm for a phone
+ * at arm's length (common practice, no source). A poster on other paper scales its symbol, type and margins with
+ * the sheet's width (every size here is at least as tall for its width as Letter, so the panel still fits).
+ */
 export const QR_SIDE_MM: Record<LinkPrintFormat, number> = { bookmark: 48, poster: 130 };
+const POSTER_BASE_WIDTH_MM = SHEET_SIZES.letter.widthMm;
 
 const INK = '#1b2330';
 
@@ -41,17 +51,25 @@ export interface LinkPrint {
 export function linkPosterPdf(
   link: LinkPrint,
   format: LinkPrintFormat,
-  paper: 'letter' | 'a4',
+  paper: LinkPrintPaper,
   fonts: PdfFonts,
 ): Uint8Array<ArrayBuffer> {
-  const doc = new jsPDF({ unit: 'mm', format: paper, orientation: 'portrait', compress: true, putOnlyUsedFonts: true });
+  const { widthMm, heightMm } = SHEET_SIZES[paper];
+  const doc = new jsPDF({
+    unit: 'mm',
+    format: [widthMm, heightMm],
+    orientation: 'portrait',
+    compress: true,
+    putOnlyUsedFonts: true,
+  });
   pdfFontsAdd(doc, fonts);
   doc.setProperties({ title: link.title, subject: link.address, creator: 'Kitwright' });
   const pageW = doc.internal.pageSize.getWidth();
   const pageH = doc.internal.pageSize.getHeight();
   doc.setTextColor(INK);
   if (format === 'poster') {
-    panel(doc, link, { x: 20, y: 25, w: pageW - 40, h: pageH - 50 }, QR_SIDE_MM.poster, 30);
+    const k = pageW / POSTER_BASE_WIDTH_MM;
+    panel(doc, link, { x: 20 * k, y: 25 * k, w: pageW - 40 * k, h: pageH - 50 * k }, QR_SIDE_MM.poster * k, 30 * k);
   } else {
     const [w, h] = BOOKMARK_SIZE_MM;
     const x0 = (pageW - BOOKMARKS_PER_SHEET * w) / 2;
