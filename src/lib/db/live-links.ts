@@ -35,6 +35,12 @@ const withScans = (trx: Knex) =>
 /**
  * The current target of a live code, counting the scan in the same statement (one indexed lookup on the code,
  * one upsert on the link and day); null for an unknown or retired code.
+ *
+ * Every scan of a code on a day updates the same row, so scans queue on its lock, and with a synchronous commit
+ * each holds the lock until its WAL record is flushed to disk. The statement commits asynchronously instead
+ * (synchronous_commit off for this transaction only: PostgreSQL 15 documentation, 30.4 Asynchronous Commit): the
+ * lock is released at commit and the disk flush follows within wal_writer_delay. A crash of the database server
+ * (not of the app) can lose the scans of that last moment; it cannot corrupt or double them.
  */
 export async function liveLinkScan(code: string, trx: Knex = db()): Promise<string | null> {
   const result = await trx.raw<{ rows: { target_url: string }[] }>(
@@ -43,8 +49,9 @@ export async function liveLinkScan(code: string, trx: Knex = db()): Promise<stri
        INSERT INTO live_link_scans (link_id, day, count)
        SELECT id, (now() AT TIME ZONE 'UTC')::date, 1 FROM l
        ON CONFLICT (link_id, day) DO UPDATE SET count = live_link_scans.count + 1
-     )
-     SELECT target_url FROM l`,
+     ),
+     a AS (SELECT set_config('synchronous_commit', 'off', true))
+     SELECT target_url FROM l, a`,
     [code],
   );
   return result.rows[0]?.target_url ?? null;
