@@ -6,14 +6,13 @@
 import { useState } from 'react';
 import type { z } from 'zod';
 import { apiSettle } from '../../lib/http/client';
-import { SHEET_SIZES } from '../../lib/layout/sheet-sizes';
 import {
   linkAddress,
-  LINK_PRINT_PAPERS,
   LINK_TARGET_MAX,
   LINK_TITLE_MAX,
   LinkCreateSchema,
   LinkPatchSchema,
+  type LinkPrintPaper,
 } from '../../lib/links/link-code';
 import { FormAlert } from '../auth/FormAlert';
 import { FormField } from '../auth/FormField';
@@ -34,9 +33,17 @@ interface Props {
   initialLinks: LiveLinkView[];
   /** The site's public base URL, for the printed /go/CODE address. */
   site: string;
+  /** The sizes a link prints on (LINK_PRINT_PAPERS) with their labels, from the page. */
+  printSizes: PrintSize[];
 }
 
-export default function LiveLinks({ initialLinks, site }: Props) {
+/** A print size: its sheet size id and label ("US Letter"). */
+export interface PrintSize {
+  id: LinkPrintPaper;
+  label: string;
+}
+
+export default function LiveLinks({ initialLinks, site, printSizes }: Props) {
   const [links, setLinks] = useState(initialLinks);
   const [chartFor, setChartFor] = useState<LiveLinkView | null>(null);
   const replace = (link: LiveLinkView) => setLinks((ls) => ls.map((l) => (l.id === link.id ? link : l)));
@@ -82,6 +89,7 @@ export default function LiveLinks({ initialLinks, site }: Props) {
                     key={link.id}
                     link={link}
                     site={site}
+                    printSizes={printSizes}
                     onChanged={replace}
                     onChart={() => setChartFor(link)}
                   />
@@ -147,11 +155,13 @@ function LinkCreateForm({ onCreated }: { onCreated: (link: LiveLinkView) => void
 function LinkRow({
   link,
   site,
+  printSizes,
   onChanged,
   onChart,
 }: {
   link: LiveLinkView;
   site: string;
+  printSizes: PrintSize[];
   onChanged: (link: LiveLinkView) => void;
   onChart: () => void;
 }) {
@@ -269,27 +279,37 @@ function LinkRow({
             {link.retired ? 'Restore' : 'Retire'}
           </button>
         </div>
-        <PrintLinks link={link} format="poster" label="Poster PDF" />
-        <PrintLinks link={link} format="bookmark" label="Bookmarks PDF" />
+        <PrintLinks link={link} sizes={printSizes} format="poster" label="Poster PDF" />
+        <PrintLinks link={link} sizes={printSizes} format="bookmark" label="Bookmarks PDF" />
       </td>
     </tr>
   );
 }
 
 /** One download per print size of a link's poster or bookmark sheet: "Poster PDF: US Letter · A4 · …". */
-function PrintLinks({ link, format, label }: { link: LiveLinkView; format: 'poster' | 'bookmark'; label: string }) {
+function PrintLinks({
+  link,
+  sizes,
+  format,
+  label,
+}: {
+  link: LiveLinkView;
+  sizes: PrintSize[];
+  format: 'poster' | 'bookmark';
+  label: string;
+}) {
   return (
     <p className="mt-2 text-sm">
       {label}:{' '}
-      {LINK_PRINT_PAPERS.map((paper, i) => (
-        <span key={paper}>
+      {sizes.map((size, i) => (
+        <span key={size.id}>
           {i > 0 && ' · '}
           <a
-            href={`/api/links/${link.id}/poster.pdf?format=${format}&paper=${paper}`}
-            download={`${link.code}-${format}-${paper}.pdf`}
-            aria-label={`${label} of ${link.code} on ${SHEET_SIZES[paper].label}`}
+            href={`/api/links/${link.id}/poster.pdf?format=${format}&paper=${size.id}`}
+            download={`${link.code}-${format}-${size.id}.pdf`}
+            aria-label={`${label} of ${link.code} on ${size.label}`}
           >
-            {SHEET_SIZES[paper].label}
+            {size.label}
           </a>
         </span>
       ))}
