@@ -2,7 +2,8 @@
  * `npm run bench:kits`: the full PDF kit (patterns → layout → PDF) of each demo model, timed N times after a
  * warm-up, with min / median / max and the peak resident memory of the process; then a cylinder at 16, 64 and
  * 256 facets to show how time grows with facet count. A script, not a test: it prints figures and checks
- * the issue-4 targets (Skein probe 1:20 on Letter ≤ 100 ms median, ≤ 200 MB peak RSS) without failing CI.
+ * the issue-4 targets (Skein probe 1:20 on Letter ≤ 100 ms median, ≤ 200 MB peak RSS) and the instructions
+ * pages' share (≤ 50 ms, issue 10) without failing CI.
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -11,6 +12,7 @@ import type { KitOutput } from '../../src/lib/kit/build-kit';
 import { KitRequestSchema } from '../../src/lib/kit/kit-request';
 import type { KitRequestInput } from '../../src/lib/kit/kit-request';
 import { kitFonts } from '../../src/lib/kit/fonts.server';
+import { pdfKit } from '../../src/lib/render/pdf-kit';
 
 const RUNS = Number(process.env.KW_BENCH_RUNS ?? 30);
 const WARMUP = 5;
@@ -66,6 +68,7 @@ const defaultScale: Record<string, number> = { 'skein-probe': 20, 'wren-3u': 2, 
 console.log(`Kit benchmark: ${RUNS} runs after ${WARMUP} warm-up, Node ${process.version}, PDF only unless noted\n`);
 let skeinMedian = NaN;
 let skeinPeakRssMb = NaN;
+let instructionsMedian = NaN;
 // The headline case runs first, so the process's peak memory while building it is measured on its own.
 models.sort((a, b) => Number(b.id === 'skein-probe') - Number(a.id === 'skein-probe'));
 for (const m of models) {
@@ -87,6 +90,28 @@ if (skein) {
     'skein-probe 1:20 Letter, all outputs',
     { ...base, model: skein.model, scaleDenominator: 20 } as KitRequestInput,
     ['pdf', 'svg', 'stl', 'json'],
+  );
+  // What the instructions pages add: the PDF of the same layout with its sheets left out is the instructions
+  // pages alone, document and font subset included, so an upper bound of their share of the full kit's time.
+  const fonts = await kitFonts(root);
+  const { layout } = await buildKit(
+    KitRequestSchema.parse({ ...base, model: skein.model, scaleDenominator: 20 }),
+    fonts,
+    { outputs: [] },
+  );
+  const instructionsOnly = { ...layout, sheets: [] };
+  for (let i = 0; i < WARMUP; i++) pdfKit(instructionsOnly, fonts);
+  const times: number[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    const t0 = performance.now();
+    pdfKit(instructionsOnly, fonts);
+    times.push(performance.now() - t0);
+  }
+  times.sort((a, b) => a - b);
+  instructionsMedian = times[Math.floor(times.length / 2)]!;
+  console.log(
+    `${'skein-probe 1:20, instructions only'.padEnd(34)} min ${times[0]!.toFixed(1).padStart(7)} ms  median ` +
+      `${instructionsMedian.toFixed(1).padStart(7)} ms  max ${times[times.length - 1]!.toFixed(1).padStart(7)} ms`,
   );
   await bench('skein-probe 1:20 Letter, 12 copies', {
     ...base,
@@ -112,5 +137,6 @@ console.log(
 );
 console.log(
   `Targets: Skein 1:20 Letter median ${skeinMedian.toFixed(1)} ms (≤ 100 ms: ${skeinMedian <= 100 ? 'met' : 'MISSED'}), ` +
-    `peak RSS ${skeinPeakRssMb.toFixed(0)} MB (≤ 200 MB: ${skeinPeakRssMb <= 200 ? 'met' : 'MISSED'})`,
+    `peak RSS ${skeinPeakRssMb.toFixed(0)} MB (≤ 200 MB: ${skeinPeakRssMb <= 200 ? 'met' : 'MISSED'}), ` +
+    `instructions pages at most ${instructionsMedian.toFixed(1)} ms (≤ 50 ms: ${instructionsMedian <= 50 ? 'met' : 'MISSED'})`,
 );

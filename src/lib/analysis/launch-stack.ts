@@ -13,6 +13,7 @@
  */
 import { z } from 'zod';
 import { InputError } from '../errors';
+import { refineValid } from '../validation';
 import { bodyBaseM } from '../geometry/body-shape';
 import { launchStackParts, type StackPart, type StackPartRole } from '../geometry/launch-stack';
 import { BodySchema, LaunchStackSchema, MODEL_LENGTH_MAX_M } from '../geometry/model-schema';
@@ -48,20 +49,22 @@ export const FairingSchema = z
   })
   .strict();
 
-export const LaunchStackInputSchema = z
-  .object({
-    /** The probe's body (stowed), as the model engine describes it. */
-    body: BodySchema,
-    stack: LaunchStackSchema,
-    probeMassKg: massKg('the probe mass'),
-    /** Height of one probe's centre of mass above its own base, m; mid-height when left out. */
-    probeCentreOfMassM: z.number().finite().min(0).max(MODEL_LENGTH_MAX_M).optional(),
-    ringMassKg: massKg('the ring mass').default(0),
-    adapterMassKg: massKg('the adapter mass'),
-    fairing: FairingSchema,
-  })
-  .strict()
-  .superRefine((v, ctx) => {
+// The height check runs only on a valid body: bodyBaseM walks every facet, so it must not see `facets: 1e308`.
+export const LaunchStackInputSchema = refineValid(
+  z
+    .object({
+      /** The probe's body (stowed), as the model engine describes it. */
+      body: BodySchema,
+      stack: LaunchStackSchema,
+      probeMassKg: massKg('the probe mass'),
+      /** Height of one probe's centre of mass above its own base, m; mid-height when left out. */
+      probeCentreOfMassM: z.number().finite().min(0).max(MODEL_LENGTH_MAX_M).optional(),
+      ringMassKg: massKg('the ring mass').default(0),
+      adapterMassKg: massKg('the adapter mass'),
+      fairing: FairingSchema,
+    })
+    .strict(),
+  (v, ctx) => {
     const h = bodyBaseM(v.body).heightM;
     if (v.probeCentreOfMassM !== undefined && v.probeCentreOfMassM > h) {
       ctx.addIssue({
@@ -70,7 +73,8 @@ export const LaunchStackInputSchema = z
         message: `the probe's centre of mass (${v.probeCentreOfMassM} m) must lie within its height (${h} m)`,
       });
     }
-  });
+  },
+);
 export type LaunchStackInput = z.infer<typeof LaunchStackInputSchema>;
 export type Fairing = z.infer<typeof FairingSchema>;
 

@@ -11,12 +11,12 @@ import {
   type BuildGradeBand,
 } from '../geometry/buildability';
 import { partSubstituteUse, type PartSubstitute } from '../geometry/part-substitutes';
-import type { Piece, Vec2Mm } from '../geometry/types';
+import type { Piece } from '../geometry/types';
 import { polygonArea } from '../geometry/vec';
 import { CUT_GAUGE_HEIGHT_MM } from '../layout/cut-gauge';
 import { labelCandidatePoints } from '../render/label-placement';
 import { placementApply, placementBoundsOfPoints } from '../layout/placement';
-import type { KitLayout, LaidOutSheet, Placement } from '../layout/types';
+import type { KitLayout, LaidOutSheet, Placement, SheetVec2Mm } from '../layout/types';
 
 /** A spot on a sheet as a share of its width and height from the top-left corner (0…1), for an overlay. */
 export interface SheetSpot {
@@ -91,8 +91,8 @@ function sheetNotes(
   substitutes: Map<string, PartSubstitute>,
   band: BuildGradeBand,
 ): SheetNote[] {
-  const spots = new Map<string, { label: string; at: Vec2Mm[] }>();
-  const add = (id: string, label: string, at: Vec2Mm) => {
+  const spots = new Map<string, { label: string; at: SheetVec2Mm[] }>();
+  const add = (id: string, label: string, at: SheetVec2Mm) => {
     const entry = spots.get(id) ?? { label, at: [] };
     entry.at.push(at);
     spots.set(id, entry);
@@ -109,7 +109,8 @@ function sheetNotes(
     add(g.partId, g.label, [g.xMm + (g.toMm - g.fromMm) / 2, g.yMm + CUT_GAUGE_HEIGHT_MM / 2]);
   }
   const notes = [...spots].map(([pieceId, { label, at }]) => ({ pieceId, label, ...words.get(pieceId)!, at }));
-  const first = (n: { at: Vec2Mm[] }) => n.at.reduce((a, b) => (b[1] < a[1] || (b[1] === a[1] && b[0] < a[0]) ? b : a));
+  const first = (n: { at: SheetVec2Mm[] }) =>
+    n.at.reduce((a, b) => (b[1] < a[1] || (b[1] === a[1] && b[0] < a[0]) ? b : a));
   notes.sort((a, b) => first(a)[1] - first(b)[1] || first(a)[0] - first(b)[0]);
   return notes.map((n, i) => ({
     number: i + 1,
@@ -126,9 +127,9 @@ function sheetNotes(
  * edges (labelCandidatePoints), or for a tile, the best such point of the largest face its window shows, else
  * the middle of what the window shows.
  */
-export function pieceSpotMm(placement: Placement, piece: Pick<Piece, 'hinge' | 'outlineMm'>): Vec2Mm {
+export function pieceSpotMm(placement: Placement, piece: Pick<Piece, 'hinge' | 'outlineMm'>): SheetVec2Mm {
   const window = placement.tile?.windowMm;
-  const inWindow = ([x, y]: Vec2Mm) =>
+  const inWindow = ([x, y]: SheetVec2Mm) =>
     !window ||
     (x >= window.xMm && x <= window.xMm + window.widthMm && y >= window.yMm && y <= window.yMm + window.heightMm);
   const faces = [...piece.hinge.faces].sort(

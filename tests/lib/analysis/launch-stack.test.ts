@@ -103,6 +103,15 @@ describe('launchStackAnalyse', () => {
     expect(drum.maxRadiusM).toBeCloseTo(1, 12);
   });
 
+  it('answers facets: 1e308 with the facet bound, never walking the facets (the fuzz suite found it hanging)', () => {
+    const r = LaunchStackInputSchema.safeParse({
+      ...base,
+      body: { kind: 'cylinder', diameterM: 1, heightM: 1, facets: 1e308 },
+      probeCentreOfMassM: 0.5,
+    });
+    expect(r.error?.issues.map((i) => i.message)).toEqual(['a cylinder has at most 256 facets']);
+  });
+
   it('refuses bad numbers and keeps the saved result in the shared shape', () => {
     expect(LaunchStackInputSchema.safeParse({ ...base, probeMassKg: -1 }).success).toBe(false);
     expect(LaunchStackInputSchema.safeParse({ ...base, stack: { ...base.stack, count: 0 } }).success).toBe(false);

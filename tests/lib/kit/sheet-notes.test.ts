@@ -5,7 +5,7 @@
  * goes is checked with an even-odd point-in-polygon test written here, on the placed outline.
  */
 import { describe, expect, test } from 'vitest';
-import type { Vec2Mm } from '../../../src/lib/geometry/types';
+import type { SheetVec2Mm } from '../../../src/lib/layout/types';
 import { buildKit } from '../../../src/lib/kit/build-kit';
 import { KitRequestSchema } from '../../../src/lib/kit/kit-request';
 import { kitSheetNotes, pieceSpotMm } from '../../../src/lib/kit/sheet-notes';
@@ -31,7 +31,7 @@ async function layoutOf(modelId: string, scaleDenominator: number, gradeBand: st
 }
 
 /** Even-odd ray casting (O'Rourke, Computational Geometry in C, §7.4). */
-function inside([x, y]: Vec2Mm, poly: readonly Vec2Mm[]): boolean {
+function inside([x, y]: SheetVec2Mm, poly: readonly SheetVec2Mm[]): boolean {
   let odd = false;
   for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
     const [a, b] = [poly[i]!, poly[j]!];
@@ -65,7 +65,7 @@ describe('kitSheetNotes', () => {
       const piece = layout.pieces.find((p) => p.id === note.pieceId)!;
       const outline = piece.outlineMm.map((p) => placementApply(placement, p));
       expect(note.at).toHaveLength(1);
-      const mm: Vec2Mm = [note.at[0]!.x * LETTER_MM[0], note.at[0]!.y * LETTER_MM[1]];
+      const mm: SheetVec2Mm = [note.at[0]!.x * LETTER_MM[0], note.at[0]!.y * LETTER_MM[1]];
       expect(inside(mm, outline), `${note.label} mark on its piece`).toBe(true);
     }
   });
