@@ -102,6 +102,27 @@ describe('fold preview', () => {
     expect(await live.textContent()).toContain(tabs![1]);
   });
 
+  it('walks on past the pieces to the rods that replace thin booms, as the PDF instructions do', async () => {
+    const { page, errors } = await pageNew(browser);
+    await previewOpen(page);
+    const steps = page.locator('[data-testid="fold-preview"] ol > li');
+    const stepCount = await steps.count();
+    await steps.last().getByRole('button').click();
+    // Issue 10: the Skein at 1:20 has skewers for its thin booms, each a step of its own after the pieces.
+    await page.waitForFunction(
+      (n) =>
+        /^Step (\d+) of \1: .+\. Cut .+ to [\d.]+ mm against its gauge on the sheet/.test(
+          document.querySelector('[data-testid="step-description"]')?.textContent ?? '',
+        ) && document.querySelector('[data-testid="step-description"]')!.textContent!.startsWith(`Step ${n} `),
+      stepCount,
+    );
+    expect(await page.getByRole('button', { name: 'Next step' }).isDisabled()).toBe(true);
+    expect(await page.locator('[aria-current="step"]').textContent()).toMatch(
+      new RegExp(`^${stepCount}\\. .+ — no tabs$`),
+    );
+    expect(errors).toEqual([]);
+  });
+
   it('shows the flat pieces and the steps when WebGL is unavailable', async () => {
     const { page, errors } = await pageNew(browser);
     await page.addInitScript(() => {
@@ -117,6 +138,15 @@ describe('fold preview', () => {
     await page.getByRole('button', { name: 'Next step' }).click();
     await page.waitForFunction(() =>
       /^Step 2 of \d+: Top cap/.test(document.querySelector('[data-testid="step-description"]')?.textContent ?? ''),
+    );
+    // The rods are listed beside the flat pieces, the one of the last step marked when it is reached.
+    const rods = page.getByTestId('fallback-rods').locator('li');
+    expect(await rods.count()).toBeGreaterThan(0);
+    expect(await page.getByTestId('fallback-rods').locator('[aria-current="step"]').count()).toBe(0);
+    await page.locator('[data-testid="fold-preview"] ol > li').last().getByRole('button').click();
+    await page.waitForSelector('[data-testid="fallback-rods"] li:last-child[aria-current="step"]');
+    expect(await page.getByTestId('step-description').textContent()).toContain(
+      ((await rods.last().textContent()) ?? '').split(':')[0]!,
     );
     expect(errors).toEqual([]);
   });

@@ -36,7 +36,9 @@ export default function AssemblyStepList({ steps, stepIndex, onPrevious, onNext,
         </button>
       </div>
       <div className="rounded-lg bg-fold-light p-3">
-        <p className="font-semibold">Glue {tabNumbersLabel(step.tabNumbers)}</p>
+        <p className="font-semibold">
+          {step.rodPartId ? 'No tabs: cut the rod, then glue it on' : `Glue ${tabNumbersLabel(step.tabNumbers)}`}
+        </p>
         <p aria-live="polite" data-testid="step-description" className="mt-1">
           {step.description}
         </p>

@@ -1,7 +1,6 @@
 import { useCallback, useMemo, useRef, type KeyboardEvent, type RefObject } from 'react';
 import type { Piece } from '../../lib/geometry/types';
-import type { PreviewRod } from './fold-preview-props';
-import type { AssemblyStep } from '../../lib/preview/assembly-steps';
+import type { AssemblyRod, AssemblyStep } from '../../lib/preview/assembly-steps';
 import FoldScene from './FoldScene';
 import type { FrameShown } from './SceneReadySignal';
 import SceneCanvas from './SceneCanvas';
@@ -10,7 +9,7 @@ import { viewCamera, viewFrame } from './view-frame';
 
 export interface FoldCanvasProps {
   pieces: readonly Piece[];
-  rods: readonly PreviewRod[];
+  rods: readonly AssemblyRod[];
   foldPercent: number;
   foldWholeKit: boolean;
   /** The step shown: its piece folds by the slider, earlier pieces stand built, later ones are ghosted. */

@@ -1,5 +1,5 @@
 import { lazy, Suspense, useEffect, useId, useMemo, useRef, useState } from 'react';
-import { assemblySteps } from '../../lib/preview/assembly-steps';
+import { assemblySteps, type AssemblyRod } from '../../lib/preview/assembly-steps';
 import type { FoldPreviewProps } from './fold-preview-props';
 import type { ViewActions } from '../../lib/preview/view-keys';
 import useFoldProgress from './useFoldProgress';
@@ -12,6 +12,8 @@ import StillFallback from './StillFallback';
 
 // three.js and react-three-fiber live in this chunk, fetched only once WebGL is known to work.
 const FoldCanvas = lazy(() => import('./FoldCanvas'));
+// One empty list for every render, so the steps are not recomputed when a page passes no rods.
+const NO_RODS: AssemblyRod[] = [];
 
 /**
  * The 3D fold-along preview island: the model folding from flat sheet to part, assembly steps with their
@@ -22,10 +24,11 @@ export default function FoldPreview({
   scaleDenominator,
   pieces,
   boomScale,
-  rods = [],
+  rods = NO_RODS,
   initialFoldPercent = 100,
 }: FoldPreviewProps) {
-  const steps = useMemo(() => assemblySteps(pieces), [pieces]);
+  // The same steps as the PDF's instructions: the pieces, then one step per rod (instructionsSteps).
+  const steps = useMemo(() => assemblySteps(pieces, rods), [pieces, rods]);
   const progress = useFoldProgress(steps.length, initialFoldPercent);
   const [webgl, setWebgl] = useState<boolean | null>(null);
   useEffect(() => setWebgl(webglAvailable()), []);
@@ -38,7 +41,7 @@ export default function FoldPreview({
       <div className="flex flex-col gap-3">
         <div className="h-[28rem] overflow-hidden rounded-lg border border-ink/15 bg-paper">
           {webgl === false ? (
-            <StillFallback pieces={pieces} step={step} />
+            <StillFallback pieces={pieces} rods={rods} step={step} />
           ) : webgl ? (
             <Suspense fallback={<p className="p-4 text-ink-soft">Loading the 3D view…</p>}>
               <FoldCanvas

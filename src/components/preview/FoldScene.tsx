@@ -1,9 +1,8 @@
 import type { RefObject } from 'react';
 import type { Piece } from '../../lib/geometry/types';
-import { assemblyStepPieceState, type AssemblyStep } from '../../lib/preview/assembly-steps';
+import { assemblyStepPieceState, type AssemblyRod, type AssemblyStep } from '../../lib/preview/assembly-steps';
 import PieceMesh, { type PieceState } from './PieceMesh';
 import RodMesh from './RodMesh';
-import type { PreviewRod } from './fold-preview-props';
 import ViewRig from './ViewRig';
 import SceneReadySignal, { type FrameShown } from './SceneReadySignal';
 import type { ViewActions } from '../../lib/preview/view-keys';
@@ -12,7 +11,7 @@ import type { ViewFrame } from './view-frame';
 interface Props {
   pieces: readonly Piece[];
   /** Rods standing in for booms too thin for paper, drawn in place. */
-  rods: readonly PreviewRod[];
+  rods: readonly AssemblyRod[];
   foldPercent: number;
   /** Fold every piece by the slider; otherwise only the current step's, the others shown assembled. */
   foldWholeKit: boolean;
@@ -26,7 +25,10 @@ interface Props {
 
 const stateOf = (piece: Piece, step: AssemblyStep | undefined): PieceState => assemblyStepPieceState(step, piece.id);
 
-/** The lit scene inside the canvas: every piece folded by the slider, the orbit rig and the ready signal. */
+/**
+ * The lit scene inside the canvas: every piece folded by the slider, each rod in place (teal at its step),
+ * the orbit rig and the ready signal.
+ */
 export default function FoldScene({
   pieces,
   rods,
@@ -53,7 +55,14 @@ export default function FoldScene({
         />
       ))}
       {rods.map((r) => (
-        <RodMesh key={r.partId} name={r.partId} fromMm={r.fromMm} toMm={r.toMm} diameterMm={r.diameterMm} />
+        <RodMesh
+          key={r.partId}
+          name={r.partId}
+          fromMm={r.fromMm}
+          toMm={r.toMm}
+          diameterMm={r.diameterMm}
+          state={assemblyStepPieceState(step, r.partId)}
+        />
       ))}
       <ViewRig frame={frame} actionsRef={actionsRef} viewVersion={viewVersion} />
       <SceneReadySignal foldPercent={foldPercent} viewVersion={viewVersion} onRendered={onRendered} />

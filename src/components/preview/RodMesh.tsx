@@ -1,7 +1,8 @@
 import { useEffect, useMemo } from 'react';
 import { CylinderGeometry, Quaternion, Vector3 } from 'three';
 import type { Vec3Mm } from '../../lib/geometry/types';
-import { ROD_MATERIAL } from './piece-materials';
+import type { AssemblyPieceState } from '../../lib/preview/assembly-steps';
+import { ROD_MATERIALS } from './piece-materials';
 
 interface Props {
   /** The rod's name (the boom it stands for), for the scene graph. */
@@ -10,10 +11,12 @@ interface Props {
   toMm: Vec3Mm;
   /** Drawn diameter, mm at kit scale. */
   diameterMm: number;
+  /** Glued on already (wood), at its step (teal, like the current piece), or still to come (ghosted). */
+  state: AssemblyPieceState;
 }
 
 /** A straw, skewer or dowel standing in for a boom too thin for paper: a plain cylinder from foot to tip. */
-export default function RodMesh({ name, fromMm, toMm, diameterMm }: Props) {
+export default function RodMesh({ name, fromMm, toMm, diameterMm, state }: Props) {
   const pose = useMemo(() => {
     const from = new Vector3(...fromMm);
     const axis = new Vector3(...toMm).sub(from);
@@ -33,7 +36,8 @@ export default function RodMesh({ name, fromMm, toMm, diameterMm }: Props) {
       position={pose.position}
       quaternion={pose.quaternion}
       geometry={geometry}
-      material={ROD_MATERIAL}
+      material={ROD_MATERIALS[state]}
+      renderOrder={state === 'later' ? 1 : 0}
     />
   );
 }

@@ -1,10 +1,13 @@
 import { useMemo } from 'react';
 import type { Piece, Vec2Mm } from '../../lib/geometry/types';
 import { LINE_STYLES } from '../../lib/render/line-styles';
-import { assemblyStepPieceState, type AssemblyStep } from '../../lib/preview/assembly-steps';
+import { assemblyStepPieceState, type AssemblyRod, type AssemblyStep } from '../../lib/preview/assembly-steps';
+import { buildabilityMm } from '../../lib/geometry/buildability';
 
 interface Props {
   pieces: readonly Piece[];
+  /** The rods glued on after the pieces, each at its own step. */
+  rods: readonly AssemblyRod[];
   step: AssemblyStep | undefined;
 }
 
@@ -48,8 +51,11 @@ function shelfLayout(pieces: readonly Piece[]) {
 const path = (pts: readonly Vec2Mm[], dx: number, dy: number) =>
   pts.map(([px, py], i) => `${i ? 'L' : 'M'}${(px + dx).toFixed(2)} ${(dy - py).toFixed(2)}`).join('') + 'Z';
 
-/** What shows instead of the 3D view when WebGL is off: the flat pieces, the current step's in teal. */
-export default function StillFallback({ pieces, step }: Props) {
+/**
+ * What shows instead of the 3D view when WebGL is off: the flat pieces, the current step's in teal, and the
+ * rods to cut, the current step's marked.
+ */
+export default function StillFallback({ pieces, rods, step }: Props) {
   const layout = useMemo(() => (pieces.length > 0 ? shelfLayout(pieces) : null), [pieces]);
   return (
     <div className="flex h-full flex-col gap-2 p-3" data-testid="still-fallback">
@@ -87,6 +93,22 @@ export default function StillFallback({ pieces, step }: Props) {
             </g>
           ))}
         </svg>
+      )}
+      {rods.length > 0 && (
+        <ul className="text-sm" aria-label="Rods to cut and glue on after the pieces" data-testid="fallback-rods">
+          {rods.map((r) => {
+            const current = assemblyStepPieceState(step, r.partId) === 'current';
+            return (
+              <li
+                key={r.partId}
+                aria-current={current ? 'step' : undefined}
+                className={current ? 'rounded bg-fold-light px-2 font-semibold' : 'px-2'}
+              >
+                {r.label}: {buildabilityMm(r.lengthMm)}
+              </li>
+            );
+          })}
+        </ul>
       )}
     </div>
   );

@@ -1,12 +1,6 @@
 import type { Piece } from '../../lib/geometry/types';
 import type { BoomScale } from '../../lib/preview/boom-scale';
-import type { PartSubstitute } from '../../lib/geometry/part-substitutes';
-
-/** A rod standing in for a boom too thin for paper, as the preview draws it. */
-export type PreviewRod = Pick<
-  Extract<PartSubstitute, { kind: 'boom-stock' }>,
-  'partId' | 'fromMm' | 'toMm' | 'diameterMm'
->;
+import type { AssemblyRod } from '../../lib/preview/assembly-steps';
 
 /**
  * What a page passes to the FoldPreview island: plain JSON computed on the server from src/lib (Astro
@@ -21,8 +15,11 @@ export interface FoldPreviewProps {
   pieces: Piece[];
   /** boomScale(model, scaleDenominator): the span beside a person and a classroom. */
   boomScale: BoomScale;
-  /** Straws, skewers or dowels that stand in for booms too thin for paper; none when left out. */
-  rods?: PreviewRod[];
+  /**
+   * assemblyRods(substitutes): straws, skewers or dowels that stand in for booms too thin for paper, each
+   * with a step of its own after the pieces, as in the PDF's instructions; none when left out.
+   */
+  rods?: AssemblyRod[];
   /** Where the fold slider starts, 0 (flat) … 100 (folded); 100 when left out. */
   initialFoldPercent?: number;
 }

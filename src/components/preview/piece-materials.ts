@@ -34,5 +34,12 @@ export const PIECE_MATERIALS = {
   edgeLater: new LineBasicMaterial({ color: '#6b7482', transparent: true, opacity: 0.35 }),
 } as const;
 
-/** A rod (straw, skewer, dowel) that stands in for a boom too thin for paper: wood-coloured, matt. */
-export const ROD_MATERIAL = new MeshStandardMaterial({ color: '#c8a46a', roughness: 0.7 });
+/**
+ * A rod (straw, skewer, dowel) that stands in for a boom too thin for paper: wood-coloured and matt once
+ * glued on, teal like the current piece at its own step, a faint ghost before it.
+ */
+export const ROD_MATERIALS = {
+  built: new MeshStandardMaterial({ color: '#c8a46a', roughness: 0.7 }),
+  current: PIECE_MATERIALS.current,
+  later: PIECE_MATERIALS.later,
+} as const;

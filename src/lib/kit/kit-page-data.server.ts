@@ -7,7 +7,7 @@ import { modelPatterns } from '../geometry/model-patterns';
 import { sheetPackKit } from '../layout/sheet-packer';
 import { sheetSize } from '../layout/sheet-sizes';
 import { boomScale } from '../preview/boom-scale';
-import { assemblySteps } from '../preview/assembly-steps';
+import { assemblyRods, assemblySteps } from '../preview/assembly-steps';
 import type { KitRow } from '../db/kits';
 import { kitVenue } from './kit-inputs';
 import { kitSummary } from './kit-summary';
@@ -33,6 +33,7 @@ export function kitPageData(row: KitRow) {
     substitutes,
     paperGsm: request.paperGsm,
   });
+  const rods = assemblyRods(substitutes);
   const sheetLabel = sheetSize(request.sheetSizeId).label;
   return {
     view,
@@ -46,17 +47,14 @@ export function kitPageData(row: KitRow) {
       venue,
       units: request.units,
     }),
-    steps: assemblySteps(
-      pieces,
-      substitutes.flatMap((s) => (s.kind === 'boom-stock' ? [s] : [])),
-    ),
+    steps: assemblySteps(pieces, rods),
     threads,
     materials: kitMaterials({ threads, substitutes, gradeBand: request.gradeBand, units: request.units }),
     preview: {
       title: view.title,
       scaleDenominator: request.scaleDenominator,
       pieces,
-      rods: substitutes.flatMap((s) => (s.kind === 'boom-stock' ? [s] : [])),
+      rods,
       boomScale: boomScale(request.model, request.scaleDenominator, request.units),
     },
   };

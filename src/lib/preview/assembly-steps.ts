@@ -24,8 +24,10 @@ export interface AssemblyStep {
   /** The piece added (or still being glued) in this step. */
   pieceIds: string[];
   pieceLabels: string[];
-  /** Pieces fully or partly assembled before this step, in build order. */
+  /** Pieces fully or partly assembled before this step, in build order, then the rods already glued on. */
   builtPieceIds: string[];
+  /** The rod glued on in this step (its boom's partId); only on a rod's step. */
+  rodPartId?: string;
   /** Tab numbers to glue in this step, ascending, at most ASSEMBLY_STEP_JOINTS_MAX; each joint in one step. */
   tabNumbers: number[];
   /** What to do, in one or two plain sentences with the tab numbers (the description without its prefix). */
@@ -37,10 +39,15 @@ export interface AssemblyStep {
 /** Whether a piece is already built, being added, or still to come at a step. */
 export type AssemblyPieceState = 'built' | 'current' | 'later';
 
-/** The state of a piece at a step (no step: every piece is built). */
+/** The rods among a kit's substitutes, in order: the ones that get a step of their own. */
+export function assemblyRods(substitutes: readonly PartSubstitute[]): AssemblyRod[] {
+  return substitutes.filter((s): s is AssemblyRod => s.kind === 'boom-stock');
+}
+
+/** The state of a piece, or of a rod by its partId, at a step (no step: everything is built). */
 export function assemblyStepPieceState(step: AssemblyStep | undefined, pieceId: string): AssemblyPieceState {
   if (!step) return 'built';
-  if (step.pieceIds.includes(pieceId)) return 'current';
+  if (step.pieceIds.includes(pieceId) || step.rodPartId === pieceId) return 'current';
   return step.builtPieceIds.includes(pieceId) ? 'built' : 'later';
 }
 
@@ -90,7 +97,8 @@ export function assemblySteps(pieces: readonly Piece[], rods: readonly AssemblyR
       number,
       pieceIds: [],
       pieceLabels: [rod.label],
-      builtPieceIds: order.map((p) => p.id),
+      builtPieceIds: [...order.map((p) => p.id), ...rods.slice(0, k).map((r) => r.partId)],
+      rodPartId: rod.partId,
       tabNumbers: [],
       action,
       description: `Step ${number} of ${total}: ${rod.label}. ${action}`,

@@ -5,7 +5,7 @@
  * as the steps need. The steps come from the same module as the 3D preview's and the pieces' step badges.
  */
 import type { KitLayout, RectMm } from '../layout/types';
-import { assemblySteps, type AssemblyRod } from '../preview/assembly-steps';
+import { assemblyRods, assemblySteps, type AssemblyStep } from '../preview/assembly-steps';
 import { FOLD_WORDS, foldWordsLine } from './fold-words';
 import type { LabelMeasure } from './label-placement';
 import { sceneWrapWords } from './scene-footer';
@@ -42,6 +42,11 @@ export const INSTRUCTIONS_MATERIALS_TITLE = 'You need';
 /** Heading of the cautions on the first instructions page. */
 export const INSTRUCTIONS_CAUTIONS_TITLE = 'Be careful';
 
+/** The steps the instructions print, rods last: what the 3D preview walks too (FoldPreview). */
+export function instructionsSteps(kit: Pick<KitLayout, 'pieces' | 'substitutes'>): AssemblyStep[] {
+  return assemblySteps(kit.pieces, assemblyRods(kit.substitutes));
+}
+
 /** The instructions pages of a kit on pages of `page` size, text measured by `measure`. */
 export function instructionsPages(
   kit: Pick<KitLayout, 'title' | 'pieces' | 'substitutes' | 'materials' | 'cautions'>,
@@ -49,8 +54,7 @@ export function instructionsPages(
   measure: LabelMeasure,
 ): InstructionsPage[] {
   const { title, pieces } = kit;
-  const rods = kit.substitutes.filter((s): s is AssemblyRod => s.kind === 'boom-stock');
-  const steps = assemblySteps(pieces, rods);
+  const steps = instructionsSteps(kit);
   const pages: InstructionsPage[] = [];
   const columnMm = (page.widthMm - 2 * MARGIN_MM) / 2;
   let current: InstructionsPage | null = null;
