@@ -3,6 +3,7 @@ import { DEMO_IDS, demoModel } from '../geometry/fixtures';
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
 import {
   ASSEMBLY_STEP_JOINTS_MAX,
+  assemblyRods,
   assemblySteps,
   assemblyStepPieceState,
   tabNumbersLabel,
@@ -14,6 +15,24 @@ const pieces = (id: string, n = 10) => modelPatterns(demoModel(id), { scaleDenom
 const CASES = DEMO_IDS.flatMap((id) => SWEEP_SCALES.map((n) => [id, n] as const));
 
 describe('assemblySteps', () => {
+  // Issue 10 item 4: the 3D preview shows each rod glued on at its own step, after every piece.
+  test('marks each rod of the Skein at 1:20 later, then current at its step, then built', () => {
+    const patterns = modelPatterns(demoModel('skein-probe'), { scaleDenominator: 20, paperGsm: 160 });
+    const rods = assemblyRods(patterns.substitutes);
+    expect(rods.length).toBeGreaterThan(1);
+    const steps = assemblySteps(patterns.pieces, rods);
+    const first = steps.length - rods.length;
+    rods.forEach((rod, k) => {
+      const states = steps.map((s) => assemblyStepPieceState(s, rod.partId));
+      const expected = steps.map((_, i) => (i < first + k ? 'later' : i === first + k ? 'current' : 'built'));
+      expect(states, rod.partId).toEqual(expected);
+      expect(steps[first + k]!.pieceLabels).toEqual([rod.label]);
+    });
+    // Every piece stays built through the rod steps.
+    for (const s of steps.slice(first))
+      for (const p of patterns.pieces) expect(assemblyStepPieceState(s, p.id)).toBe('built');
+  });
+
   // Issue 10: one step per at most four joints; the steps cover every joint (tab number) exactly once.
   test.each(CASES)('glues at most four joints per step and every joint of %s at 1:%i exactly once', (id, n) => {
     const ps = pieces(id, n);
