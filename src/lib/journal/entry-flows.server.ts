@@ -301,7 +301,9 @@ export async function reviewDecide(actor: UserActor, id: string, input: ReviewDe
       },
       trx,
     );
-    if (moved.length === 0) throw decidedConflict(current);
+    // Read again: a row locked while another decision committed comes back re-checked (PostgreSQL's EvalPlanQual)
+    // with its old join, so its reviewer's name is missing; a new statement sees the winner's row and name.
+    if (moved.length === 0) throw decidedConflict(await entryForActor(actor, id, trx));
     await auditEntry(actor, current.id, `entry.${input.decision}`, 'submitted', to, trx, note ? { note } : {});
     return current;
   });
