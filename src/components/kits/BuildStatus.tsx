@@ -1,4 +1,4 @@
-import type { KitPreview } from '../../lib/kit/kit-queries';
+import type { KitPreview } from './kit-queries';
 import { KIT_STAGE_LABELS, kitStagesOf, type KitStageDone } from '../../lib/kit/kit-stages';
 import BuildProgress from './BuildProgress';
 

@@ -3,7 +3,7 @@ import { apiFileProgress, ApiError } from '../../lib/http/client';
 import { kitStagesOf, type KitStageDone } from '../../lib/kit/kit-stages';
 import BuildProgress from './BuildProgress';
 import type { KitForm } from '../../lib/kit/kit-settings';
-import type { KitView } from '../../lib/kit/kit-queries';
+import type { KitView } from './kit-queries';
 
 interface Props {
   form: KitForm | null;

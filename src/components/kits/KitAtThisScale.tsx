@@ -1,4 +1,4 @@
-import type { KitPreview } from '../../lib/kit/kit-queries';
+import type { KitPreview } from './kit-queries';
 import type { KitStageDone } from '../../lib/kit/kit-stages';
 import BuildStatus from './BuildStatus';
 

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
-import { kitPreviewQueryOptions, scaleSolveQueryOptions } from '../../lib/kit/kit-queries';
-import type { KitBuilderProps } from './builder-props';
+import { kitPreviewQueryOptions, scaleSolveQueryOptions } from './kit-queries';
+import type { KitBuilderProps } from '../../lib/kit/kit-builder-props';
 import KitBuilderForm from './KitBuilderForm';
 
 /**

@@ -4,13 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { keepPreviousData, useQuery, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
 import { kitFormSchema, type KitForm } from '../../lib/kit/kit-settings';
-import {
-  kitPreviewQueryOptions,
-  kitSheetsQueryOptions,
-  scaleSolveQueryOptions,
-  type KitView,
-} from '../../lib/kit/kit-queries';
-import type { KitBuilderProps } from './builder-props';
+import { kitPreviewQueryOptions, kitSheetsQueryOptions, scaleSolveQueryOptions, type KitView } from './kit-queries';
+import type { KitBuilderProps } from '../../lib/kit/kit-builder-props';
 import DownloadButtons from './DownloadButtons';
 import KitAtThisScale from './KitAtThisScale';
 import KitSettingsFields from './KitSettingsFields';

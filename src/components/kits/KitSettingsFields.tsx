@@ -2,7 +2,7 @@ import type { FieldErrors, UseFormRegister } from 'react-hook-form';
 import { KIT_TITLE_MAX_LENGTH, type KitForm } from '../../lib/kit/kit-settings';
 import FieldShell from '../tools/FieldShell';
 import SelectField from '../tools/SelectField';
-import type { KitBuilderProps } from './builder-props';
+import type { KitBuilderProps } from '../../lib/kit/kit-builder-props';
 import PrintTargetFields from './PrintTargetFields';
 import RegisteredNumberField from './RegisteredNumberField';
 import ScaleField from './ScaleField';

@@ -8,7 +8,7 @@ import {
   kitsListOptimistic,
   kitsListQueryOptions,
   type KitView,
-} from '../../lib/kit/kit-queries';
+} from './kit-queries';
 
 interface Props {
   /** The kits the page read on the server (first data). */

@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
-import { kitSave, kitsListOptimistic, type KitView } from '../../lib/kit/kit-queries';
+import { kitSave, kitsListOptimistic, type KitView } from './kit-queries';
 import type { KitForm } from '../../lib/kit/kit-settings';
 
 interface Props {

@@ -1,4 +1,4 @@
-import type { ScaleSolution } from '../../lib/kit/kit-queries';
+import type { ScaleSolution } from './kit-queries';
 
 interface Props {
   solution: ScaleSolution | undefined;

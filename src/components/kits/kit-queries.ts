@@ -3,11 +3,11 @@
  * query key means the same data everywhere. Types of answers come from the server modules (type-only).
  */
 import { queryOptions, type QueryClient } from '@tanstack/react-query';
-import { api, apiProgress, apiText } from '../http/client';
-import type { StageReport } from '../http/progress-lines';
-import type { KitPreview, ScaleSolution } from './kit-preview.server';
-import type { KitForm } from './kit-settings';
-import type { KitView } from './kit-view';
+import { api, apiProgress, apiText } from '../../lib/http/client';
+import type { StageReport } from '../../lib/http/progress-lines';
+import type { KitPreview, ScaleSolution } from '../../lib/kit/kit-preview.server';
+import type { KitForm } from '../../lib/kit/kit-settings';
+import type { KitView } from '../../lib/kit/kit-view';
 
 export type { KitPreview, ScaleSolution, KitView };
 

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import type { BuildListener } from '../../lib/kit/kit-queries';
+import type { BuildListener } from './kit-queries';
 import type { KitStageDone } from '../../lib/kit/kit-stages';
 
 /** The stages the server has finished for the build in flight, whether it was cancelled, and its listener. */

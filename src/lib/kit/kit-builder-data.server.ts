@@ -14,7 +14,7 @@ import { demoModelById, demoModels } from './demo-models.server';
 import { KIT_DEFAULT_PAPER_GSM, KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
 import { INSTRUCTIONS_PLACE_DEFAULT, type KitForm } from './kit-settings';
-import type { KitBuilderProps } from '../../components/kits/builder-props';
+import type { KitBuilderProps } from './kit-builder-props';
 
 /** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
 export async function kitBuilderProps(

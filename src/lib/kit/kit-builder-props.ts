@@ -1,5 +1,5 @@
-import type { KitSettingsLimits, KitForm } from '../../lib/kit/kit-settings';
-import type { KitPreview, ScaleSolution } from '../../lib/kit/kit-queries';
+import type { KitSettingsLimits, KitForm } from './kit-settings';
+import type { KitPreview, ScaleSolution } from './kit-preview.server';
 
 /** Plain data the /kits/new page reads on the server and hands to the KitBuilder island. */
 export interface KitBuilderProps {
