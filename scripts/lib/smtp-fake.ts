@@ -6,16 +6,7 @@
 import { createServer, type Server } from 'node:http';
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
-
-export interface CapturedMail {
-  id: number;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-}
+import type { CapturedMail } from '../../src/lib/mail/captured-mail';
 
 export interface SmtpFake {
   smtpPort: number;

@@ -2,7 +2,7 @@
  * Reads the messages captured by the local SMTP fake (development only: MAIL_OUTBOX_URL is set by npm start and
  * npm test, and empty when a real SMTP_URL is configured).
  */
-import type { CapturedMail } from '../../../scripts/lib/smtp-fake';
+import type { CapturedMail } from './captured-mail';
 
 /** A captured message, as the SMTP fake serves it. */
 export type OutboxMessage = CapturedMail;
