@@ -1,22 +1,10 @@
 /**
- * Who is making a request: nobody, a signed-in account with a role, or a student class session (no
- * account, limited to one class). Framework-free; the middleware builds it and puts it on Astro.locals.
+ * Who a page or endpoint admits, and whether an actor (src/lib/actor.ts) is one of them. The middleware builds
+ * the actor and puts it on Astro.locals.
  */
-export const ROLES = ['teacher', 'coordinator', 'admin'] as const;
-export type Role = (typeof ROLES)[number];
+import { ROLES, type Actor, type Role } from '../actor';
 
-export type Actor =
-  | { kind: 'anonymous' }
-  | {
-      kind: 'user';
-      userId: string;
-      role: Role;
-      schoolId: string | null;
-      email: string;
-      displayName: string;
-      sessionId: string;
-    }
-  | { kind: 'class'; classId: string; classSessionId: string };
+export { ROLES, type Actor, type Role };
 
 /** Who a page or endpoint admits: "anyone", a class session, or accounts of the listed roles. */
 export type Audience = 'anyone' | 'class' | Role;

@@ -5,9 +5,10 @@
 import { z } from 'zod';
 import { CLASS_CODE_LENGTH, classCodeNormalize } from './class-code';
 import { NAME_PATTERN, NAME_PATTERN_MESSAGE } from './schemas';
+import { GRADE_BANDS } from '../grade-bands';
 
-export const GRADE_BANDS = ['K-2', '3-5', '6-8', '9-12'] as const;
-export type GradeBand = (typeof GRADE_BANDS)[number];
+export { GRADE_BANDS, type GradeBand } from '../grade-bands';
+
 export const CLASS_NAME_MAX_LENGTH = 80;
 /** Matches the classes_student_count_check constraint of the schema. */
 export const STUDENT_COUNT_MAX = 500;

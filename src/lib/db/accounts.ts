@@ -1,6 +1,6 @@
 /** Queries on users (accounts of teachers, coordinators and admins). Stores return null for a missing row. */
 import type { Knex } from 'knex';
-import type { Role } from '../auth/actor';
+import type { Role } from '../actor';
 import { db } from './knex';
 import { accountTokensVoid } from './tokens';
 

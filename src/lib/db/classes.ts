@@ -3,7 +3,7 @@
  * session row keeps the SHA-256 of the cookie token, never the token.
  */
 import type { Knex } from 'knex';
-import type { GradeBand } from '../auth/class-schemas';
+import type { GradeBand } from '../grade-bands';
 import { isUuid } from './accounts';
 import { db } from './knex';
 

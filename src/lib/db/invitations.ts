@@ -1,6 +1,6 @@
 /** Staff invitations (coordinator or admin) sent by an admin: stored hashed, valid 7 days, used once. */
 import type { Knex } from 'knex';
-import type { Role } from '../auth/actor';
+import type { Role } from '../actor';
 import { db } from './knex';
 
 export const INVITATION_VALID_DAYS = 7;

@@ -5,7 +5,7 @@
  * coordinators and admins every kit. A missing or hidden kit is null; the route answers 404.
  */
 import type { Knex } from 'knex';
-import type { Actor } from '../auth/actor';
+import type { Actor } from '../actor';
 import type { KitBuild } from '../kit/build-kit';
 import { contentHash } from '../kit/content-hash';
 import { ENGINE_VERSION } from '../kit/engine-version';
