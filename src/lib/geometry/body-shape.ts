@@ -3,7 +3,7 @@
  * (cylinder). Base vertices are counter-clockwise seen from +z; side wall i runs from vertex i to i+1 and
  * side 0 faces +x. Model space: z up along the body axis, origin at the base centre.
  */
-import type { Body } from './model-schema';
+import type { Body } from './body-schema';
 import type { Vec3Mm } from './types';
 import { vec3Cross, vec3Sub, vec3Unit } from './vec';
 

@@ -5,15 +5,21 @@
 import { z } from 'zod';
 import { TextSchema } from '../text-schema';
 import { refineValid } from '../validation';
+import { BodySchema, lengthM } from './body-schema';
 import { bodyFaceSizesM } from './body-shape';
 
+export {
+  BodySchema,
+  CYLINDER_FACETS_MAX,
+  CYLINDER_FACETS_MIN,
+  MODEL_LENGTH_MAX_M,
+  PRISM_SIDES_MAX,
+  PRISM_SIDES_MIN,
+  SMALLSAT_SIZES,
+  type Body,
+} from './body-schema';
+
 export const MODEL_SCHEMA_VERSION = 1;
-export const PRISM_SIDES_MIN = 3;
-export const PRISM_SIDES_MAX = 24;
-export const CYLINDER_FACETS_MIN = 6;
-export const CYLINDER_FACETS_MAX = 256;
-/** Longest length accepted anywhere in a model, m (generous: the longest real wire booms are ~50 m). */
-export const MODEL_LENGTH_MAX_M = 1000;
 export const APPENDAGES_MAX = 64;
 /** Tilt of a boom, dish or nozzle away from its face's outward normal, degrees (below 90 so it leaves the face). */
 export const APPENDAGE_TILT_MAX_DEG = 80;
@@ -21,74 +27,12 @@ export const APPENDAGE_TILT_MAX_DEG = 80;
 export const STACK_PROBES_MAX = 8;
 /** Wall facets of a stack's separation rings and adapter: few enough for a one-piece paper net. */
 export const STACK_DRUM_FACETS = 8;
-/** Small-satellite sizes with their 10 cm unit; see SMALLSAT_SIZES_M in body-shape.ts. */
-export const SMALLSAT_SIZES = ['1U', '2U', '3U', '6U', '12U'] as const;
-
-/** A real length in metres: finite, above zero, below MODEL_LENGTH_MAX_M. */
-const lengthM = (what: string) =>
-  z
-    .number({ required_error: `${what} is missing`, invalid_type_error: `${what} must be a number of metres` })
-    .finite(`${what} must be a finite number of metres`)
-    .positive(`${what} must be more than 0 m`)
-    .max(MODEL_LENGTH_MAX_M, `${what} must be at most ${MODEL_LENGTH_MAX_M} m`);
-
 const degrees = (what: string, min: number, max: number) =>
   z
     .number({ invalid_type_error: `${what} must be a number of degrees` })
     .finite(`${what} must be finite`)
     .min(min, `${what} must be at least ${min}°`)
     .max(max, `${what} must be at most ${max}°`);
-
-const PrismBodySchema = z.object({
-  kind: z.literal('prism'),
-  /** Number of side walls of the regular polygon. */
-  sides: z
-    .number()
-    .int('sides must be a whole number')
-    .min(PRISM_SIDES_MIN, `a prism needs at least ${PRISM_SIDES_MIN} sides`)
-    .max(PRISM_SIDES_MAX, `a prism has at most ${PRISM_SIDES_MAX} sides; use a cylinder for more`),
-  /** Whether sizeM is measured between opposite flats or opposite corners. */
-  across: z.enum(['flats', 'corners']),
-  sizeM: lengthM('the prism size'),
-  heightM: lengthM('the body height'),
-});
-
-const BoxBodySchema = z.object({
-  kind: z.literal('box'),
-  /** A small-satellite size instead of widthM/depthM/heightM. */
-  smallsat: z
-    .enum(SMALLSAT_SIZES, { errorMap: () => ({ message: `smallsat must be one of ${SMALLSAT_SIZES.join(', ')}` }) })
-    .optional(),
-  widthM: lengthM('the box width (x)').optional(),
-  depthM: lengthM('the box depth (y)').optional(),
-  heightM: lengthM('the box height (z)').optional(),
-});
-
-const CylinderBodySchema = z.object({
-  kind: z.literal('cylinder'),
-  diameterM: lengthM('the cylinder diameter'),
-  heightM: lengthM('the body height'),
-  /** Flat wall facets standing in for the round wall (corners on the true circle). */
-  facets: z
-    .number()
-    .int('facets must be a whole number')
-    .min(CYLINDER_FACETS_MIN, `a cylinder needs at least ${CYLINDER_FACETS_MIN} facets`)
-    .max(CYLINDER_FACETS_MAX, `a cylinder has at most ${CYLINDER_FACETS_MAX} facets`),
-});
-
-export const BodySchema = refineValid(
-  z.discriminatedUnion('kind', [PrismBodySchema, BoxBodySchema, CylinderBodySchema]),
-  (b, ctx) => {
-    if (b.kind !== 'box') return;
-    const dims = [b.widthM, b.depthM, b.heightM].filter((d) => d !== undefined).length;
-    if ((b.smallsat !== undefined) === dims > 0 || (b.smallsat === undefined && dims < 3)) {
-      ctx.addIssue({
-        code: 'custom',
-        message: 'a box needs either a smallsat size (e.g. "3U") or all of widthM, depthM and heightM, not both',
-      });
-    }
-  },
-);
 
 /** A body face: the top, the bottom, or side wall i (0-based, side 0 faces +x). */
 export const FaceRefSchema = z
@@ -258,7 +202,6 @@ export const ModelSchema = refineValid(
 
 export type Model = z.infer<typeof ModelSchema>;
 export type ModelInput = z.input<typeof ModelSchema>;
-export type Body = z.infer<typeof BodySchema>;
 export type Appendage = Model['appendages'][number];
 export type AppendageKind = Appendage['kind'];
 
