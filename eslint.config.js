@@ -4,7 +4,28 @@ import tseslint from 'typescript-eslint';
 import astro from 'eslint-plugin-astro';
 import globals from 'globals';
 
-/** Pure domain folders import nothing framework- or server-specific (DEVELOPERS.md, "Where things are"). */
+/** Nothing in src/lib imports a page, a component or a script: imports point down (docs/architecture.md). */
+const LIB_DOWNWARD = {
+  group: ['**/components/**', '**/pages/**', '**/scripts/**'],
+  message: 'src/lib sits below pages, components and scripts: move the shared code or type down into src/lib.',
+};
+
+/** Pure domain folders (docs/architecture.md; DEVELOPERS.md, "Where things are"); their *.server.ts may read files. */
+const PURE_FOLDERS = [
+  'src/lib/geometry/**',
+  'src/lib/layout/**',
+  'src/lib/render/**',
+  'src/lib/analysis/**',
+  'src/lib/kit/**',
+  'src/lib/journal/**',
+  'src/lib/reach/**',
+  'src/lib/mesh/**',
+  'src/lib/tools/**',
+  'src/lib/activities/**',
+  'src/lib/preview/**',
+];
+
+/** Pure domain folders import nothing framework- or server-specific. */
 const PURE_RESTRICTIONS = {
   patterns: [
     {
@@ -21,8 +42,9 @@ const PURE_RESTRICTIONS = {
         '**/mail/**',
         '**/storage/**',
       ],
-      message: 'src/lib geometry, layout, render, analysis and kit stay pure: no framework, database or node imports.',
+      message: 'src/lib pure folders (PURE_FOLDERS) stay pure: no framework, database or node imports.',
     },
+    LIB_DOWNWARD,
   ],
 };
 
@@ -38,16 +60,26 @@ export default tseslint.config(
     },
   },
   {
-    files: [
-      'src/lib/geometry/**',
-      'src/lib/layout/**',
-      'src/lib/render/**',
-      'src/lib/analysis/**',
-      'src/lib/kit/**',
-      'src/lib/journal/**',
-      'src/lib/reach/**',
-      'src/lib/mesh/**',
-    ],
+    files: ['src/lib/**'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [LIB_DOWNWARD] }] },
+  },
+  {
+    // Queries take the actor and grade band from src/lib/actor.ts and src/lib/grade-bands.ts; auth imports db.
+    files: ['src/lib/db/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            LIB_DOWNWARD,
+            { group: ['**/auth/**'], message: 'src/lib/db sits below src/lib/auth: share types through src/lib.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: PURE_FOLDERS,
     ignores: ['**/*.server.ts'],
     rules: { 'no-restricted-imports': ['error', PURE_RESTRICTIONS] },
   },
