@@ -10,40 +10,17 @@
  * Ports: PORT (app, 4321) and KW_BENCH_BASELINE_PORT (baseline, 4323); the project's PostgreSQL (KW_PG_PORT).
  */
 import { spawn } from 'node:child_process';
-import { SKEIN_KIT_INPUTS } from '../fixtures/kit-settings';
-import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
-import knexFactory from 'knex';
-import { APP_DATABASE, PROJECT_ROOT, databaseUrl } from '../../scripts/lib/postgres';
-import { databaseUp } from '../../scripts/db';
-import { migrateLatest, seedDemoIfEmpty } from '../../scripts/lib/migrate';
-import { appBuild } from '../../scripts/lib/build';
-import { appEnv } from '../../scripts/lib/app-env';
-import { serverStart } from '../../scripts/lib/server';
+import { PROJECT_ROOT } from '../../scripts/lib/postgres';
+import { SKEIN_KIT_INPUTS } from '../fixtures/kit-settings';
 import { userSessionCookie } from '../api/auth-helpers';
+import { BENCH_HOST as host, BENCH_ROUNDS as ROUNDS, benchAppStart, figure } from './bench-harness';
 
-const ROUNDS = Number(process.env.KW_BENCH_ROUNDS ?? 3);
 const SECONDS = Number(process.env.KW_BENCH_SECONDS ?? 5);
 const CONNECTIONS = 20;
 const BUILDERS = 4;
-const host = '127.0.0.1';
-const port = Number(process.env.PORT ?? 4321);
 const baselinePort = Number(process.env.KW_BENCH_BASELINE_PORT ?? 4323);
-
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2;
-};
-const figure = (name: string, xs: number[], unit: string, target?: { op: '≥' | '≤'; value: number }) => {
-  const f = (x: number) => (x >= 100 ? x.toFixed(0) : x.toFixed(2)).padStart(8);
-  const m = median(xs);
-  const met = target ? (target.op === '≥' ? m >= target.value : m <= target.value) : undefined;
-  console.log(
-    `${name.padEnd(44)} min ${f(Math.min(...xs))}  median ${f(m)}  max ${f(Math.max(...xs))} ${unit.padEnd(6)}` +
-      (target ? `  target ${target.op} ${target.value}: ${met ? 'met' : 'MISSED'}` : ''),
-  );
-};
 
 async function load(url: string, headers: Record<string, string> = {}) {
   const result = await autocannon({ url, connections: CONNECTIONS, duration: SECONDS, headers });
@@ -82,13 +59,8 @@ function buildersRun(base: string, cookie: string) {
   };
 }
 
-await databaseUp();
-const dbUrl = databaseUrl(APP_DATABASE);
-await migrateLatest(dbUrl);
-await seedDemoIfEmpty(dbUrl);
-if (!existsSync(join(PROJECT_ROOT, process.env.KW_OUT_DIR ?? 'dist', 'server', 'entry.mjs'))) appBuild();
-
-const knex = knexFactory({ client: 'pg', connection: dbUrl, pool: { min: 0, max: 1 } });
+const bench = await benchAppStart({ name: 'api' });
+const { app, knex } = bench;
 // The demo teacher with the most kits, signed in through a fresh session row.
 const teacher = (await knex('kits')
   .join('classes', 'classes.id', 'kits.class_id')
@@ -99,10 +71,8 @@ const teacher = (await knex('kits')
   .first()) as { teacher_id: string; kits: string };
 const cookie = await userSessionCookie(knex, teacher.teacher_id);
 
-const env = appEnv({ databaseUrl: dbUrl, host, port, smtpPort: 0, mailHttpPort: 0 });
-const app = await serverStart(env, { logFile: join(PROJECT_ROOT, '.data', `bench-api-${port}.log`) });
 const baseline = spawn(process.execPath, ['--import', 'tsx', join(PROJECT_ROOT, 'tests/bench/api-baseline.ts')], {
-  env: { ...env, PORT: String(baselinePort) },
+  env: { ...process.env, DATABASE_URL: bench.dbUrl, PORT: String(baselinePort) },
   stdio: ['ignore', 'pipe', 'inherit'],
 });
 await new Promise<void>((resolve) => baseline.stdout!.once('data', () => resolve()));
@@ -157,6 +127,5 @@ try {
   figure('GET /tools/scale (anonymous) req/s', scale, 'req/s', { op: '≥', value: 500 });
 } finally {
   baseline.kill('SIGTERM');
-  await app.stop();
-  await knex.destroy();
+  await bench.cleanup();
 }

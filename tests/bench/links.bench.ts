@@ -11,63 +11,19 @@
  * Builds the app when KW_OUT_DIR (default dist) has no build; run `npm run build` first after changing code.
  * Ports: PORT (app, 4321); the project's PostgreSQL (KW_PG_PORT).
  */
-import { existsSync } from 'node:fs';
-import { join } from 'node:path';
 import autocannon from 'autocannon';
-import knexFactory from 'knex';
-import { databaseUp } from '../../scripts/db';
-import { appEnv } from '../../scripts/lib/app-env';
-import { appBuild } from '../../scripts/lib/build';
-import { migrateLatest, seedDemoIfEmpty } from '../../scripts/lib/migrate';
-import { APP_DATABASE, PROJECT_ROOT, databaseUrl, postgresLease } from '../../scripts/lib/postgres';
-import { serverStart, type RunningServer } from '../../scripts/lib/server';
 import { linkCodeNew } from '../../src/lib/links/link-code';
+import { BENCH_ROUNDS as ROUNDS, benchAppStart, figure } from './bench-harness';
 
-const ROUNDS = Number(process.env.KW_BENCH_ROUNDS ?? 3);
 const SECONDS = Number(process.env.KW_BENCH_SECONDS ?? 10);
 const WARMUP_SECONDS = 3;
 const CONNECTIONS = 50;
 const TARGET = { redirectsPerS: 2000, p99Ms: 20 };
-const host = '127.0.0.1';
-const port = Number(process.env.PORT ?? 4321);
 
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2;
-};
-const figure = (name: string, xs: number[], unit: string, target: { op: '≥' | '≤'; value: number }) => {
-  const f = (x: number) => (x >= 100 ? x.toFixed(0) : x.toFixed(2)).padStart(8);
-  const m = median(xs);
-  const met = target.op === '≥' ? m >= target.value : m <= target.value;
-  console.log(
-    `${name.padEnd(28)} min ${f(Math.min(...xs))}  median ${f(m)}  max ${f(Math.max(...xs))} ${unit.padEnd(12)}` +
-      `  target ${target.op} ${target.value}: ${met ? 'met' : 'MISSED'}`,
-  );
-};
-
-const clusterRelease = postgresLease();
-const dbUrl = databaseUrl(APP_DATABASE);
-const knex = knexFactory({ client: 'pg', connection: dbUrl, pool: { min: 0, max: 1 } });
-let app: RunningServer | undefined;
+const bench = await benchAppStart({ name: 'links' });
+const { knex } = bench;
 let linkId: string | undefined;
-
-let cleaned: Promise<void> | undefined;
-/** Stops what this run started, once, whichever way it ends. */
-function cleanup(): Promise<void> {
-  cleaned ??= (async () => {
-    await app?.stop();
-    if (linkId) await knex('live_links').where({ id: linkId }).delete();
-    await knex.destroy();
-    clusterRelease();
-  })();
-  return cleaned;
-}
-for (const signal of ['SIGINT', 'SIGTERM'] as const) {
-  process.once(signal, () => {
-    console.log(`\n${signal}: stopping what the bench started`);
-    void cleanup().finally(() => process.exit(130));
-  });
-}
+bench.atCleanup(async () => linkId && (await knex('live_links').where({ id: linkId }).delete()));
 
 /** The scans counted for the bench's link so far. */
 async function scansCounted(): Promise<number> {
@@ -98,17 +54,11 @@ async function load(url: string, run: { duration: number } | { amount: number })
 }
 
 try {
-  await databaseUp();
-  await migrateLatest(dbUrl);
-  await seedDemoIfEmpty(dbUrl);
-  if (!existsSync(join(PROJECT_ROOT, process.env.KW_OUT_DIR ?? 'dist', 'server', 'entry.mjs'))) appBuild();
   const code = linkCodeNew();
   [{ id: linkId }] = await knex('live_links')
     .insert({ code, title: 'bench:links (deleted after the run)', target_url: '/activities' })
     .returning('id');
-  const env = appEnv({ databaseUrl: dbUrl, host, port, smtpPort: 0, mailHttpPort: 0 });
-  app = await serverStart(env, { logFile: join(PROJECT_ROOT, '.data', `bench-links-${port}.log`) });
-  const url = `${app.url}/go/${code}`;
+  const url = `${bench.app.url}/go/${code}`;
 
   console.log(
     `bench:links — GET /go/${code}, ${CONNECTIONS} connections, ${ROUNDS} runs of ~${SECONDS} s, autocannon on loopback`,
@@ -132,10 +82,10 @@ try {
     );
   }
   console.log('');
-  figure('GET /go/CODE redirects/s', fig.rps, 'redirects/s', { op: '≥', value: TARGET.redirectsPerS });
+  figure('GET /go/CODE redirects/s', fig.rps, 'req/s', { op: '≥', value: TARGET.redirectsPerS });
   figure('GET /go/CODE p99 latency', fig.p99, 'ms', { op: '≤', value: TARGET.p99Ms });
   console.log(`scans counted = 302 answers in every run: ${exact ? 'yes' : 'NO'}`);
   if (!exact) process.exitCode = 1;
 } finally {
-  await cleanup();
+  await bench.cleanup();
 }
