@@ -4,7 +4,7 @@
  * Flat coordinates, mm, y up; the face owning the edge lies to its left (counter-clockwise outline).
  */
 import type { Vec2Mm } from './types';
-import { pointsBounds, vec2Add, vec2Cross, vec2Length, vec2Scale, vec2Sub, vec2Unit } from './vec';
+import { pointsBounds, vec2Length, vec2Sub, vec2Unit } from './vec';
 
 /**
  * Side slants tried at the (a, b) ends, degrees from the edge's perpendicular: gentle first, then one end
@@ -31,10 +31,18 @@ export interface FittedTab {
 
 /**
  * The deepest tab up to depthWantedMm on edge a→b that overlaps none of the obstacles (convex, CCW), or a
- * zero-depth result with an empty polygon when nothing fits.
+ * zero-depth result with an empty polygon when nothing fits. A caller that drops tabs shallower than
+ * depthMinMm says so, and slants that cannot reach it are not searched (the result is then below it too).
  */
-export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: readonly Vec2Mm[][]): FittedTab {
+export function tabFit(
+  a: Vec2Mm,
+  b: Vec2Mm,
+  depthWantedMm: number,
+  obstacles: readonly Vec2Mm[][],
+  depthMinMm = 0,
+): FittedTab {
   const edgeMm = vec2Length(vec2Sub(b, a));
+  const edge = tabEdge(a, b);
   const near = obstacles.filter((o) => boundsNear(o, a, b, depthWantedMm));
   let best: FittedTab = { polygonMm: [], depthMm: 0 };
   for (const taper of TAPER_PAIRS_RAD) {
@@ -44,7 +52,26 @@ export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: r
       number,
       number,
     ];
-    const fits = (d: number) => !near.some((o) => convexOverlap(tabPolygon(a, b, d, probe, true), o));
+    const probeTan: readonly [number, number] = [Math.tan(Math.max(0, probe[0])), Math.tan(Math.max(0, probe[1]))];
+    // Every probe up to depthCap lies in the trapezoid at depthCap (its sides are rays from a and b), so an
+    // obstacle clear of that trapezoid's bounds can never meet one: test only the rest.
+    const reach = pointsBounds(tabPolygon(edge, depthCap, probeTan));
+    const pad = 1e-6 * Math.max(1, edgeMm, depthCap);
+    const inReach = near.filter((o) => !boundsApart(pointsBounds(o), reach, pad));
+    const probeAt = new Float64Array(8);
+    // Whether any obstacle overlaps the probe is independent of their order: the last one hit is tried first.
+    const fits = (d: number) => {
+      tabProbeInto(edge, d, probeTan, probeAt);
+      for (let i = 0; i < inReach.length; i++) {
+        if (!probeOverlaps(probeAt, inReach[i]!)) continue;
+        if (i > 0) inReach.unshift(...inReach.splice(i, 1));
+        return false;
+      }
+      return true;
+    };
+    // A probe grows with its depth, so a slant whose probe at the depth to beat is blocked cannot beat it.
+    const floor = Math.max(best.depthMm, depthMinMm);
+    if (depthCap < floor || (floor > 0 && !fits(floor))) continue;
     let depth = depthCap;
     if (!fits(depth)) {
       let lo = 0;
@@ -56,29 +83,106 @@ export function tabFit(a: Vec2Mm, b: Vec2Mm, depthWantedMm: number, obstacles: r
       }
       depth = lo;
     }
-    if (depth > best.depthMm) best = { polygonMm: tabPolygon(a, b, depth, taper, false), depthMm: depth };
+    const taperTan: readonly [number, number] = [Math.tan(Math.max(0, taper[0])), Math.tan(Math.max(0, taper[1]))];
+    if (depth > best.depthMm) best = { polygonMm: tabPolygon(edge, depth, taperTan), depthMm: depth };
     if (best.depthMm >= depthWantedMm * 0.999) break;
   }
   return best;
 }
 
-/** The trapezoid [b, a, a', b'] outside edge a→b; the probe form lifts its base corners off the edge. */
-function tabPolygon(
-  a: Vec2Mm,
-  b: Vec2Mm,
-  depthMm: number,
-  taperRad: readonly [number, number],
-  probe: boolean,
-): Vec2Mm[] {
+/** Edge a→b with its unit direction and outward normal (right of a→b). */
+interface TabEdge {
+  a: Vec2Mm;
+  b: Vec2Mm;
+  dir: Vec2Mm;
+  out: Vec2Mm;
+}
+
+function tabEdge(a: Vec2Mm, b: Vec2Mm): TabEdge {
   const dir = vec2Unit(vec2Sub(b, a));
-  const out: Vec2Mm = [dir[1], -dir[0]];
-  const a2 = vec2Add(vec2Add(a, vec2Scale(out, depthMm)), vec2Scale(dir, depthMm * Math.tan(Math.max(0, taperRad[0]))));
-  const b2 = vec2Add(vec2Sub(b, vec2Scale(dir, depthMm * Math.tan(Math.max(0, taperRad[1])))), vec2Scale(out, depthMm));
-  if (!probe) return [b, a, a2, b2];
-  const lift = 1e-3 * depthMm;
-  const a1 = vec2Add(a, vec2Scale(vec2Unit(vec2Sub(a2, a)), lift));
-  const b1 = vec2Add(b, vec2Scale(vec2Unit(vec2Sub(b2, b)), lift));
-  return [b1, a1, a2, b2];
+  return { a, b, dir, out: [dir[1], -dir[0]] };
+}
+
+/** The trapezoid [b, a, a', b'] outside edge a→b, its sides leaning in by the given tangents. */
+function tabPolygon(e: TabEdge, depthMm: number, tan: readonly [number, number]): Vec2Mm[] {
+  const p = new Float64Array(8);
+  tabProbeInto(e, depthMm, tan, p, false);
+  return [
+    [p[0]!, p[1]!],
+    [p[2]!, p[3]!],
+    [p[4]!, p[5]!],
+    [p[6]!, p[7]!],
+  ];
+}
+
+/**
+ * Writes the trapezoid's corners (x, y pairs) into `into`; the probe form lifts its base corners off the edge
+ * by a thousandth of the depth, so the face owning the edge never counts as touching it.
+ */
+function tabProbeInto(
+  e: TabEdge,
+  depthMm: number,
+  tan: readonly [number, number],
+  into: Float64Array,
+  probe = true,
+): void {
+  const { a, b, dir, out } = e;
+  const a2x = a[0] + out[0] * depthMm + dir[0] * (depthMm * tan[0]),
+    a2y = a[1] + out[1] * depthMm + dir[1] * (depthMm * tan[0]);
+  const b2x = b[0] - dir[0] * (depthMm * tan[1]) + out[0] * depthMm,
+    b2y = b[1] - dir[1] * (depthMm * tan[1]) + out[1] * depthMm;
+  let a1x = a[0],
+    a1y = a[1],
+    b1x = b[0],
+    b1y = b[1];
+  if (probe) {
+    const lift = 1e-3 * depthMm;
+    const [ua0, ua1] = vec2Unit([a2x - a[0], a2y - a[1]]);
+    const [ub0, ub1] = vec2Unit([b2x - b[0], b2y - b[1]]);
+    a1x = a[0] + ua0 * lift;
+    a1y = a[1] + ua1 * lift;
+    b1x = b[0] + ub0 * lift;
+    b1y = b[1] + ub1 * lift;
+  }
+  into[0] = b1x;
+  into[1] = b1y;
+  into[2] = a1x;
+  into[3] = a1y;
+  into[4] = a2x;
+  into[5] = a2y;
+  into[6] = b2x;
+  into[7] = b2y;
+}
+
+/** convexOverlap for a probe given as four corners (x, y pairs), without building its points. */
+function probeOverlaps(p: Float64Array, q: readonly Vec2Mm[]): boolean {
+  for (let i = 0; i < 4; i++) if (insideConvexXY(p[i * 2]!, p[i * 2 + 1]!, q)) return true;
+  for (const v of q) if (insideProbe(v[0], v[1], p)) return true;
+  for (let i = 0; i < 4; i++) {
+    const j = (i + 1) % 4;
+    for (let k = 0; k < q.length; k++) {
+      const c = q[k]!,
+        d = q[(k + 1) % q.length]!;
+      if (segmentsCrossXY(p[i * 2]!, p[i * 2 + 1]!, p[j * 2]!, p[j * 2 + 1]!, c[0], c[1], d[0], d[1])) return true;
+    }
+  }
+  return false;
+}
+
+function insideProbe(x: number, y: number, p: Float64Array): boolean {
+  for (let i = 0; i < 4; i++) {
+    const j = (i + 1) % 4;
+    if (!insideEdge(x, y, p[i * 2]!, p[i * 2 + 1]!, p[j * 2]!, p[j * 2 + 1]!)) return false;
+  }
+  return true;
+}
+
+function boundsApart(
+  o: { minX: number; minY: number; maxX: number; maxY: number },
+  r: { minX: number; minY: number; maxX: number; maxY: number },
+  pad: number,
+): boolean {
+  return o.minX > r.maxX + pad || o.maxX < r.minX - pad || o.minY > r.maxY + pad || o.maxY < r.minY - pad;
 }
 
 function boundsNear(poly: readonly Vec2Mm[], a: Vec2Mm, b: Vec2Mm, reachMm: number): boolean {
@@ -94,34 +198,51 @@ function boundsNear(poly: readonly Vec2Mm[], a: Vec2Mm, b: Vec2Mm, reachMm: numb
 
 /** Whether two convex CCW polygons share interior points: a vertex inside the other, or crossing edges. */
 export function convexOverlap(p: readonly Vec2Mm[], q: readonly Vec2Mm[]): boolean {
-  if (p.some((v) => insideConvex(v, q)) || q.some((v) => insideConvex(v, p))) return true;
+  if (p.some((v) => insideConvexXY(v[0], v[1], q)) || q.some((v) => insideConvexXY(v[0], v[1], p))) return true;
   for (let i = 0; i < p.length; i++) {
     const p1 = p[i]!,
       p2 = p[(i + 1) % p.length]!;
     for (let j = 0; j < q.length; j++) {
-      if (segmentsCross(p1, p2, q[j]!, q[(j + 1) % q.length]!)) return true;
+      const c = q[j]!,
+        d = q[(j + 1) % q.length]!;
+      if (segmentsCrossXY(p1[0], p1[1], p2[0], p2[1], c[0], c[1], d[0], d[1])) return true;
     }
   }
   return false;
 }
 
-function insideConvex(v: Vec2Mm, poly: readonly Vec2Mm[]): boolean {
-  const eps = 1e-9;
+function insideConvexXY(x: number, y: number, poly: readonly Vec2Mm[]): boolean {
   for (let i = 0; i < poly.length; i++) {
     const a = poly[i]!,
       b = poly[(i + 1) % poly.length]!;
-    const len = vec2Length(vec2Sub(b, a));
-    if (len === 0) continue;
-    if (vec2Cross(vec2Sub(b, a), vec2Sub(v, a)) / len <= eps * Math.max(1, len)) return false;
+    if (!insideEdge(x, y, a[0], a[1], b[0], b[1])) return false;
   }
   return true;
 }
 
-function segmentsCross(a: Vec2Mm, b: Vec2Mm, c: Vec2Mm, d: Vec2Mm): boolean {
-  const d1 = vec2Cross(vec2Sub(b, a), vec2Sub(c, a));
-  const d2 = vec2Cross(vec2Sub(b, a), vec2Sub(d, a));
-  const d3 = vec2Cross(vec2Sub(d, c), vec2Sub(a, c));
-  const d4 = vec2Cross(vec2Sub(d, c), vec2Sub(b, c));
+/** (x, y) lies left of a→b by more than a billionth of a millimetre (or of the edge, if longer); a point edge passes. */
+function insideEdge(x: number, y: number, ax: number, ay: number, bx: number, by: number): boolean {
+  const ex = bx - ax,
+    ey = by - ay;
+  const len = Math.hypot(ex, ey);
+  if (len === 0) return true;
+  return (ex * (y - ay) - ey * (x - ax)) / len > 1e-9 * Math.max(1, len);
+}
+
+function segmentsCrossXY(
+  ax: number,
+  ay: number,
+  bx: number,
+  by: number,
+  cx: number,
+  cy: number,
+  dx: number,
+  dy: number,
+): boolean {
+  const d1 = (bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
+  const d2 = (bx - ax) * (dy - ay) - (by - ay) * (dx - ax);
+  const d3 = (dx - cx) * (ay - cy) - (dy - cy) * (ax - cx);
+  const d4 = (dx - cx) * (by - cy) - (dy - cy) * (bx - cx);
   const eps = 1e-12;
   return ((d1 > eps && d2 < -eps) || (d1 < -eps && d2 > eps)) && ((d3 > eps && d4 < -eps) || (d3 < -eps && d4 > eps));
 }

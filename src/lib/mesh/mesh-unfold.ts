@@ -181,7 +181,7 @@ export function meshUnfold(positions: Float64Array, faces: MeshFace[], options: 
         .search(pointsBounds(reach))
         .map((n) => n.tri)
         .filter((o) => convexOverlap(reach, o));
-      const fit = tabFit(a, b, want, near);
+      const fit = tabFit(a, b, want, near, want * TAB_KEPT_SHARE_MIN);
       if (!best || fit.depthMm > best.depthMm * 1.01) best = { side, ...fit };
       if (fit.depthMm >= want * 0.999) break;
     }

@@ -6,6 +6,7 @@ import type { Piece, Vec2Mm } from '../../../src/lib/geometry/types';
 import { modelMesh } from '../../../src/lib/geometry/model-mesh';
 import { stlBinary } from '../../../src/lib/render/stl';
 import { demoModel } from '../geometry/fixtures';
+import { multiPolygonArea } from '../geometry/multi-polygon-area';
 import { CUBE_NETS, freePolyominoes, polyominoCanonical } from './cube-nets';
 import { geometrySoup, PLATONIC, spikySoup, starPrismSoup, stlBytes, type Soup } from './mesh-fixtures';
 
@@ -20,27 +21,15 @@ function unfold(bytes: Uint8Array, pieceMaxMm = A4_INSIDE, name = 'mesh.stl') {
 const snap = (x: number) => Math.round(x * 1e6) / 1e6;
 const ring = (p: readonly Vec2Mm[]): [number, number][] => p.map((q) => [snap(q[0]), snap(q[1])]);
 
-function multiArea(mp: MultiPolygon): number {
-  let area = 0;
-  for (const poly of mp)
-    poly.forEach((r, k) => {
-      let s = 0;
-      for (let i = 0; i < r.length; i++)
-        s += r[i]![0] * r[(i + 1) % r.length]![1] - r[(i + 1) % r.length]![0] * r[i]![1];
-      area += (k === 0 ? 1 : -1) * Math.abs(s / 2);
-    });
-  return area;
-}
-
 /**
  * Overlap inside one piece, judged by polygon-clipping (npm registry): the summed area of its faces and tabs
  * less the area of their union. Zero (to rounding) when nothing overlaps.
  */
 function overlapAreaMm2(piece: Piece): number {
   const polys = [...piece.hinge.faces.map((f) => f.polygonMm), ...piece.tabs.map((t) => t.polygonMm)];
-  const sum = polys.reduce((s, p) => s + multiArea([[ring(p)]]), 0);
+  const sum = polys.reduce((s, p) => s + multiPolygonArea([[ring(p)]]), 0);
   const union = polygonClipping.union([[ring(polys[0]!)]], ...polys.slice(1).map((p) => [[ring(p)]] as MultiPolygon));
-  return sum - multiArea(union);
+  return sum - multiPolygonArea(union);
 }
 
 /**
