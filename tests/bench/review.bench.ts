@@ -87,7 +87,7 @@ async function load(url: string, cookie: string, duration: number) {
 const bench = await benchAppStart({
   name: 'review',
   database: process.env.KW_BENCH_DATABASE ?? 'kitwright_bench',
-  seed: reviewBenchSeed,
+  seed: (knex) => reviewBenchSeed(knex),
   env: PHOTO_BENCH_ENV,
 });
 try {

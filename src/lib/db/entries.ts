@@ -213,42 +213,45 @@ const QUEUE_SORT_COLUMNS: Record<ReviewQueueQuery['sort'], string> = {
   activity: 'entries.activity_slug',
 };
 
-/** One page of the review queue (submitted, teacher-approved entries) with the total that match the filters. */
+/**
+ * The review queue (submitted, teacher-approved entries) under the filters. A school is matched through its
+ * classes as a semi-join, so the count reads no other table and the partial queue indexes of
+ * migrations/20261205123000_add_review_queue_filter_indexes.ts serve it alone.
+ */
+function reviewQueueFiltered(q: ReviewQueueQuery, now: Date, trx: Knex) {
+  const query = trx('entries').where('entries.state', 'submitted').andWhere('entries.teacher_approved', true);
+  if (q.schoolId) query.whereIn('entries.class_id', trx('classes').select('id').where('school_id', q.schoolId));
+  if (q.classId) query.where('entries.class_id', q.classId);
+  if (q.activity) query.where('entries.activity_slug', q.activity);
+  if (q.minAgeDays !== undefined)
+    query.where('entries.submitted_at', '<=', new Date(now.getTime() - q.minAgeDays * 86_400_000));
+  if (q.maxAgeDays !== undefined)
+    query.where('entries.submitted_at', '>=', new Date(now.getTime() - (q.maxAgeDays + 1) * 86_400_000));
+  return query;
+}
+
+/** One page of the review queue with the total that match the filters; the two queries run side by side. */
 export async function reviewQueuePage(
   q: ReviewQueueQuery,
   now: Date,
   trx: Knex = db(),
 ): Promise<{ rows: EntryJoined[]; total: number }> {
-  const filtered = () => {
-    const query = trx('entries')
-      .join('classes', 'classes.id', 'entries.class_id')
-      .where('entries.state', 'submitted')
-      .andWhere('entries.teacher_approved', true);
-    if (q.schoolId) query.where('classes.school_id', q.schoolId);
-    if (q.classId) query.where('entries.class_id', q.classId);
-    if (q.activity) query.where('entries.activity_slug', q.activity);
-    if (q.minAgeDays !== undefined)
-      query.where('entries.submitted_at', '<=', new Date(now.getTime() - q.minAgeDays * 86_400_000));
-    if (q.maxAgeDays !== undefined)
-      query.where('entries.submitted_at', '>=', new Date(now.getTime() - (q.maxAgeDays + 1) * 86_400_000));
-    return query;
-  };
-  const countRow = await filtered().count<{ count: string }[]>({ count: '*' }).first();
-  const ids = filtered()
-    .leftJoin('schools', 'schools.id', 'classes.school_id')
+  const order = [
+    { column: QUEUE_SORT_COLUMNS[q.sort], order: q.dir, nulls: 'last' as const },
+    { column: 'entries.id', order: q.dir },
+  ];
+  const ids = reviewQueueFiltered(q, now, trx)
     .select('entries.id')
-    .orderBy([
-      { column: QUEUE_SORT_COLUMNS[q.sort], order: q.dir, nulls: 'last' },
-      { column: 'entries.id', order: q.dir },
-    ])
+    .orderBy(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  const rows = (await entrySelect(trx)
-    .whereIn('entries.id', ids)
-    .orderBy([
-      { column: QUEUE_SORT_COLUMNS[q.sort], order: q.dir, nulls: 'last' },
-      { column: 'entries.id', order: q.dir },
-    ])) as EntryJoined[];
+  // Only a sort by class or school needs those tables to choose the page.
+  if (q.sort === 'class' || q.sort === 'school') ids.join('classes', 'classes.id', 'entries.class_id');
+  if (q.sort === 'school') ids.leftJoin('schools', 'schools.id', 'classes.school_id');
+  const [countRow, rows] = await Promise.all([
+    reviewQueueFiltered(q, now, trx).count<{ count: string }[]>({ count: '*' }).first(),
+    entrySelect(trx).whereIn('entries.id', ids).orderBy(order) as Promise<EntryJoined[]>,
+  ]);
   return { rows, total: Number(countRow?.count ?? 0) };
 }
 
