@@ -6,6 +6,7 @@
  */
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import autocannon from 'autocannon';
 import knexFactory, { type Knex } from 'knex';
 import { appEnv } from '../../scripts/lib/app-env';
 import { appBuild } from '../../scripts/lib/build';
@@ -52,6 +53,31 @@ export function figure(name: string, xs: readonly number[], unit: string, target
     `${name.padEnd(52)} min ${f(Math.min(...xs))}  median ${f(m)}  max ${f(Math.max(...xs))} ${unit.padEnd(6)}` +
       (target ? `  target ${target.op} ${target.value}: ${met ? 'met' : 'MISSED'}` : ''),
   );
+}
+
+/**
+ * One autocannon run on a URL, for `duration` s or until `amount` requests are answered: every answer's latency
+ * (ms, from autocannon's per-response event, so any percentile can be taken), the requests a second, and the
+ * answers that were not 200 or failed.
+ */
+export async function latenciesUnderLoad(
+  url: string,
+  o: { connections: number; headers?: Record<string, string>; timeoutS?: number } & (
+    { duration: number } | { amount: number }
+  ),
+) {
+  const latencies: number[] = [];
+  let other = 0;
+  const result = await new Promise<autocannon.Result>((resolve, reject) => {
+    const run = autocannon({ ...o, url, headers: o.headers ?? {}, timeout: o.timeoutS ?? 10 }, (err, res) =>
+      err ? reject(err) : resolve(res),
+    );
+    run.on('response', (_client, status, _bytes, ms) => {
+      latencies.push(ms);
+      if (status !== 200) other += 1;
+    });
+  });
+  return { latencies, other: other + result.errors + result.timeouts, rps: result.requests.average };
 }
 
 /** Resident memory of a process, MB (VmRSS in /proc/PID/status). */

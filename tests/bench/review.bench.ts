@@ -10,10 +10,9 @@
  * Ports: PORT (app, 4321); the project's PostgreSQL (KW_PG_PORT). Run `npm run build` first after changing code.
  */
 import { loadavg } from 'node:os';
-import autocannon from 'autocannon';
 import type { Knex } from 'knex';
 import { userSessionCookie } from '../api/auth-helpers';
-import { BENCH_ROUNDS, benchAppStart, figure, percentile } from './bench-harness';
+import { BENCH_ROUNDS, benchAppStart, figure, latenciesUnderLoad, percentile } from './bench-harness';
 import { PHOTO_BENCH_ENV, photoUploadFigures } from './photo-upload-figures';
 import { REVIEW_BENCH_COORDINATOR_EMAIL, REVIEW_BENCH_ENTRIES, reviewBenchSeed } from './review-bench-seed';
 
@@ -38,6 +37,10 @@ async function queueCount(knex: Knex, where: string, bindings: unknown[]): Promi
   );
   return rows[0].n as number;
 }
+
+/** One run of SECONDS s (or `duration`) on a queue page as the coordinator. */
+const load = (url: string, cookie: string, duration: number) =>
+  latenciesUnderLoad(url, { connections: CONNECTIONS, duration, headers: { cookie } });
 
 /** Four pages a coordinator asks for: each filtered one way and sorted another. */
 async function queuePages(knex: Knex): Promise<QueuePage[]> {
@@ -66,22 +69,6 @@ async function queuePages(knex: Knex): Promise<QueuePage[]> {
         queueCount(k, 'c.school_id = ? AND e.submitted_at >= ?', [schoolId, new Date(Date.now() - 15 * DAY_MS)]),
     },
   ];
-}
-
-/** One autocannon run on a URL; every answer's latency (ms) and the count of answers that were not 200. */
-async function load(url: string, cookie: string, duration: number) {
-  const latencies: number[] = [];
-  let other = 0;
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const run = autocannon({ url, connections: CONNECTIONS, duration, headers: { cookie } }, (err, res) =>
-      err ? reject(err) : resolve(res),
-    );
-    run.on('response', (_client, status, _bytes, ms) => {
-      latencies.push(ms);
-      if (status !== 200) other += 1;
-    });
-  });
-  return { latencies, other: other + result.errors + result.timeouts, rps: result.requests.average };
 }
 
 const bench = await benchAppStart({
