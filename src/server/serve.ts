@@ -11,7 +11,8 @@
  *    streamed NDJSON answer so each stage line reaches the client when it happens, then into Astro.
  * 3. The client's address is the socket's: an X-Forwarded-For header is dropped before Astro reads it (Astro
  *    would report its leftmost entry as clientAddress) unless TRUST_PROXY says proxies of ours put it there.
- * 4. Under /api/ every answer is JSON, also where Astro is never asked (src/lib/http/raw-target.ts): a target whose
+ * 4. A live link's `/go/CODE` is answered before all of that (./live-link-redirect.ts): one query, one 302.
+ * 5. Under /api/ every answer is JSON, also where Astro is never asked (src/lib/http/raw-target.ts): a target whose
  *    encoded dot segments climb out of /api/ is a JSON 404, and a request node:http cannot parse a JSON 400/431.
  *    An absolute-form target (`GET http://host/path`) is served as its path; one that is no path at all is a 400.
  */
@@ -31,6 +32,7 @@ import {
 } from '../lib/http/raw-target';
 import { requestIdNew } from '../lib/http/request-id';
 import { pageSecurityHeaders } from '../lib/http/security-headers';
+import { liveLinkRedirect } from './live-link-redirect';
 
 /** Cache-Control of hashed build assets: a new build gives a changed file a new name. */
 export const IMMUTABLE_CACHE_CONTROL = 'public, max-age=31536000, immutable';
@@ -112,12 +114,14 @@ const hops = trustedProxyHops();
 const server = createServer((req, res) => {
   if (hops === 0) delete req.headers['x-forwarded-for'];
   if (targetRefused(req, res)) return;
-  assets(req, res, () => {
-    compress(req as Parameters<typeof compress>[0], res as Parameters<typeof compress>[1], () => {
-      flushStreamedLines(res);
-      void astro(req, res);
-    });
-  });
+  liveLinkRedirect(req, res, SECURITY_HEADERS, () =>
+    assets(req, res, () => {
+      compress(req as Parameters<typeof compress>[0], res as Parameters<typeof compress>[1], () => {
+        flushStreamedLines(res);
+        void astro(req, res);
+      });
+    }),
+  );
 });
 
 // A request node cannot parse: a JSON 400 (431 for an oversize head) instead of node's empty one.

@@ -1,6 +1,7 @@
 /**
  * Live links through the running server: a new link redirects /go/CODE to its target and counts the scan;
- * changing the target sends the next scan there; a scan row holds the link id, the day and the count only;
+ * changing the target sends the next scan there; a scan row holds the link id, the day, its counter shard and
+ * the count only; concurrent scans are counted exactly and the chart sums each day's rows;
  * an unknown code answers a friendly page; the QR code decodes (jsQR) to the /go/ address.
  */
 import type { Knex } from 'knex';
@@ -22,6 +23,23 @@ const send = (method: string, path: string, body: unknown) =>
     body: JSON.stringify(body),
   });
 
+/**
+ * The link's scan rows, checked to hold the link id, the UTC day, the counter row's shard and the count only
+ * (nothing about who scanned: the shard is a number 0–15 the database draws), their counts summing to `total`.
+ */
+async function scanRowsExpect(linkId: string, total: number) {
+  const rows = await knex('live_link_scans')
+    .where({ link_id: linkId })
+    .select('*', knex.raw("to_char(day, 'YYYY-MM-DD') AS day"));
+  for (const row of rows) {
+    expect(Object.keys(row).sort()).toEqual(['count', 'day', 'link_id', 'shard']);
+    expect(row.shard).toBeGreaterThanOrEqual(0);
+    expect(row.shard).toBeLessThan(16);
+  }
+  expect(rows.reduce((sum, r) => sum + Number(r.count), 0)).toBe(total);
+  return rows as { day: string; shard: number; count: string }[];
+}
+
 beforeAll(async () => {
   knex = testKnex();
   cookie = await userSessionCookie(knex, (await accountCreate(knex, { role: 'coordinator' })).id);
@@ -40,10 +58,51 @@ describe('live links', () => {
     expect((await send('PATCH', `/api/links/${link.id}`, { target: 'https://example.org/mission' })).status).toBe(200);
     const second = await api(`/go/${link.code.toLowerCase()}`);
     expect(second.headers.get('location')).toBe('https://example.org/mission');
-    const rows = await knex('live_link_scans').where({ link_id: link.id });
-    expect(rows).toHaveLength(1);
-    expect(Object.keys(rows[0]!).sort()).toEqual(['count', 'day', 'link_id']);
-    expect(Number(rows[0]!.count)).toBe(2);
+    await scanRowsExpect(link.id, 2);
+  });
+
+  it('counts concurrent scans exactly, spread over the day’s counter rows, and charts their sum', async () => {
+    const { link } = await (await send('POST', '/api/links', { title: 'Busy poster', target: '/activities' })).json();
+    const SCANS = 200;
+    const answers = await Promise.all(Array.from({ length: SCANS }, () => api(`/go/${link.code}`)));
+    expect(answers.map((r) => r.status)).toEqual(Array(SCANS).fill(302));
+    const rows = await scanRowsExpect(link.id, SCANS);
+    // 200 scans on one of 16 rows each at random: all on one row has probability 16^-199.
+    expect(rows.length).toBeGreaterThan(1);
+    const { link: read, scansByDay } = await (await api(`/api/links/${link.id}`, { headers: { cookie } })).json();
+    expect(read.scans).toBe(SCANS);
+    expect(scansByDay).toEqual([{ day: rows[0]!.day, count: SCANS }]);
+  });
+
+  it('charts each day as the sum of its counter rows, oldest first', async () => {
+    const { link } = await (await send('POST', '/api/links', { title: 'Old bookmark', target: '/' })).json();
+    await knex('live_link_scans').insert([
+      { link_id: link.id, day: '2026-03-01', shard: 0, count: 2 },
+      { link_id: link.id, day: '2026-03-01', shard: 5, count: 3 },
+      { link_id: link.id, day: '2026-03-01', shard: 15, count: 4 },
+      { link_id: link.id, day: '2026-02-27', shard: 9, count: 6 },
+    ]);
+    const { link: read, scansByDay } = await (await api(`/api/links/${link.id}`, { headers: { cookie } })).json();
+    expect(scansByDay).toEqual([
+      { day: '2026-02-27', count: 6 },
+      { day: '2026-03-01', count: 9 },
+    ]);
+    expect(read.scans).toBe(15);
+  });
+
+  it('answers a scan with the security headers and a request id, and a target with spaces or accents encoded', async () => {
+    const target = 'https://example.org/día del cohete';
+    const { link } = await (await send('POST', '/api/links', { title: 'Accents', target })).json();
+    const res = await api(`/go/${link.code}/?from=poster`);
+    expect(res.status).toBe(302);
+    // WHATWG URL parser's percent-encoding of the same target (Node's URL).
+    expect(res.headers.get('location')).toBe(new URL(target).toString());
+    expect(res.headers.get('cache-control')).toBe('no-store');
+    expect(res.headers.get('x-content-type-options')).toBe('nosniff');
+    expect(res.headers.get('x-request-id')).toMatch(/^[0-9a-f]{12}$/);
+    const head = await api(`/go/${link.code}`, { method: 'HEAD' });
+    expect(head.status).toBe(302);
+    await scanRowsExpect(link.id, 2);
   });
 
   it('refuses a target that is not https or a path here', async () => {

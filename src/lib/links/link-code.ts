@@ -48,6 +48,36 @@ export function linkCodeNormal(typed: string): string | null {
   return LINK_CODE_PATTERN.test(code) ? code : null;
 }
 
+/**
+ * The code a request-target asks for when it is a live link's address (`/go/CODE`, any case, one optional
+ * trailing slash, any query), in stored form; null for any other target, or a segment whose percent-encoding is
+ * malformed or that cannot be a code. The same paths Astro's `/go/[code]` route matches with a valid code.
+ */
+export function linkCodeFromTarget(target: string): string | null {
+  const match = /^\/go\/([^/?#]+)\/?(?:[?#]|$)/.exec(target);
+  if (!match) return null;
+  try {
+    return linkCodeNormal(decodeURIComponent(match[1]!));
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * A target as the value of a Location header: each character outside printable ASCII (space, controls,
+ * non-ASCII) percent-encoded as UTF-8, as the WHATWG URL parser encodes it (a lone surrogate as U+FFFD), and the
+ * rest as stored; a header field value cannot carry those characters (RFC 9110, 5.5).
+ */
+export function linkLocation(target: string): string {
+  return target.replace(/[^\x21-\x7e]/gu, (c) => {
+    try {
+      return encodeURIComponent(c);
+    } catch {
+      return '%EF%BF%BD';
+    }
+  });
+}
+
 /** True for a path on this site ("/activities/…", not "//host") or an https URL with a host. */
 export function linkTargetValid(target: string): boolean {
   if (target.startsWith('/')) return !target.startsWith('//') && !target.includes('\\');
