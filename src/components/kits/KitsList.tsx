@@ -1,6 +1,7 @@
 import { useRef, useState } from 'react';
 import { QueryClient, QueryClientProvider, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../../lib/http/client';
+import { KIT_TITLE_MAX_LENGTH } from '../../lib/kit/kit-settings';
 import {
   kitDeleteRequest,
   kitDuplicateRequest,
@@ -184,7 +185,7 @@ function KitCard({ kit, canEdit, onRename, onDuplicate, onDelete }: CardProps) {
             id={`title-${kit.id}`}
             name="title"
             defaultValue={kit.title}
-            maxLength={80}
+            maxLength={KIT_TITLE_MAX_LENGTH}
             className="field-input mt-0"
             autoFocus
           />

@@ -15,6 +15,7 @@ import { demoModelById, demoModelResolve } from './demo-models.server';
 import { ENGINE_VERSION } from './engine-version';
 import { kitRequestOf, type KitInputs } from './kit-inputs';
 import type { KitRequest } from './kit-request';
+import { KIT_TITLE_MAX_LENGTH } from './kit-settings';
 import { kitOutputBuild } from './kit-build.server';
 import { kitLinks, type KitView } from './kit-view';
 
@@ -114,7 +115,7 @@ export async function kitDuplicate(actor: Actor, row: KitRow, siteUrl: string, c
   return kitSave(
     actor,
     classId ?? row.class_id,
-    { ...inputs, title: title ?? `${row.title} (copy)`.slice(0, 80) },
+    { ...inputs, title: title ?? `${row.title} (copy)`.slice(0, KIT_TITLE_MAX_LENGTH) },
     siteUrl,
   );
 }
