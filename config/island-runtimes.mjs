@@ -13,6 +13,15 @@ import MagicString from 'magic-string';
  * from the 3D island too. This plugin aliases it per importer instead: our files outside the preview folder,
  * and the React libraries those islands use (TanStack Query, react-hook-form), get preact/compat; everything
  * else (the preview, @react-three/*, @astrojs/react's client) gets React.
+ *
+ * Why this plugin rather than the supported design (every island on Preact with @astrojs/preact's `compat`,
+ * and the 3D preview drawn with three.js directly, without @react-three/fiber): that design needs no plugin,
+ * and is the one to move to. Today it would mean rewriting the preview's components (about 1,200 lines
+ * in src/components/preview: canvas, frame loop, orbit controls, fold animation, the frame-rendered signal
+ * the browser tests wait for) as imperative three.js, in one change, while that folder is being extended;
+ * the plugin is under 100 lines. Its two risks are held by tests: tests/config/island-runtimes.test.ts (which files
+ * get compat) and tests/config/island-runtimes-libraries.test.ts (COMPAT_LIBRARIES is exactly the React
+ * libraries the Preact islands load, and the Astro internal below still exists).
  */
 
 /** Globs for the integrations' `include` options (which JSX transform and renderer a file gets). */
