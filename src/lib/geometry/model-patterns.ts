@@ -15,7 +15,8 @@ import { coneDevelopment, conePiece } from './cone-development';
 import { tubePiece } from './tube-pattern';
 import { deployablePanelFrame, panelBodyLabel, panelPiece } from './panel-pattern';
 import { WIRE_ANCHOR_SIZE_MM, wireAnchorPiece, wireAnchorPlacement, wireBoomThread } from './wire-boom';
-import { arcPoints, PAPER_GSM_MAX, PAPER_GSM_MIN, paperOverlapMm, paperTabDepthMm } from './paper';
+import { arcPoints, paperOverlapMm, paperTabDepthMm } from './paper';
+import { PaperGsmSchema, ScaleDenominatorSchema } from './pattern-option-schemas';
 import { BUILD_GRADE_BAND_DEFAULT, BUILD_GRADE_BANDS, BUILDABILITY_MINIMUMS } from './buildability';
 import { boomStockFor, coneTooSmall, type PartSubstitute } from './part-substitutes';
 import { pieceFromNet } from './piece-builder';
@@ -23,21 +24,10 @@ import { frameApply } from './hinge-tree';
 import { vec3Combine } from './vec';
 import { launchStackPieces } from './launch-stack';
 
-/** Largest scale denominator accepted (1:100 000): beyond it every real spacecraft is dust on paper. */
-export const SCALE_DENOMINATOR_MAX = 100_000;
-
 export const PatternOptionsSchema = z.object({
   /** The kit is 1:scaleDenominator of the real model. */
-  scaleDenominator: z
-    .number()
-    .finite('the scale must be a finite number')
-    .min(1, 'the scale must be 1:1 or smaller (denominator at least 1)')
-    .max(SCALE_DENOMINATOR_MAX, `the scale denominator must be at most ${SCALE_DENOMINATOR_MAX}`),
-  paperGsm: z
-    .number()
-    .finite()
-    .min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`)
-    .max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`),
+  scaleDenominator: ScaleDenominatorSchema,
+  paperGsm: PaperGsmSchema,
   /** The class the kit is for: sets anchor sizes and which parts are too fine for paper. */
   gradeBand: z.enum(BUILD_GRADE_BANDS).default(BUILD_GRADE_BAND_DEFAULT),
 });

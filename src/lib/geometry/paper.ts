@@ -4,6 +4,8 @@
  */
 export const PAPER_GSM_MIN = 80;
 export const PAPER_GSM_MAX = 300;
+/** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
+export const PAPER_GSM_DEFAULT = 160;
 /** From memory: office paper and card are roughly 0.7–0.9 g/cm³; 0.8 g/cm³ is assumed throughout. */
 export const PAPER_DENSITY_G_PER_CM3 = 0.8;
 /**

@@ -6,14 +6,14 @@
 import type { Model } from '../geometry/model-schema';
 import { solvePaperScale } from '../layout/scale-solver';
 import type { SheetSizeId } from '../layout/sheet-sizes';
-import { KIT_DEFAULT_PAPER_GSM } from './kit-inputs';
+import { PAPER_GSM_DEFAULT } from '../geometry/paper';
 
 /** The example's inputs: the demo model, its scale and the builder's default paper. */
 export const HOME_EXAMPLE = {
   modelId: 'skein-probe',
   scaleDenominator: 20,
   sheetSizeId: 'letter' as SheetSizeId,
-  paperGsm: KIT_DEFAULT_PAPER_GSM,
+  paperGsm: PAPER_GSM_DEFAULT,
 } as const;
 
 const solved = new WeakMap<Model, string>();

@@ -11,7 +11,8 @@ import { VENUES } from '../layout/venues';
 import { AppError } from '../errors';
 import { BUILD_GRADE_BAND_DEFAULT } from '../geometry/buildability';
 import { demoModelById, demoModels } from './demo-models.server';
-import { KIT_DEFAULT_PAPER_GSM, KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
+import { PAPER_GSM_DEFAULT } from '../geometry/paper';
+import { KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
 import { INSTRUCTIONS_PLACE_DEFAULT, type KitForm } from './kit-settings';
 import type { KitBuilderProps } from './kit-builder-props';
@@ -35,7 +36,7 @@ export async function kitBuilderProps(
   const base = {
     modelId: model.id,
     sheetSizeId,
-    paperGsm: KIT_DEFAULT_PAPER_GSM,
+    paperGsm: PAPER_GSM_DEFAULT,
     units: 'metric',
     venue: { kind: 'preset', id: 'classroom' },
     gradeBand: gradeClass?.gradeBand ?? BUILD_GRADE_BAND_DEFAULT,

@@ -4,7 +4,7 @@
  */
 import { z } from 'zod';
 import { ModelSchema, type Model } from '../geometry/model-schema';
-import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
+import { SCALE_DENOMINATOR_MAX } from '../geometry/pattern-option-schemas';
 import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
 import { PRINT_CHOICE_LIMITS } from '../layout/print-plate';
 import {
@@ -44,9 +44,6 @@ export const KitSettingsSchema = KitSettingsBaseSchema.extend({
   gradeBand: KitSettingsBaseSchema.shape.gradeBand.default(BUILD_GRADE_BAND_DEFAULT),
   instructionsAt: KitSettingsBaseSchema.shape.instructionsAt.default(INSTRUCTIONS_PLACE_DEFAULT),
 });
-
-/** Paper weight a new kit starts with: card stock that folds cleanly (common practice, no source). */
-export const KIT_DEFAULT_PAPER_GSM = 160;
 
 const DemoModelIdSchema = z
   .string()

@@ -6,8 +6,8 @@
 import { z } from 'zod';
 import { KitTitleSchema } from './kit-settings';
 import { ModelSchema } from '../geometry/model-schema';
-import { SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
-import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
+import { PAPER_GSM_DEFAULT } from '../geometry/paper';
+import { PaperGsmSchema, ScaleDenominatorSchema } from '../geometry/pattern-option-schemas';
 import { PRINT_CHOICE_DEFAULT, PRINT_CHOICE_LIMITS, type PrintChoice } from '../layout/print-plate';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { INSTRUCTIONS_PLACE_DEFAULT, INSTRUCTIONS_PLACES, printChoiceSchema } from './kit-settings';
@@ -22,19 +22,11 @@ export const KitRequestSchema = z.object({
   /** Title printed on every sheet; the model's name when left out. */
   title: KitTitleSchema.optional(),
   /** The kit is 1:N of the real spacecraft; N ≥ 1. */
-  scaleDenominator: z
-    .number({ invalid_type_error: 'scale must be a number N of 1:N' })
-    .finite('scale must be a finite number')
-    .min(1, 'scale must be 1:1 or smaller, e.g. 20 for 1:20')
-    .max(SCALE_DENOMINATOR_MAX, `scale must be at most 1:${SCALE_DENOMINATOR_MAX}`),
+  scaleDenominator: ScaleDenominatorSchema,
   /** Paper or stock: a5, a4, a3, letter, legal, tabloid or panel-1220x2440. */
   sheetSizeId: z.enum(SHEET_SIZE_IDS),
   /** Paper weight in g/m², which sets tab widths and fold allowances. */
-  paperGsm: z
-    .number()
-    .min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`)
-    .max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`)
-    .default(160),
+  paperGsm: PaperGsmSchema.default(PAPER_GSM_DEFAULT),
   /** Kits per class (one per team). */
   copies: z
     .number()

@@ -1,10 +1,12 @@
 /**
- * The kit builder's settings as a zod schema built from the engine's limits. Imports zod alone, so the
- * builder island can validate with the very rules the API applies without shipping the engine: the page
- * passes KIT_SETTINGS_LIMITS (src/lib/kit/kit-inputs.ts) to the island as plain props.
+ * The kit builder's settings as a zod schema built from the engine's limits. Imports zod and the shared scale
+ * and paper schemas alone, so the builder island can validate with the very rules the API applies without
+ * shipping the engine: the page passes KIT_SETTINGS_LIMITS (src/lib/kit/kit-inputs.ts) to the island as plain
+ * props (the inputs' min and max attributes, the id lists).
  */
 import { z } from 'zod';
 import { TextSchema } from '../text-schema';
+import { PaperGsmSchema, ScaleDenominatorSchema } from '../geometry/pattern-option-schemas';
 
 /** The engine limits the settings schema is built from (numbers and id lists only, so they serialise). */
 export interface KitSettingsLimits<S extends string = string, V extends string = string, G extends string = string> {
@@ -93,20 +95,12 @@ export function kitSettingsSchema<S extends string, V extends string, G extends 
     /** The activity the kit is for (its slug), if any. */
     activitySlug: z.string().regex(SLUG, 'an activity is named by its slug, like "shake-test"').max(80).optional(),
     /** The kit is 1:N of the real spacecraft. */
-    scaleDenominator: z
-      .number({ invalid_type_error: 'the scale must be a number N of 1:N' })
-      .finite('the scale must be a finite number')
-      .min(1, 'the scale must be 1:1 or smaller, e.g. 20 for 1:20')
-      .max(limits.scaleDenominatorMax, `the scale must be at most 1:${limits.scaleDenominatorMax}`),
+    scaleDenominator: ScaleDenominatorSchema,
     sheetSizeId: z.enum(limits.sheetSizeIds as [S, ...S[]], {
       errorMap: () => ({ message: `the sheet must be one of ${limits.sheetSizeIds.join(', ')}` }),
     }),
     /** Paper weight, g/m². */
-    paperGsm: z
-      .number({ invalid_type_error: 'the paper weight must be a number of g/m²' })
-      .finite('the paper weight must be a finite number')
-      .min(limits.paperGsmMin, `the paper weight must be at least ${limits.paperGsmMin} g/m²`)
-      .max(limits.paperGsmMax, `the paper weight must be at most ${limits.paperGsmMax} g/m²`),
+    paperGsm: PaperGsmSchema,
     /** Kits for the class: one per team. */
     copies: z
       .number({ invalid_type_error: 'copies must be a number' })

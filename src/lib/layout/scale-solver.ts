@@ -9,7 +9,8 @@ import { InputError } from '../errors';
 import type { Model } from '../geometry/model-schema';
 import type { Piece } from '../geometry/types';
 import type { PartSubstitute } from '../geometry/part-substitutes';
-import { modelPatterns, SCALE_DENOMINATOR_MAX } from '../geometry/model-patterns';
+import { modelPatterns } from '../geometry/model-patterns';
+import { SCALE_DENOMINATOR_MAX } from '../geometry/pattern-option-schemas';
 import {
   BUILD_GRADE_BAND_DEFAULT,
   BUILD_GRADE_BAND_FLOOR,

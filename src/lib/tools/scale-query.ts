@@ -5,7 +5,8 @@
  */
 import { z } from 'zod';
 import { TextSchema } from '../text-schema';
-import { PAPER_GSM_MAX, PAPER_GSM_MIN } from '../geometry/paper';
+import { PAPER_GSM_DEFAULT } from '../geometry/paper';
+import { PaperGsmSchema } from '../geometry/pattern-option-schemas';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
 import { CustomVenueSchema, VENUES, type VenueId } from '../layout/venues';
 import { zodFieldErrors } from '../validation';
@@ -22,12 +23,7 @@ export const ScaleQuerySchema = z
     sheet: z.preprocess(blankToUndefined, z.enum(SHEET_SIZE_IDS).default('letter')),
     gsm: z.preprocess(
       (v) => (blankToUndefined(v) === undefined ? undefined : Number(v)),
-      z
-        .number({ invalid_type_error: 'paper weight must be a number of g/m²' })
-        .finite('paper weight must be a number of g/m²')
-        .min(PAPER_GSM_MIN, `paper weight must be at least ${PAPER_GSM_MIN} g/m²`)
-        .max(PAPER_GSM_MAX, `paper weight must be at most ${PAPER_GSM_MAX} g/m²`)
-        .default(160),
+      PaperGsmSchema.default(PAPER_GSM_DEFAULT),
     ),
     venue: z.preprocess(blankToUndefined, z.enum([...VENUE_IDS, 'custom']).default('classroom')),
     lengthM: num(CustomVenueSchema.shape.lengthM),

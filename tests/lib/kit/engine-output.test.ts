@@ -16,7 +16,8 @@ import { buildKit, type KitBuild } from '../../../src/lib/kit/build-kit';
 import { contentHashCanonicalJson } from '../../../src/lib/kit/content-hash';
 import { demoModelResolve, demoModels } from '../../../src/lib/kit/demo-models.server';
 import { ENGINE_VERSION } from '../../../src/lib/kit/engine-version';
-import { KIT_DEFAULT_PAPER_GSM, KitInputsSchema, kitRequestOf, kitVenue } from '../../../src/lib/kit/kit-inputs';
+import { PAPER_GSM_DEFAULT } from '../../../src/lib/geometry/paper';
+import { KitInputsSchema, kitRequestOf, kitVenue } from '../../../src/lib/kit/kit-inputs';
 import { INSTRUCTIONS_PLACE_DEFAULT } from '../../../src/lib/kit/kit-settings';
 import type { KitRequest } from '../../../src/lib/kit/kit-request';
 import { BUILD_GRADE_BAND_DEFAULT } from '../../../src/lib/geometry/buildability';
@@ -73,7 +74,7 @@ function builderRequest(modelId: string, sheetSizeId: (typeof SHEET_IDS)[number]
   const inputs = KitInputsSchema.parse({
     modelId,
     sheetSizeId,
-    paperGsm: KIT_DEFAULT_PAPER_GSM,
+    paperGsm: PAPER_GSM_DEFAULT,
     units: 'metric',
     venue: { kind: 'preset', id: 'classroom' },
     gradeBand: BUILD_GRADE_BAND_DEFAULT,
