@@ -292,6 +292,13 @@ const ROWS: Row[] = [
     expect: { anonymous: 401, classSession: 200, teacher: 200, otherTeacher: 200, coordinator: 400, admin: 400 },
   },
   { route: '/api/entries', method: 'POST', body: {}, expect: { ...accounts(400, 400, 403, 403), classSession: 400 } },
+  {
+    route: '/api/entries/booklet.pdf',
+    method: 'GET',
+    path: (f) => `/api/entries/booklet.pdf?classId=${f.classId}`,
+    expect: accounts(200, 404, 200, 200),
+  },
+  { route: '/api/entries/booklet.pdf', method: 'GET', expect: accounts(400, 400, 400, 400) },
   { route: '/api/entries/[id]', method: 'GET', path: `/api/entries/${MISSING}`, expect: all(404) },
   {
     route: '/api/entries/[id]',

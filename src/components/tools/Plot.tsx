@@ -8,7 +8,7 @@ import 'uplot/dist/uPlot.min.css';
 import { useEffect, useId, useRef, useState } from 'react';
 import type uPlot from 'uplot';
 import type { SavedPlot } from '../../lib/analysis/saved-result';
-import { PLOT_COLOURS, PLOT_DASHES } from '../../lib/render/plot-svg';
+import { PLOT_COLOURS, PLOT_DASHES } from '../../lib/render/plot-layout';
 import { numberFormat } from '../../lib/tools/number-format';
 
 interface Props {

@@ -190,3 +190,15 @@ export const ReviewQueueQuerySchema = z
   })
   .strict();
 export type ReviewQueueQuery = z.infer<typeof ReviewQueueQuerySchema>;
+
+/** Most entries one PDF booklet prints (a class's year, or one school's published entries). */
+export const JOURNAL_BOOKLET_ENTRIES_MAX = 200;
+
+/** Whose journal a PDF booklet prints: a class (its teacher: every entry; staff: published ones) or a school. */
+export const JournalBookletQuerySchema = z
+  .object({ classId: z.string().uuid().optional(), schoolId: z.string().uuid().optional() })
+  .strict()
+  .refine((q) => (q.classId === undefined) !== (q.schoolId === undefined), {
+    message: 'name either a class (?classId=) or a school (?schoolId=), not both',
+  });
+export type JournalBookletQuery = z.infer<typeof JournalBookletQuerySchema>;
