@@ -22,6 +22,16 @@ const TAPER_PAIRS_RAD = [
 ].map(([a, b]) => [(a! * Math.PI) / 180, (b! * Math.PI) / 180] as const);
 /** The clearance probe's sides lean out by this much more (radians, at most half the side's own angle). */
 const PROBE_WIDEN_RAD = (3 * Math.PI) / 180;
+/** Each slant pair with the tangents the fit needs: the tab's sides, its probe's sides, and their sum. */
+const TAPERS = TAPER_PAIRS_RAD.map((taper) => {
+  const probe = taper.map((t) => t - Math.min(PROBE_WIDEN_RAD, (Math.PI / 2 - t) / 2));
+  const tan = (t: number) => Math.tan(Math.max(0, t));
+  return {
+    tanSum: Math.tan(taper[0]) + Math.tan(taper[1]),
+    tabTan: [tan(taper[0]), tan(taper[1])] as const,
+    probeTan: [tan(probe[0]!), tan(probe[1]!)] as const,
+  };
+});
 const BISECTION_STEPS = 16;
 
 export interface FittedTab {
@@ -43,51 +53,75 @@ export function tabFit(
 ): FittedTab {
   const edgeMm = vec2Length(vec2Sub(b, a));
   const edge = tabEdge(a, b);
-  const near = obstacles.filter((o) => boundsNear(o, a, b, depthWantedMm));
+  const near = obstacles
+    .filter((o) => boundsNear(o, a, b, depthWantedMm))
+    .map((polygon) => ({
+      polygon,
+      bounds: pointsBounds(polygon),
+    }));
+  const probe: TabProbe = { edge, tan: [0, 0], corners: new Float64Array(8), obstacles: [] };
   let best: FittedTab = { polygonMm: [], depthMm: 0 };
-  for (const taper of TAPER_PAIRS_RAD) {
-    const depthCap = Math.min(depthWantedMm, (0.98 * edgeMm) / (Math.tan(taper[0]) + Math.tan(taper[1])));
+  for (const taper of TAPERS) {
+    const depthCap = Math.min(depthWantedMm, (0.98 * edgeMm) / taper.tanSum);
     if (depthCap <= best.depthMm) continue;
-    const probe = taper.map((t) => t - Math.min(PROBE_WIDEN_RAD, (Math.PI / 2 - t) / 2)) as unknown as readonly [
-      number,
-      number,
-    ];
-    const probeTan: readonly [number, number] = [Math.tan(Math.max(0, probe[0])), Math.tan(Math.max(0, probe[1]))];
+    probe.tan = taper.probeTan;
     // Every probe up to depthCap lies in the trapezoid at depthCap (its sides are rays from a and b), so an
     // obstacle clear of that trapezoid's bounds can never meet one: test only the rest.
-    const reach = pointsBounds(tabPolygon(edge, depthCap, probeTan));
+    tabProbeInto(edge, depthCap, probe.tan, probe.corners, false);
+    const reach = cornersBounds(probe.corners);
     const pad = 1e-6 * Math.max(1, edgeMm, depthCap);
-    const inReach = near.filter((o) => !boundsApart(pointsBounds(o), reach, pad));
-    const probeAt = new Float64Array(8);
-    // Whether any obstacle overlaps the probe is independent of their order: the last one hit is tried first.
-    const fits = (d: number) => {
-      tabProbeInto(edge, d, probeTan, probeAt);
-      for (let i = 0; i < inReach.length; i++) {
-        if (!probeOverlaps(probeAt, inReach[i]!)) continue;
-        if (i > 0) inReach.unshift(...inReach.splice(i, 1));
-        return false;
-      }
-      return true;
-    };
+    probe.obstacles = near.filter((o) => !boundsApart(o.bounds, reach, pad)).map((o) => o.polygon);
     // A probe grows with its depth, so a slant whose probe at the depth to beat is blocked cannot beat it.
     const floor = Math.max(best.depthMm, depthMinMm);
-    if (depthCap < floor || (floor > 0 && !fits(floor))) continue;
+    if (depthCap < floor || (floor > 0 && !probeFits(probe, floor))) continue;
     let depth = depthCap;
-    if (!fits(depth)) {
+    if (!probeFits(probe, depth)) {
       let lo = 0;
       let hi = depthCap;
       for (let i = 0; i < BISECTION_STEPS; i++) {
         const mid = (lo + hi) / 2;
-        if (fits(mid)) lo = mid;
+        if (probeFits(probe, mid)) lo = mid;
         else hi = mid;
       }
       depth = lo;
     }
-    const taperTan: readonly [number, number] = [Math.tan(Math.max(0, taper[0])), Math.tan(Math.max(0, taper[1]))];
-    if (depth > best.depthMm) best = { polygonMm: tabPolygon(edge, depth, taperTan), depthMm: depth };
+    if (depth > best.depthMm) best = { polygonMm: tabPolygon(edge, depth, taper.tabTan), depthMm: depth };
     if (best.depthMm >= depthWantedMm * 0.999) break;
   }
   return best;
+}
+
+/** The clearance probe of one slant pair on an edge, with the obstacles that may meet it. */
+interface TabProbe {
+  edge: TabEdge;
+  tan: readonly [number, number];
+  /** Scratch: the probe's corners at the depth last tried. */
+  corners: Float64Array;
+  obstacles: (readonly Vec2Mm[])[];
+}
+
+/**
+ * Whether the probe at depthMm is clear of every obstacle. The answer does not depend on their order, so the
+ * one that blocked it is moved to the front, where the next (usually deeper or equal) try meets it first.
+ */
+function probeFits(probe: TabProbe, depthMm: number): boolean {
+  tabProbeInto(probe.edge, depthMm, probe.tan, probe.corners);
+  const obstacles = probe.obstacles;
+  for (let i = 0; i < obstacles.length; i++) {
+    if (!probeOverlaps(probe.corners, obstacles[i]!)) continue;
+    if (i > 0) obstacles.unshift(...obstacles.splice(i, 1));
+    return false;
+  }
+  return true;
+}
+
+function cornersBounds(c: Float64Array): { minX: number; minY: number; maxX: number; maxY: number } {
+  return {
+    minX: Math.min(c[0]!, c[2]!, c[4]!, c[6]!),
+    minY: Math.min(c[1]!, c[3]!, c[5]!, c[7]!),
+    maxX: Math.max(c[0]!, c[2]!, c[4]!, c[6]!),
+    maxY: Math.max(c[1]!, c[3]!, c[5]!, c[7]!),
+  };
 }
 
 /** Edge a→b with its unit direction and outward normal (right of a→b). */
