@@ -30,10 +30,14 @@ export function hingeTreeFold(tree: HingeTree, fraction: number): FoldedFace[] {
   }
   const motions = new Map<number, Rigid>([[tree.root, IDENTITY]]);
   const children = new Map<number, typeof tree.joints>();
-  for (const j of tree.joints) children.set(j.parent, [...(children.get(j.parent) ?? []), j]);
+  for (const j of tree.joints) {
+    const list = children.get(j.parent);
+    if (list) list.push(j);
+    else children.set(j.parent, [j]);
+  }
   const queue = [tree.root];
-  while (queue.length > 0) {
-    const parent = queue.shift()!;
+  for (let q = 0; q < queue.length; q++) {
+    const parent = queue[q]!;
     for (const j of children.get(parent) ?? []) {
       const [a, b] = j.axisMm;
       const local = rotationAbout(a, b, j.angleRad * f);

@@ -60,7 +60,8 @@ const key = (p: Vec2Mm): string => `${Math.round(p[0] * KEY_SCALE)},${Math.round
 
 /** Builds the Piece; throws Error (a programming fault, not user input) if a joint's faces share no edge. */
 export function pieceFromNet(spec: NetPieceSpec): Piece {
-  const joints: HingeJoint[] = spec.joints.map(({ parent, child }) => netJoint(spec.faces, parent, child));
+  const faceKeys = spec.faces.map((f) => f.flatMm.map(key));
+  const joints: HingeJoint[] = spec.joints.map(({ parent, child }) => netJoint(spec.faces, faceKeys, parent, child));
   const folds: FoldLine[] = joints.map((j) => ({
     fromMm: j.axisMm[0],
     toMm: j.axisMm[1],
@@ -104,14 +105,17 @@ export function pieceFromNet(spec: NetPieceSpec): Piece {
   };
 }
 
-function netJoint(faces: NetFace[], parent: number, child: number): HingeJoint {
+/** The joint between two faces sharing an edge; `keys` are the faces' vertex keys (`key`), made once per face. */
+function netJoint(faces: NetFace[], keys: string[][], parent: number, child: number): HingeJoint {
   const p = faces[parent]!,
-    c = faces[child]!;
-  const parentEdges = new Set(p.flatMm.map((v, i) => `${key(v)}>${key(p.flatMm[(i + 1) % p.flatMm.length]!)}`));
+    pk = keys[parent]!,
+    c = faces[child]!,
+    ck = keys[child]!;
+  const parentEdges = new Set(pk.map((k, i) => `${k}>${pk[(i + 1) % pk.length]!}`));
   for (let i = 0; i < c.flatMm.length; i++) {
     const a = c.flatMm[i]!,
       b = c.flatMm[(i + 1) % c.flatMm.length]!;
-    if (!parentEdges.has(`${key(b)}>${key(a)}`)) continue;
+    if (!parentEdges.has(`${ck[(i + 1) % ck.length]!}>${ck[i]!}`)) continue;
     // The child lies left of a→b (CCW), so right of b→a: with that axis a positive angle folds it backward.
     const axis3 = vec3Unit(vec3Sub(c.modelMm[i]!, c.modelMm[(i + 1) % c.modelMm.length]!));
     const np = polygonNormal3(p.modelMm),
@@ -140,33 +144,45 @@ export function faceFrame(face: NetFace): PlaneFrame {
  * direction is interior; the rest chain into the CCW outline (the longest loop if several).
  */
 export function outlineOf(polygons: readonly Vec2Mm[][]): Vec2Mm[] {
-  const edges = new Map<string, { from: Vec2Mm; to: Vec2Mm; fromKey: string; toKey: string }>();
-  for (const poly of polygons) {
+  // Vertices get small integer ids by key, so an edge is one number (from id × count + to id) and the keys
+  // are worked out once per corner rather than twice per edge and again per lookup.
+  const ids = new Map<string, number>();
+  const idOf = (p: Vec2Mm): number => {
+    const k = key(p);
+    let id = ids.get(k);
+    if (id === undefined) ids.set(k, (id = ids.size));
+    return id;
+  };
+  const corners = polygons.map((poly) => poly.map(idOf));
+  const n = ids.size;
+  const edges = new Map<number, { from: Vec2Mm; fromId: number; toId: number }>();
+  polygons.forEach((poly, k) => {
+    const c = corners[k]!;
     for (let i = 0; i < poly.length; i++) {
       const from = poly[i]!,
         to = poly[(i + 1) % poly.length]!;
       if (vec2Length(vec2Sub(to, from)) === 0) continue;
-      const fromKey = key(from),
-        toKey = key(to);
-      const reverse = `${toKey}>${fromKey}`;
+      const fromId = c[i]!,
+        toId = c[(i + 1) % poly.length]!;
+      const reverse = toId * n + fromId;
       if (edges.has(reverse)) edges.delete(reverse);
-      else edges.set(`${fromKey}>${toKey}`, { from, to, fromKey, toKey });
+      else edges.set(fromId * n + toId, { from, fromId, toId });
     }
-  }
-  const byStart = new Map<string, { from: Vec2Mm; toKey: string }>();
-  for (const e of edges.values()) byStart.set(e.fromKey, e);
+  });
+  const byStart = new Map<number, { from: Vec2Mm; toId: number }>();
+  for (const e of edges.values()) byStart.set(e.fromId, e);
   let best: Vec2Mm[] = [];
-  const used = new Set<string>();
-  for (const startKey of byStart.keys()) {
-    if (used.has(startKey)) continue;
+  const used = new Set<number>();
+  for (const startId of byStart.keys()) {
+    if (used.has(startId)) continue;
     const loop: Vec2Mm[] = [];
-    let k: string | undefined = startKey;
+    let k: number | undefined = startId;
     while (k !== undefined && !used.has(k)) {
       used.add(k);
       const e = byStart.get(k);
       if (!e) break;
       loop.push(e.from);
-      k = e.toKey;
+      k = e.toId;
     }
     if (polygonArea(loop) > polygonArea(best)) best = loop;
   }
