@@ -1,8 +1,8 @@
 /**
  * The invented demo scenario: the Northfield Space Science Lab's outreach office, five
  * fictional schools, teachers and classes (student counts only), kits of the demo models, journal entries in
- * every state, one big-build event, two live links of the office and one per kit. Runs only on an empty
- * database (scripts/db.ts).
+ * every state with drawn photos (confirmed by their teachers) and saved results, one big-build event, two live
+ * links of the office and one per kit. Runs only on an empty database (scripts/db.ts).
  */
 import type { Knex } from 'knex';
 import { passwordHash } from '../src/lib/auth/password';
@@ -19,6 +19,7 @@ import { vibrationSavedResult } from '../src/lib/analysis/saved-result-tools';
 import { vibrationSampleCsv } from '../src/lib/tools/vibration-sample';
 import { DEMO_ACCOUNTS } from './data/demo-accounts';
 import { seedDemoEvents } from './data/demo-events';
+import { seedDemoPhotos } from './data/demo-photos';
 import { seedDemoReach } from './data/demo-reach';
 
 const SCHOOLS = [
@@ -143,78 +144,87 @@ export async function seed(knex: Knex): Promise<void> {
   const sample = vibrationInputFromCsv(vibrationSampleCsv(), { units: 'auto' });
   const shakeResult = JSON.stringify([vibrationSavedResult(vibrationAnalyse(sample.input, sample.unitSource))]);
 
-  await knex('entries').insert([
-    {
-      class_id: period3.id,
-      author_kind: 'team',
-      team_name: 'Team Comet',
-      title: 'Our probe survived the shake table',
-      body: 'Two tabs came loose on the first run; we added glue and it held for all three runs.',
-      saved_results: shakeResult,
-      state: 'published',
-      teacher_approved: true,
-      submitted_at: daysAgo(9),
-      reviewed_at: daysAgo(8),
-      published_at: daysAgo(8),
-      reviewed_by: coordinator.id,
-      activity_slug: 'shake-test',
-    },
-    {
-      class_id: period3.id,
-      author_kind: 'team',
-      team_name: 'Team Nebula',
-      title: 'Blanket versus no blanket',
-      body: 'With the foil blanket our puck warmed more slowly under the lamp.',
-      state: 'submitted',
-      teacher_approved: true,
-      submitted_at: daysAgo(2),
-      activity_slug: 'thermal-cycling',
-    },
-    {
-      class_id: room12.id,
-      author_kind: 'teacher',
-      title: 'Shaking the Wren at 20 Hz and 80 Hz',
-      body: 'We taped a phone to the Wren and shook it by hand on a foam block. The **PSD** shows our two shakes.',
-      state: 'submitted',
-      teacher_approved: true,
-      submitted_at: daysAgo(1),
-      activity_slug: 'shake-test',
-      saved_results: shakeResult,
-    },
-    {
-      class_id: room12.id,
-      author_kind: 'teacher',
-      title: 'Room 12 built the Wren',
-      body: 'Every team finished the body; the solar panels were the hardest part.',
-      state: 'returned',
-      review_note: "Lovely! Please remove the photo that shows a student's face, then resubmit.",
-      submitted_at: daysAgo(5),
-      reviewed_at: daysAgo(4),
-      reviewed_by: coordinator.id,
-    },
-    {
-      class_id: physics.id,
-      author_kind: 'team',
-      team_name: 'Magnetos',
-      title: 'How fast does a magnet fade?',
-      body: 'We measured the field of a fridge magnet from 2 cm to 20 cm.',
-      state: 'draft',
-      activity_slug: 'keep-it-non-magnetic',
-    },
-    {
-      class_id: physics.id,
-      author_kind: 'team',
-      team_name: 'Spam bots',
-      title: 'Buy now',
-      body: 'Off-topic post.',
-      state: 'declined',
-      teacher_approved: true,
-      review_note: 'Off topic for the journal.',
-      submitted_at: daysAgo(3),
-      reviewed_at: daysAgo(3),
-      reviewed_by: coordinator.id,
-    },
-  ]);
+  const entries = (await knex('entries')
+    .insert([
+      {
+        class_id: period3.id,
+        author_kind: 'team',
+        team_name: 'Team Comet',
+        title: 'Our probe survived the shake table',
+        body: 'Two tabs came loose on the first run; we added glue and it held for all three runs.',
+        saved_results: shakeResult,
+        state: 'published',
+        photos_confirmed_at: daysAgo(9),
+        photos_confirmed_by: period3.teacher_id,
+        teacher_approved: true,
+        submitted_at: daysAgo(9),
+        reviewed_at: daysAgo(8),
+        published_at: daysAgo(8),
+        reviewed_by: coordinator.id,
+        activity_slug: 'shake-test',
+      },
+      {
+        class_id: period3.id,
+        author_kind: 'team',
+        team_name: 'Team Nebula',
+        title: 'Blanket versus no blanket',
+        body: 'With the foil blanket our puck warmed more slowly under the lamp.',
+        state: 'submitted',
+        teacher_approved: true,
+        submitted_at: daysAgo(2),
+        activity_slug: 'thermal-cycling',
+      },
+      {
+        class_id: room12.id,
+        author_kind: 'teacher',
+        title: 'Shaking the Wren at 20 Hz and 80 Hz',
+        photos_confirmed_at: daysAgo(1),
+        photos_confirmed_by: room12.teacher_id,
+        body: 'We taped a phone to the Wren and shook it by hand on a foam block. The **PSD** shows our two shakes.',
+        state: 'submitted',
+        teacher_approved: true,
+        submitted_at: daysAgo(1),
+        activity_slug: 'shake-test',
+        saved_results: shakeResult,
+      },
+      {
+        class_id: room12.id,
+        author_kind: 'teacher',
+        title: 'Room 12 built the Wren',
+        photos_confirmed_at: daysAgo(5),
+        photos_confirmed_by: room12.teacher_id,
+        body: 'Every team finished the body; the solar panels were the hardest part.',
+        state: 'returned',
+        review_note: 'Lovely! Please say in the alt text which part the class found hardest, then resubmit.',
+        submitted_at: daysAgo(5),
+        reviewed_at: daysAgo(4),
+        reviewed_by: coordinator.id,
+      },
+      {
+        class_id: physics.id,
+        author_kind: 'team',
+        team_name: 'Magnetos',
+        title: 'How fast does a magnet fade?',
+        body: 'We measured the field of a fridge magnet from 2 cm to 20 cm.',
+        state: 'draft',
+        activity_slug: 'keep-it-non-magnetic',
+      },
+      {
+        class_id: physics.id,
+        author_kind: 'team',
+        team_name: 'Spam bots',
+        title: 'Buy now',
+        body: 'Off-topic post.',
+        state: 'declined',
+        teacher_approved: true,
+        review_note: 'Off topic for the journal.',
+        submitted_at: daysAgo(3),
+        reviewed_at: daysAgo(3),
+        reviewed_by: coordinator.id,
+      },
+    ])
+    .returning(['id', 'title'])) as { id: string; title: string }[];
+  await seedDemoPhotos(knex, entries);
 
   const engineeringKit = await knex('kits')
     .where({ class_id: classBy('Engineering Club').id })
