@@ -20,6 +20,7 @@ let browser: Browser;
 let knex: Knex;
 const cookies = { teacher: '', coordinator: '', team: '' };
 let className = '';
+let classId = '';
 
 /** Waits until the named client:load island has hydrated (client:visible ones wait for scrolling, so not all). */
 async function islandReady(page: Page, component: string): Promise<void> {
@@ -41,6 +42,7 @@ beforeAll(async () => {
   const coordinator = await accountCreate(knex, { role: 'coordinator', label: 'journal-coord' });
   className = `Journal class ${Date.now().toString(36)}`;
   const klass = await classCreateDirect(knex, teacher, className);
+  classId = klass.id;
   cookies.team = await classSessionCookie(knex, klass.id);
   cookies.teacher = await userSessionCookie(knex, teacher.id);
   cookies.coordinator = await userSessionCookie(knex, coordinator.id);
@@ -146,6 +148,58 @@ describe('class journal', () => {
     expect(visitor.errors).toEqual([]);
     await page.context().close();
   }, 120_000);
+
+  it('sends an entry back with a note: off the public pages, and an editable draft with the note for the teacher', async () => {
+    const title = `Sent back ${Date.now().toString(36)}`;
+    const note = 'Please say which glue held the tabs, then submit again.';
+    const post = async (path: string, body: unknown) => {
+      const res = await fetch(`${BASE_URL}${path}`, {
+        method: 'POST',
+        headers: { cookie: cookies.teacher, origin: BASE_URL, 'content-type': 'application/json' },
+        body: JSON.stringify(body),
+      });
+      expect(res.status, await res.clone().text()).toBeLessThan(300);
+      return res.json() as Promise<{ entry: { id: string } }>;
+    };
+    const entryId = (await post('/api/entries', { classId, title, activitySlug: 'shake-test', body: 'We shook it.' }))
+      .entry.id;
+    await post(`/api/entries/${entryId}/submit`, {});
+
+    const coordinator = await pageAs('coordinator');
+    let page = coordinator.page;
+    await page.goto(`/review/${entryId}`);
+    await islandReady(page, 'ReviewDecision');
+    const sendBack = page.getByRole('button', { name: 'Send back with the note' });
+    expect(await sendBack.isDisabled()).toBe(true);
+    await page.getByLabel('Note to the teacher').fill(note);
+    await sendBack.click();
+    await page.waitForURL(/\/review\?decided=returned$/, DOM_READY);
+    await page.context().close();
+
+    // Off every public page.
+    expect((await fetch(`${BASE_URL}/journal/${entryId}`)).status).toBe(404);
+    expect(await (await fetch(`${BASE_URL}/activities/shake-test/journal`)).text()).not.toContain(title);
+
+    // Back with the teacher: the note shown above an editor that saves.
+    const teacher = await pageAs('teacher');
+    page = teacher.page;
+    await page.goto('/entries');
+    const row = page.locator(`tr[data-entry-id="${entryId}"]`);
+    expect(await row.getByTestId('entry-state').textContent()).toContain('Returned for changes');
+    await page.goto(`/entries/${entryId}/edit`);
+    await islandReady(page, 'EntryEditor');
+    expect(await page.getByTestId('review-note').textContent()).toContain(note);
+    const body = page.getByLabel('What your class did and found');
+    expect(await body.isEditable()).toBe(true);
+    await body.fill('We shook it. The white glue held the tabs; the glue stick did not.');
+    const saved = page.waitForResponse(
+      (r) => r.url().endsWith(`/api/entries/${entryId}`) && r.request().method() === 'PATCH',
+    );
+    await page.getByRole('button', { name: 'Save draft' }).click();
+    expect((await saved).status()).toBe(200);
+    expect(teacher.errors).toEqual([]);
+    await page.context().close();
+  }, 90_000);
 
   it('holds a team entry written through the class session until the teacher approves it', async () => {
     const title = `Team test ${Date.now().toString(36)}`;
