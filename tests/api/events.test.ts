@@ -2,9 +2,11 @@
  * Events end to end through the running server and its job worker: a coordinator creates and publishes a
  * 20-place event; 20 teachers get places, the 21st goes to the waiting list; a cancellation moves it up and the
  * worker e-mails it (with the calendar file). An e-mail registrant gets a place only after confirming the link.
+ * Moving, then cancelling, a published event e-mails those with a place and those on the waiting list.
  */
 import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import ICAL from 'ical.js';
 import Papa from 'papaparse';
 import { testKnex } from '../db/database';
 import { accountCreate, emailUnique, linkIn, mailWait, userSessionCookie } from './auth-helpers';
@@ -112,6 +114,61 @@ describe('events', () => {
     // The CSV neutralises a formula in a name.
     const csv = await (await api(`/api/events/${id}/registrations.csv`, { headers: { cookie: staffCookie } })).text();
     expect(Papa.parse<string[]>(csv).data[1]![0]).toBe(`'=HYPERLINK("x")`);
+  }, 30_000);
+
+  it('e-mails those with a place or on the waiting list when the event moves, then when it is cancelled', async () => {
+    const id = await eventPublished(1);
+    const [holder, waiting] = await Promise.all(
+      ['moved-a', 'moved-b'].map(async (label) => {
+        const t = await accountCreate(knex, { role: 'teacher', label });
+        return { ...t, cookie: await userSessionCookie(knex, t.id) };
+      }),
+    );
+    for (const t of [holder!, waiting!]) {
+      expect((await send('POST', `/api/events/${id}/registrations`, {}, t.cookie)).status).toBe(201);
+    }
+    await knex('event_registrations')
+      .where({ event_id: id, state: 'confirmed' })
+      .update({ reminder_sent_at: new Date() });
+
+    // A new description is no move: nothing to tell, the calendar file keeps its SEQUENCE.
+    expect((await send('PATCH', `/api/events/${id}`, { description: 'Bring string.' }, staffCookie)).status).toBe(200);
+    expect((await knex('events').where({ id }).first('revision')).revision).toBe(0);
+
+    const moved = await send(
+      'PATCH',
+      `/api/events/${id}`,
+      { startsLocal: '2027-04-15T13:30', venue: 'Gym' },
+      staffCookie,
+    );
+    expect(moved.status).toBe(200);
+    const holderMail = await mailWait(holder!.email, /Changed time or place/);
+    expect(holderMail.text).toContain('It is now: Boom stake-out afternoon: ');
+    expect(holderMail.text).toContain('Gym.');
+    expect(holderMail.text).toContain('It was: Boom stake-out afternoon: ');
+    expect(holderMail.text).toContain('Back field.');
+    expect(holderMail.text).toContain('Your place stays yours');
+    const waitingMail = await mailWait(waiting!.email, /Changed time or place/);
+    expect(waitingMail.text).toContain('You keep your turn on the waiting list');
+    const rows = await knex('event_registrations').where({ event_id: id, state: 'confirmed' });
+    expect(rows.map((r) => r.reminder_sent_at)).toEqual([null]);
+    // The move mail's cancel link is the working one: it frees the place for the waiting registrant.
+    const token = linkIn(holderMail, '/events/registration').searchParams.get('cancel');
+    const cancelled = await send('POST', '/api/events/registrations/cancel', { token });
+    expect((await cancelled.json()).registration).toEqual({ state: 'cancelled', promoted: true });
+
+    expect((await send('PATCH', `/api/events/${id}`, { state: 'cancelled' }, staffCookie)).status).toBe(200);
+    const cancelMail = await mailWait(waiting!.email, /^Cancelled: Boom stake-out afternoon$/);
+    expect(cancelMail.text).toContain('the organisers have cancelled Boom stake-out afternoon');
+    expect(cancelMail.text).toContain('Your place is released');
+    expect((await knex('events').where({ id }).first('revision')).revision).toBe(2);
+    // The calendar file staff download now marks the event cancelled (parsed back with ical.js).
+    const ics = await (await api(`/api/events/${id}.ics`, { headers: { cookie: staffCookie } })).text();
+    const vevent = new ICAL.Component(ICAL.parse(ics)).getFirstSubcomponent('vevent')!;
+    expect(vevent.getFirstPropertyValue('status')).toBe('CANCELLED');
+    expect(vevent.getFirstPropertyValue('sequence')).toBe(2);
+    // Denver daylight time (UTC−6): 13:30 on 15 April 2027 is 19:30 UTC.
+    expect(String(vevent.getFirstPropertyValue('dtstart'))).toBe('2027-04-15T19:30:00Z');
   }, 30_000);
 
   it('records attendance as a count per school', async () => {

@@ -30,6 +30,8 @@ export interface EventView {
   venueLengthM: number | null;
   buildScaleDenominator: number | null;
   publishedAt: string | null;
+  /** The calendar file's SEQUENCE: how often the event was moved or cancelled once published. */
+  revision: number;
   placesTaken: number;
   waitlisted: number;
 }
@@ -65,6 +67,7 @@ function eventView(r: Row): EventView {
     venueLengthM: num(r.venue_length_m),
     buildScaleDenominator: num(r.build_scale_denominator),
     publishedAt: r.published_at ? (r.published_at as Date).toISOString() : null,
+    revision: Number(r.revision ?? 0),
     placesTaken: Number(r.places_taken ?? 0),
     waitlisted: Number(r.waitlisted ?? 0),
   };

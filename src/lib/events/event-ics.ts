@@ -1,6 +1,7 @@
 /**
  * The .ics calendar file of an event (RFC 5545, written by the `ics` package): start and end as UTC instants
- * (DTSTART:20261225T153000Z), so every calendar shows the right local time wherever the reader is.
+ * (DTSTART:20261225T153000Z), so every calendar shows the right local time wherever the reader is. The UID stays
+ * the event's, so a later file (a higher SEQUENCE) replaces the earlier one in a calendar.
  */
 import { createEvent } from 'ics';
 
@@ -12,6 +13,10 @@ export interface EventIcsInput {
   startsAt: Date;
   endsAt: Date | null;
   url: string;
+  /** The file's SEQUENCE (RFC 5545, 3.8.7.4): raised on each move or cancellation; 0 for the first. */
+  revision: number;
+  /** A cancelled event: STATUS:CANCELLED (RFC 5545, 3.8.1.11), so a calendar that has it marks it cancelled. */
+  cancelled: boolean;
 }
 
 /** Length given to an event without an end time (common practice, no source). */
@@ -31,7 +36,8 @@ export function eventIcs(event: EventIcsInput): string {
     ...(event.endsAt
       ? { end: event.endsAt.getTime(), endInputType: 'utc' as const, endOutputType: 'utc' as const }
       : { duration: { hours: EVENT_DEFAULT_DURATION_HOURS } }),
-    status: 'CONFIRMED',
+    sequence: event.revision,
+    status: event.cancelled ? 'CANCELLED' : 'CONFIRMED',
   });
   if (error || !value) throw error ?? new Error('the calendar file could not be written');
   return value;

@@ -1,4 +1,7 @@
-/** The event mails in our own words: confirm your address, your place, the waiting list, a place came free, the reminder. */
+/**
+ * The event mails in our own words: confirm your address, your place, the waiting list, a place came free, the
+ * reminder, the event moved, the event cancelled.
+ */
 import { mailCompose, type MailMessage } from '../mail/message';
 import { eventIcs, type EventIcsInput } from './event-ics';
 import { eventWhenLabel } from './event-time';
@@ -101,4 +104,61 @@ export function registrationReminderMessage(o: {
     }),
     attachments: [calendarFile(o.event)],
   };
+}
+
+/**
+ * The event moved (another time or place). A registrant with a place gets the new calendar file, which replaces
+ * the old one (same UID, higher SEQUENCE); one on the waiting list keeps their turn.
+ */
+export function eventMovedMessage(o: {
+  to: string;
+  name: string;
+  event: EventMailFacts;
+  /** The event as it was before the move. */
+  before: EventMailFacts;
+  hasPlace: boolean;
+  cancelUrl: string;
+}): MailMessage {
+  const message = mailCompose({
+    to: o.to,
+    subject: `Changed time or place: ${o.event.title}`,
+    greeting: `Hello ${o.name},`,
+    paragraphs: [
+      `The organisers have moved ${o.event.title}. It is now: ${whereWhen(o.event)}`,
+      `It was: ${whereWhen(o.before)}`,
+      o.hasPlace
+        ? 'Your place stays yours. The calendar file attached replaces the one you had; we send a reminder the day before.'
+        : 'You keep your turn on the waiting list; if a place comes free you get it automatically.',
+      cancelNote(o.cancelUrl),
+    ],
+    action: { label: 'See the event', url: o.event.url },
+    footnote: 'You get this message because you registered for this event on Kitwright.',
+  });
+  return o.hasPlace ? { ...message, attachments: [calendarFile(o.event)] } : message;
+}
+
+/**
+ * The event is cancelled. A registrant with a place gets the cancelled calendar file (STATUS:CANCELLED, higher
+ * SEQUENCE), which marks the entry in their calendar.
+ */
+export function eventCancelledMessage(o: {
+  to: string;
+  name: string;
+  event: EventMailFacts;
+  hasPlace: boolean;
+}): MailMessage {
+  const message = mailCompose({
+    to: o.to,
+    subject: `Cancelled: ${o.event.title}`,
+    greeting: `Hello ${o.name},`,
+    paragraphs: [
+      `We are sorry: the organisers have cancelled ${whereWhen(o.event)}`,
+      o.hasPlace
+        ? 'Your place is released and there is nothing you need to do. The calendar file attached marks the entry in your calendar as cancelled.'
+        : 'Your spot on the waiting list is released; there is nothing you need to do.',
+    ],
+    action: { label: 'See other events', url: new URL('/events', o.event.url).toString() },
+    footnote: 'You get this message because you registered for this event on Kitwright.',
+  });
+  return o.hasPlace ? { ...message, attachments: [calendarFile(o.event)] } : message;
 }

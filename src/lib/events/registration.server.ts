@@ -30,7 +30,7 @@ export interface RegistrationResult {
   position?: number;
 }
 
-interface EventRow {
+export interface EventRow {
   id: string;
   title: string;
   description: string;
@@ -40,6 +40,7 @@ interface EventRow {
   time_zone: string;
   capacity: number | null;
   state: string;
+  revision: number;
 }
 
 export const eventPageUrl = (site: string, eventId: string) => new URL(`/events/${eventId}`, site).toString();
@@ -59,6 +60,8 @@ export function eventMailFacts(event: EventRow, site: string): EventMailFacts {
     endsAt: event.ends_at,
     timeZone: event.time_zone,
     url: eventPageUrl(site, event.id),
+    revision: event.revision,
+    cancelled: event.state === 'cancelled',
   };
 }
 

@@ -38,6 +38,7 @@ export async function remindersSend(site: string, now: Date = new Date()): Promi
         'e.time_zone',
         'e.capacity',
         'e.state',
+        'e.revision',
       )
       .forUpdate('r')
       .skipLocked();

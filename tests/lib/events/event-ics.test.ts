@@ -9,7 +9,9 @@ import { describe, expect, it } from 'vitest';
 import { eventIcs } from '../../../src/lib/events/event-ics';
 import { eventLocalToUtc, eventUtcToLocal } from '../../../src/lib/events/event-time';
 
-function parsed(local: string, zone: string) {
+const NEW = { revision: 0, cancelled: false };
+
+function parsed(local: string, zone: string, change: { revision: number; cancelled: boolean } = NEW) {
   const text = eventIcs({
     id: 'e1',
     title: 'Boom layout, part 2',
@@ -18,6 +20,7 @@ function parsed(local: string, zone: string) {
     startsAt: eventLocalToUtc(local, zone),
     endsAt: eventLocalToUtc(local.replace(/T09/, 'T11'), zone),
     url: 'https://kitwright.example/events/e1',
+    ...change,
   });
   const vevent = new ICAL.Component(ICAL.parse(text)).getFirstSubcomponent('vevent')!;
   return new ICAL.Event(vevent);
@@ -37,6 +40,16 @@ describe('event calendar file', () => {
   it('starts at 14:00 UTC for 9:00 in Chicago after the change (CDT)', () => {
     const ev = parsed('2026-03-09T09:00', 'America/Chicago');
     expect(ev.startDate.toJSDate().toISOString()).toBe('2026-03-09T14:00:00.000Z');
+  });
+
+  it('keeps the UID and raises SEQUENCE for a moved event, and marks a cancelled one (RFC 5545, 3.8.7.4, 3.8.1.11)', () => {
+    const first = parsed('2026-03-06T09:00', 'America/Chicago');
+    const moved = parsed('2026-03-09T09:00', 'America/Chicago', { revision: 1, cancelled: false });
+    const cancelled = parsed('2026-03-09T09:00', 'America/Chicago', { revision: 2, cancelled: true });
+    expect([first.sequence, moved.sequence, cancelled.sequence]).toEqual([0, 1, 2]);
+    expect(new Set([first.uid, moved.uid, cancelled.uid])).toEqual(new Set(['e1@kitwright']));
+    expect(first.component.getFirstPropertyValue('status')).toBe('CONFIRMED');
+    expect(cancelled.component.getFirstPropertyValue('status')).toBe('CANCELLED');
   });
 
   it('shows the local wall-clock time back from the UTC instant', () => {

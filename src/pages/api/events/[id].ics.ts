@@ -15,6 +15,8 @@ export const GET = endpoint({ access: ['anyone'] }, async ({ locals, params, url
     startsAt: new Date(event.startsAt),
     endsAt: event.endsAt ? new Date(event.endsAt) : null,
     url: eventPageUrl(siteUrl(url), event.id),
+    revision: event.revision,
+    cancelled: event.state === 'cancelled',
   });
   return new Response(body, {
     headers: {
