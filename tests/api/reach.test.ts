@@ -218,6 +218,66 @@ describe('GET /api/reach/rows (drill-down)', () => {
   });
 });
 
+/** A new school with one teacher and one class of 12 students, made straight in the database. */
+async function schoolWithClass(school: { name: string; city: string; region: string }, className: string) {
+  const [row] = await knex('schools').insert(school).returning(['id']);
+  const teacher = await accountCreate(knex, { role: 'teacher', label: 'reach-school', schoolId: row.id });
+  const [klass] = await knex('classes')
+    .insert({
+      teacher_id: teacher.id,
+      school_id: row.id,
+      name: className,
+      grade_band: '6-8',
+      student_count: 12,
+      join_code: `R${Date.now().toString(36).toUpperCase().slice(-5)}${Math.floor(Math.random() * 100)}`,
+    })
+    .returning(['id']);
+  return { schoolId: row.id as string, teacherId: teacher.id, classId: klass.id as string };
+}
+
+/** A kit of the class saved at `at`. */
+async function kitInsert(c: { teacherId: string; classId: string }, title: string, at: Date): Promise<string> {
+  const [kit] = await knex('kits')
+    .insert({
+      class_id: c.classId,
+      teacher_id: c.teacherId,
+      title,
+      model_id: 'wren-3u',
+      inputs: '{}',
+      engine_version: 'test',
+      content_hash: 'test',
+      created_at: at,
+    })
+    .returning(['id']);
+  return kit.id as string;
+}
+
+describe('reach figures after a change', () => {
+  it('answers the changed figures at once after a kit is saved, a class resized and the kit deleted', async () => {
+    const stamp = Date.now().toString(36);
+    const made = await schoolWithClass(
+      { name: `Fresh Figures School ${stamp}`, city: 'Nowhere', region: `Fresh ${stamp}` },
+      'Fresh class',
+    );
+    // A quarter long past, filtered to this school: no other test's rows can fall in it.
+    const path = `/api/reach/figures?from=2018-01-01&to=2018-04-01&schoolId=${made.schoolId}`;
+    const figures = async () =>
+      Object.fromEntries((await getJson<Summary>(path)).figures.map((f) => [f.id, f.value])) as Record<
+        ReachFigureId,
+        number
+      >;
+
+    expect(await figures()).toMatchObject({ kits: 0, classes: 0, students: 0 });
+    const kitId = await kitInsert(made, 'Fresh kit', new Date('2018-02-03T10:00:00Z'));
+    // By the definitions: one kit, its class once, the class's 12 students, the school reached.
+    expect(await figures()).toMatchObject({ kits: 1, classes: 1, students: 12, schools: 1 });
+    await knex('classes').where({ id: made.classId }).update({ student_count: 20 });
+    expect(await figures()).toMatchObject({ kits: 1, classes: 1, students: 20 });
+    await knex('kits').where({ id: kitId }).delete();
+    expect(await figures()).toMatchObject({ kits: 0, classes: 0, students: 0, schools: 0 });
+  });
+});
+
 describe('reach CSV exports', () => {
   it('parse back with papaparse into the table the API shows, row for row, under the same filters', async () => {
     const period = PERIODS['twelve months before this quarter']!;
@@ -235,30 +295,11 @@ describe('reach CSV exports', () => {
   });
 
   it('exports a school named =HYPERLINK("x") as text, prefixed so no spreadsheet runs it', async () => {
-    const [school] = await knex('schools')
-      .insert({ name: '=HYPERLINK("x")', city: `Csv ${Date.now()}`, region: 'Csv Test Region' })
-      .returning(['id']);
-    const teacher = await accountCreate(knex, { role: 'teacher', label: 'reach-csv', schoolId: school.id });
-    const [klass] = await knex('classes')
-      .insert({
-        teacher_id: teacher.id,
-        school_id: school.id,
-        name: '+Class',
-        grade_band: '6-8',
-        student_count: 12,
-        join_code: `CSV${Date.now().toString(36).toUpperCase().slice(-5)}`,
-      })
-      .returning(['id']);
-    await knex('kits').insert({
-      class_id: klass.id,
-      teacher_id: teacher.id,
-      title: '@Kit',
-      model_id: 'wren-3u',
-      inputs: '{}',
-      engine_version: 'test',
-      content_hash: 'test',
-      created_at: new Date('2019-02-03T10:00:00Z'),
-    });
+    const made = await schoolWithClass(
+      { name: '=HYPERLINK("x")', city: `Csv ${Date.now()}`, region: 'Csv Test Region' },
+      '+Class',
+    );
+    await kitInsert(made, '@Kit', new Date('2019-02-03T10:00:00Z'));
     const q = 'from=2019-01-01&to=2019-04-01&region=Csv%20Test%20Region';
     const breakdown = Papa.parse<string[]>(
       await (await api(`/api/reach/breakdown.csv?${q}&groupBy=school`, { headers: { cookie } })).text(),

@@ -6,6 +6,7 @@
  * data on every run (up to the dates, which follow now()).
  */
 import type { Knex } from 'knex';
+import { REACH_SOURCE_TABLES } from '../../migrations/20261205130000_add_reach_data_versions';
 
 export const REACH_SEED_SIZES = {
   schools: 2_000,
@@ -16,16 +17,7 @@ export const REACH_SEED_SIZES = {
   events: 500,
 } as const;
 /** The tables the seed fills: every table the reach figures read. */
-export const REACH_TABLES = [
-  'schools',
-  'users',
-  'classes',
-  'kits',
-  'entries',
-  'events',
-  'event_attendance',
-  'account_sign_in_days',
-];
+export const REACH_TABLES = REACH_SOURCE_TABLES;
 /** The span the facts are spread over, ending now. */
 export const REACH_SEED_MONTHS = 24;
 const ACTIVITIES = [

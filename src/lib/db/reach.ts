@@ -8,6 +8,7 @@ import { REACH_FIGURES, reachFigure, type ReachFigureId } from '../reach/figures
 import { dateParse, SCHOOL_YEAR_START_MONTH, type ReachBucket, type ReachPeriod } from '../reach/period';
 import type { ReachGrouping } from '../reach/reach-query';
 import { db } from './knex';
+import { reachQueryRows } from './reach-cache';
 
 export interface ReachFilters {
   region?: string | undefined;
@@ -122,8 +123,9 @@ export async function reachCells(
   const sql = `${unitsSql(bucket === 'all' ? "'all'" : bucketSql(bucket), grouping, filters, bindings)}
     SELECT figure, bucket, group_key, group_label, SUM(amount)::int AS value
     FROM units GROUP BY 1, 2, 3, 4 ORDER BY 2, 4`;
-  const { rows } = await trx.raw(sql, bindings);
-  return rows.map((r: Record<string, unknown>) => ({
+  type Row = { figure: ReachFigureId; bucket: string; group_key: string; group_label: string; value: number };
+  const rows = await reachQueryRows<Row>(trx, sql, bindings);
+  return rows.map((r) => ({
     figure: r.figure,
     bucket: r.bucket,
     groupKey: r.group_key,
@@ -142,10 +144,11 @@ export async function reachTotals(
   const bindings = { ...periodBindings({ from: previous.from, to: period.to }), split: dateParse(period.from) };
   const sql = `${unitsSql("CASE WHEN f.at < :split THEN 'previous' ELSE 'current' END", 'none', filters, bindings)}
     SELECT figure, bucket, SUM(amount)::int AS value FROM units GROUP BY 1, 2`;
-  const { rows } = await trx.raw(sql, bindings);
+  type Row = { figure: ReachFigureId; bucket: 'current' | 'previous'; value: number };
+  const rows = await reachQueryRows<Row>(trx, sql, bindings);
   const zero = () => Object.fromEntries(REACH_FIGURES.map((f) => [f.id, 0])) as Record<ReachFigureId, number>;
   const totals = { current: zero(), previous: zero() };
-  for (const r of rows as { figure: ReachFigureId; bucket: 'current' | 'previous'; value: number }[]) {
+  for (const r of rows) {
     totals[r.bucket][r.figure] = Number(r.value);
   }
   return totals;
@@ -196,9 +199,9 @@ export async function reachBreakdown(
     SELECT *, count(*) OVER () AS total FROM grouped
     ${where.length ? `WHERE ${where.join(' AND ')}` : ''}
     ORDER BY ${order} ${dir}, group_label ASC, group_key ASC ${limit}`;
-  const { rows } = await trx.raw(sql, bindings);
+  const rows = await reachQueryRows<Record<string, unknown>>(trx, sql, bindings);
   return {
-    total: rows.length ? Number(rows[0].total) : options.page && options.page.offset > 0 ? await countOnly() : 0,
+    total: rows.length ? Number(rows[0]!.total) : options.page && options.page.offset > 0 ? await countOnly() : 0,
     rows: rows.map((r: Record<string, unknown>) => ({
       groupKey: String(r.group_key),
       groupLabel: String(r.group_label),
@@ -245,9 +248,9 @@ export async function reachRows(
       ORDER BY f.unit, f.at
     )
     SELECT *, count(*) OVER () AS total FROM units ORDER BY at DESC, unit ${limit}`;
-  const { rows } = await trx.raw(sql, bindings);
+  const rows = await reachQueryRows<Record<string, unknown>>(trx, sql, bindings);
   return {
-    total: rows.length ? Number(rows[0].total) : 0,
+    total: rows.length ? Number(rows[0]!.total) : 0,
     rows: rows.map((r: Record<string, unknown>) => ({
       at: (r.at as Date).toISOString(),
       item: String(r.item ?? ''),
