@@ -104,7 +104,7 @@ const ROWS: Row[] = [
     expect: staffOnly(400),
   },
   // Reach: coordinators and admins; without a period the query is invalid
-  ...['figures', 'breakdown', 'breakdown.csv', 'rows', 'rows.csv', 'report.pdf'].map((name): Row => ({
+  ...['figures', 'figures.csv', 'breakdown', 'breakdown.csv', 'rows', 'rows.csv', 'report.pdf'].map((name): Row => ({
     route: `/api/reach/${name}`,
     method: 'GET',
     expect: staffOnly(400),

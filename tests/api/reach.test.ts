@@ -294,6 +294,40 @@ describe('reach CSV exports', () => {
     expect(rows).toEqual(table.rows.map((r) => [r.groupLabel, ...REACH_FIGURE_IDS.map((f) => String(r.values[f]))]));
   });
 
+  it('parse back the figures over time (the school page table) into the series the API answers, row for row', async () => {
+    const period = PERIODS['twelve months before this quarter']!;
+    const busiest = await knex('kits')
+      .join('classes', 'classes.id', 'kits.class_id')
+      .whereNotNull('classes.school_id')
+      .groupBy('classes.school_id')
+      .select('classes.school_id')
+      .count('* as n')
+      .orderBy('n', 'desc')
+      .first();
+    const q = `${periodQuery(period)}&bucket=quarter&schoolId=${busiest!.school_id}`;
+    const summary = await getJson<{
+      figures: { id: ReachFigureId; label: string }[];
+      buckets: { label: string }[];
+      series: Record<ReachFigureId, number[]>;
+    }>(`/api/reach/figures?${q}`);
+    const res = await api(`/api/reach/figures.csv?${q}`, { headers: { cookie } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toMatch(/^text\/csv; charset=utf-8/);
+    const parsed = Papa.parse<string[]>((await res.text()).replace(/^\uFEFF/, ''), { skipEmptyLines: true });
+    expect(parsed.errors).toEqual([]);
+    const [header, ...rows] = parsed.data;
+    expect(header).toEqual(['Quarter', ...summary.figures.map((f) => f.label)]);
+    expect(rows).toEqual(
+      summary.buckets.map((b, i) => [b.label, ...summary.figures.map((f) => String(summary.series[f.id][i]))]),
+    );
+    expect(
+      rows
+        .flat()
+        .slice(1)
+        .some((v) => Number(v) > 0),
+    ).toBe(true);
+  });
+
   it('exports a school named =HYPERLINK("x") as text, prefixed so no spreadsheet runs it', async () => {
     const made = await schoolWithClass(
       { name: '=HYPERLINK("x")', city: `Csv ${Date.now()}`, region: 'Csv Test Region' },

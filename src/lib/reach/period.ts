@@ -12,6 +12,13 @@ export const REACH_PERIOD_MAX_MONTHS = 120;
 /** How a series is cut: calendar months, calendar quarters, calendar years or school years. */
 export const REACH_BUCKETS = ['month', 'quarter', 'year', 'school_year'] as const;
 export type ReachBucket = (typeof REACH_BUCKETS)[number];
+/** The heading of a series table's bucket column. */
+export const REACH_BUCKET_HEADINGS: Record<ReachBucket, string> = {
+  month: 'Month',
+  quarter: 'Quarter',
+  year: 'Year',
+  school_year: 'School year',
+};
 
 export interface ReachPeriod {
   /** First day in the period, 'YYYY-MM-DD'. */

@@ -26,6 +26,18 @@ export function reachBreakdownCsv(
   );
 }
 
+/** A series table as CSV: one row per bucket (its label under `bucketHeading`), then every figure by its label. */
+export function reachSeriesCsv(
+  bucketHeading: string,
+  buckets: { label: string }[],
+  series: Record<string, number[]>,
+): string {
+  return csvFile(
+    [bucketHeading, ...REACH_FIGURES.map((f) => f.label)],
+    buckets.map((b, i) => [b.label, ...REACH_FIGURES.map((f) => series[f.id]?.[i] ?? 0)]),
+  );
+}
+
 /** The drill-down table as CSV. */
 export function reachRowsCsv(
   amountHeading: string | null,
