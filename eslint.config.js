@@ -79,6 +79,19 @@ export default tseslint.config(
     },
   },
   {
+    // A body cap is a named constant (src/lib/http/body-limits.ts or the domain's own), never a bare number.
+    files: ['src/pages/**'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: "CallExpression[callee.name='readJson'] > Literal.arguments",
+          message: 'Cap the body with a constant from src/lib/http/body-limits.ts or the domain module.',
+        },
+      ],
+    },
+  },
+  {
     files: PURE_FOLDERS,
     ignores: ['**/*.server.ts'],
     rules: { 'no-restricted-imports': ['error', PURE_RESTRICTIONS] },

@@ -21,6 +21,9 @@ import { INSTRUCTIONS_PLACE_DEFAULT, kitSettingsSchema, type KitSettingsLimits }
 
 const VENUE_IDS = Object.keys(VENUES) as [VenueId, ...VenueId[]];
 
+/** Body cap of a request carrying kit inputs, bytes: room for a whole model (ModelSchema's limits) and the settings. */
+export const KIT_REQUEST_BYTES_MAX = 200_000;
+
 /** The engine's limits, in the serialisable shape the builder island receives as props. */
 export const KIT_SETTINGS_LIMITS: KitSettingsLimits<(typeof SHEET_SIZE_IDS)[number], VenueId, BuildGradeBand> = {
   scaleDenominatorMax: SCALE_DENOMINATOR_MAX,

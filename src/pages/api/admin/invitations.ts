@@ -6,6 +6,7 @@ import { invitationList } from '../../../lib/db/invitations';
 import { endpoint } from '../../../lib/http/endpoint';
 import { json, readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** Recent invitations with their state (admins). */
 export const GET = endpoint({ access: ['admin'] }, async () => {
@@ -25,6 +26,6 @@ export const GET = endpoint({ access: ['admin'] }, async () => {
 /** Invites a coordinator or admin by e-mail with a one-time link valid 7 days (admins). */
 export const POST = endpoint({ access: ['admin'] }, async (context) => {
   const admin = actorUser(context.locals.actor);
-  const input = parseInput(InvitationCreateSchema, await readJson(context.request, 4_000), 'invitation');
+  const input = parseInput(InvitationCreateSchema, await readJson(context.request, BODY_BYTES_FORM), 'invitation');
   return json({ invitation: await invitationSend(admin, input, siteUrl(context.url)) }, 201);
 });

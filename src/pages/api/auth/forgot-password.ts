@@ -7,10 +7,11 @@ import { siteUrl } from '../../../lib/auth/site-url';
 import { endpoint } from '../../../lib/http/endpoint';
 import { json, readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** Asks for a reset link; the same 202 whether or not the address has an account. */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
-  const input = parseInput(ForgotPasswordSchema, await readJson(context.request, 4_000), 'reset request');
+  const input = parseInput(ForgotPasswordSchema, await readJson(context.request, BODY_BYTES_FORM), 'reset request');
   await rateLimitEnforce(RATE_LIMITS.resetIp, clientIp(context));
   await rateLimitEnforce(RATE_LIMITS.resetEmail, input.email);
   await passwordResetRequest(input.email, { siteUrl: siteUrl(context.url), requestId: context.locals.requestId });

@@ -7,10 +7,11 @@ import { userSessionStart } from '../../../lib/auth/session.server';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** Accepts a staff invitation: creates the account with the invited role and signs it in. */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
-  const input = parseInput(InvitationAcceptSchema, await readJson(context.request, 4_000), 'invitation');
+  const input = parseInput(InvitationAcceptSchema, await readJson(context.request, BODY_BYTES_FORM), 'invitation');
   await rateLimitEnforce(RATE_LIMITS.tokenIp, clientIp(context));
   const account = await invitationComplete(input);
   await userSessionStart(context, account.id);

@@ -12,11 +12,12 @@ import { InputError } from '../../../lib/errors';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** Changes the password of the signed-in account after checking the current one; other sessions end. */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
   const actor = actorUser(context.locals.actor);
-  const input = parseInput(PasswordChangeSchema, await readJson(context.request, 4_000), 'password change');
+  const input = parseInput(PasswordChangeSchema, await readJson(context.request, BODY_BYTES_FORM), 'password change');
   await rateLimitEnforce(RATE_LIMITS.signInAccount, actor.email);
   const check = await signInCheck(actor.email, input.currentPassword);
   if (!check.ok) {

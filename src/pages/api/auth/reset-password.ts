@@ -7,10 +7,11 @@ import { userSessionStart, userSessionsEndAll } from '../../../lib/auth/session.
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** Sets a new password from a reset link, ends every other session and signs this browser in. */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
-  const input = parseInput(ResetPasswordSchema, await readJson(context.request, 4_000), 'new password');
+  const input = parseInput(ResetPasswordSchema, await readJson(context.request, BODY_BYTES_FORM), 'new password');
   await rateLimitEnforce(RATE_LIMITS.tokenIp, clientIp(context));
   const account = await passwordResetComplete(input.token, input.password);
   await userSessionsEndAll(account.id);

@@ -13,6 +13,7 @@ import { AuthenticationError, ForbiddenError } from '../../../lib/errors';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_LONG_FORM } from '../../../lib/http/body-limits';
 
 signInWarm();
 
@@ -23,7 +24,7 @@ const WRONG = 'That e-mail and password do not match an account. Check both, or 
  * Wrong passwords in a row lock the address for longer each time (src/lib/auth/sign-in-lockout.ts): 429.
  */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
-  const input = parseInput(SignInSchema, await readJson(context.request, 16_000), 'sign-in');
+  const input = parseInput(SignInSchema, await readJson(context.request, BODY_BYTES_LONG_FORM), 'sign-in');
   await rateLimitEnforce(RATE_LIMITS.signInIp, clientIp(context));
   await rateLimitEnforce(RATE_LIMITS.signInAccount, input.email);
   await signInLockEnforce(input.email);

@@ -6,10 +6,11 @@ import { VerifyEmailSchema } from '../../../lib/auth/schemas';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** Uses the one-time link of a verification mail; the page posts it so link scanners cannot use it up. */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
-  const input = parseInput(VerifyEmailSchema, await readJson(context.request, 4_000), 'verification');
+  const input = parseInput(VerifyEmailSchema, await readJson(context.request, BODY_BYTES_FORM), 'verification');
   await rateLimitEnforce(RATE_LIMITS.tokenIp, clientIp(context));
   const account = await emailVerify(input.token);
   return { ok: true, email: account.email, message: 'Your address is confirmed. You can sign in now.' };

@@ -7,6 +7,7 @@ import { classUpdate } from '../../../lib/db/classes';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** One class: its teacher (with the code), staff, or a class session of that class; anyone else 404. */
 export const GET = endpoint({ access: [...ANY_ACCOUNT, 'class'] }, async ({ locals, params }) => ({
@@ -17,7 +18,7 @@ export const GET = endpoint({ access: [...ANY_ACCOUNT, 'class'] }, async ({ loca
 export const PATCH = endpoint({ access: ['teacher'] }, async (context) => {
   const teacher = actorUser(context.locals.actor);
   const owned = await classOwned(teacher, context.params.id ?? '');
-  const input = parseInput(ClassUpdateSchema, await readJson(context.request, 4_000), 'class change');
+  const input = parseInput(ClassUpdateSchema, await readJson(context.request, BODY_BYTES_FORM), 'class change');
   await classUpdate(owned.id, input);
   await auditRecord({
     actorId: teacher.userId,

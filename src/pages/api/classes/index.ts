@@ -6,6 +6,7 @@ import { ClassCreateSchema } from '../../../lib/auth/class-schemas';
 import { endpoint } from '../../../lib/http/endpoint';
 import { json, readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** A teacher's own classes (with join codes); every class for coordinators and admins (without codes). */
 export const GET = endpoint({ access: ANY_ACCOUNT }, async ({ locals }) => ({
@@ -15,7 +16,7 @@ export const GET = endpoint({ access: ANY_ACCOUNT }, async ({ locals }) => ({
 /** Creates a class: name, grade band and a student count only (teachers). */
 export const POST = endpoint({ access: ['teacher'] }, async (context) => {
   const teacher = actorUser(context.locals.actor);
-  const input = parseInput(ClassCreateSchema, await readJson(context.request, 4_000), 'class');
+  const input = parseInput(ClassCreateSchema, await readJson(context.request, BODY_BYTES_FORM), 'class');
   const id = await classCreate(teacher, input);
   return json({ class: await classForActor(teacher, id) }, 201);
 });

@@ -9,13 +9,14 @@ import { classSessionEnd, classSessionStart } from '../../../lib/auth/session.se
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_ID } from '../../../lib/http/body-limits';
 
 /**
  * Opens an 8-hour class session from a class code: no account, no personal data. Rate limited per address
  * and per code. (A signed-in account keeps acting as itself; the class cookie matters once it signs out.)
  */
 export const POST = endpoint({ access: ['anyone'] }, async (context) => {
-  const input = parseInput(ClassJoinSchema, await readJson(context.request, 2_000), 'class code');
+  const input = parseInput(ClassJoinSchema, await readJson(context.request, BODY_BYTES_ID), 'class code');
   await rateLimitEnforce(RATE_LIMITS.classCodeIp, clientIp(context));
   await rateLimitEnforce(RATE_LIMITS.classCodeCode, input.code);
   const classId = await classIdForCode(input.code);

@@ -10,6 +10,7 @@ import { NotFoundError } from '../../../lib/errors';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_LONG_FORM } from '../../../lib/http/body-limits';
 
 /** One event: anyone once published; staff always. */
 export const GET = endpoint({ access: ['anyone'] }, async ({ locals, params }) => ({
@@ -23,7 +24,7 @@ export const GET = endpoint({ access: ['anyone'] }, async ({ locals, params }) =
 export const PATCH = endpoint({ access: STAFF }, async (context) => {
   const staff = actorUser(context.locals.actor);
   const id = context.params.id ?? '';
-  const patch = parseInput(EventPatchSchema, await readJson(context.request, 16_000), 'event change');
+  const patch = parseInput(EventPatchSchema, await readJson(context.request, BODY_BYTES_LONG_FORM), 'event change');
   if (!(await eventChangeApply(id, patch, siteUrl(context.url)))) throw new NotFoundError('No event has this address.');
   await auditRecord({
     actorId: staff.userId,

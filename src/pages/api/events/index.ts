@@ -7,6 +7,7 @@ import { EventCreateSchema } from '../../../lib/events/event-schemas';
 import { endpoint } from '../../../lib/http/endpoint';
 import { json, readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_LONG_FORM } from '../../../lib/http/body-limits';
 
 /** Published upcoming events for anyone; every event for staff with ?all=1. */
 export const GET = endpoint({ access: ['anyone'] }, async ({ locals, url }) => ({
@@ -19,7 +20,7 @@ export const GET = endpoint({ access: ['anyone'] }, async ({ locals, url }) => (
 /** Creates an event as a draft (coordinators and admins). */
 export const POST = endpoint({ access: STAFF }, async (context) => {
   const staff = actorUser(context.locals.actor);
-  const input = parseInput(EventCreateSchema, await readJson(context.request, 16_000), 'event');
+  const input = parseInput(EventCreateSchema, await readJson(context.request, BODY_BYTES_LONG_FORM), 'event');
   const id = await eventInsert(input, staff.userId);
   await auditRecord({
     actorId: staff.userId,

@@ -6,6 +6,7 @@ import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
 import { KIT_VIEWERS } from './_access';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 const KitRenameSchema = z.object({ title: KitTitleSchema });
 
@@ -17,7 +18,7 @@ export const GET = endpoint({ access: KIT_VIEWERS }, async ({ locals, params }) 
 /** Renames a kit (its teacher only). */
 export const PATCH = endpoint({ access: ['teacher'] }, async (context) => {
   const row = await kitOwnedOrThrow(context.locals.actor, context.params.id ?? '');
-  const { title } = parseInput(KitRenameSchema, await readJson(context.request, 4_000), 'rename');
+  const { title } = parseInput(KitRenameSchema, await readJson(context.request, BODY_BYTES_FORM), 'rename');
   await kitRenameOwned(row, title);
   return { kit: kitView(await kitVisible(context.locals.actor, row.id)) };
 });

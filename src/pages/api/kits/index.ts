@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { siteUrl } from '../../../lib/auth/site-url';
 import { kitListForActor } from '../../../lib/db/kits';
-import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
+import { KIT_REQUEST_BYTES_MAX, KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitSave, kitView, kitVisible } from '../../../lib/kit/saved-kit.server';
 import { endpoint } from '../../../lib/http/endpoint';
 import { json, readJson } from '../../../lib/http/respond';
@@ -22,7 +22,7 @@ export const GET = endpoint({ access: KIT_VIEWERS }, async ({ locals, url }) => 
 
 /** Saves a kit to one of the teacher's own classes: 404 for a class that is not theirs. */
 export const POST = endpoint({ access: ['teacher'] }, async (context) => {
-  const { classId, inputs } = parseInput(KitSaveSchema, await readJson(context.request, 200_000), 'kit');
+  const { classId, inputs } = parseInput(KitSaveSchema, await readJson(context.request, KIT_REQUEST_BYTES_MAX), 'kit');
   const id = await kitSave(context.locals.actor, classId, inputs, siteUrl(context.url));
   return json({ kit: kitView(await kitVisible(context.locals.actor, id)) }, 201);
 });

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { ANY_ACCOUNT } from '../../../lib/auth/actor';
-import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
+import { KIT_REQUEST_BYTES_MAX, KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitFile, kitFileResponse } from '../../../lib/kit/kit-files.server';
 import { kitPreviewFile } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
@@ -21,7 +21,11 @@ const PreviewFileSchema = z.object({
  * With `Accept: application/x-ndjson` the build streams its stages and the file comes base64 in the last line.
  */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
-  const { inputs, output, sheet } = parseInput(PreviewFileSchema, await readJson(context.request, 200_000), 'download');
+  const { inputs, output, sheet } = parseInput(
+    PreviewFileSchema,
+    await readJson(context.request, KIT_REQUEST_BYTES_MAX),
+    'download',
+  );
   const sheetParam = { sheet: sheet === undefined ? null : String(sheet) };
   if (!progressWanted(context.request)) {
     const { request, build } = await kitPreviewFile(inputs, output);

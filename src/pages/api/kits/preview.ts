@@ -1,5 +1,5 @@
 import { ANY_ACCOUNT } from '../../../lib/auth/actor';
-import { KitInputsSchema } from '../../../lib/kit/kit-inputs';
+import { KIT_REQUEST_BYTES_MAX, KitInputsSchema } from '../../../lib/kit/kit-inputs';
 import { kitPreview } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
 import { progressWanted } from '../../../lib/http/progress-lines';
@@ -12,7 +12,7 @@ import { parseInput } from '../../../lib/validation';
  * `Accept: application/x-ndjson` the build streams its stages first (src/lib/http/progress-lines.ts).
  */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
-  const inputs = parseInput(KitInputsSchema, await readJson(context.request, 200_000), 'kit');
+  const inputs = parseInput(KitInputsSchema, await readJson(context.request, KIT_REQUEST_BYTES_MAX), 'kit');
   if (!progressWanted(context.request)) return kitPreview(inputs);
   return progressResponse(context.request, context.locals.requestId, (onStage, signal) =>
     kitPreview(inputs, { onStage, signal }),

@@ -7,6 +7,7 @@ import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { LinkPatchSchema } from '../../../lib/links/link-code';
 import { parseInput } from '../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** One live link with its scans by day (staff). */
 export const GET = endpoint({ access: STAFF }, async ({ params }) => {
@@ -19,7 +20,7 @@ export const GET = endpoint({ access: STAFF }, async ({ params }) => {
 export const PATCH = endpoint({ access: STAFF }, async (context) => {
   const staff = actorUser(context.locals.actor);
   const id = context.params.id ?? '';
-  const patch = parseInput(LinkPatchSchema, await readJson(context.request, 4_000), 'live link change');
+  const patch = parseInput(LinkPatchSchema, await readJson(context.request, BODY_BYTES_FORM), 'live link change');
   if (!(await liveLinkUpdate(id, patch))) throw new NotFoundError('No live link has this id.');
   await auditRecord({
     actorId: staff.userId,

@@ -4,6 +4,7 @@ import { photoAltTextChange, photoRemove } from '../../../lib/photos/entry-photo
 import { PhotoPatchSchema } from '../../../lib/photos/photo-rules';
 import { parseInput } from '../../../lib/validation';
 import { photoServe } from './_serve';
+import { BODY_BYTES_FORM } from '../../../lib/http/body-limits';
 
 /** A photo's display copy (≤ 1600 px JPEG): to anyone once its entry is published, else only its class and staff. */
 export const GET = endpoint({ access: ['anyone'] }, ({ locals, params }) =>
@@ -12,7 +13,7 @@ export const GET = endpoint({ access: ['anyone'] }, ({ locals, params }) =>
 
 /** Changes a photo's alt text (its entry's author side, while the entry can change). */
 export const PATCH = endpoint({ access: ['teacher', 'class'] }, async ({ locals, params, request }) => {
-  const { altText } = parseInput(PhotoPatchSchema, await readJson(request, 4_000), 'photo change');
+  const { altText } = parseInput(PhotoPatchSchema, await readJson(request, BODY_BYTES_FORM), 'photo change');
   return { photo: await photoAltTextChange(locals.actor, params.id ?? '', altText) };
 });
 

@@ -7,6 +7,7 @@ import { readJson } from '../../../lib/http/respond';
 import { SchoolUpdateSchema } from '../../../lib/reach/school-schema';
 import { parseInput } from '../../../lib/validation';
 import { schoolIdParam } from './_school-id';
+import { BODY_BYTES_LONG_FORM } from '../../../lib/http/body-limits';
 
 /** One school with its teachers, classes and events (coordinators and admins). */
 export const GET = endpoint({ access: STAFF }, async ({ params }) => {
@@ -19,6 +20,6 @@ export const GET = endpoint({ access: STAFF }, async ({ params }) => {
 /** Edits a school, or accepts a proposed one with { status: "approved" }. */
 export const PATCH = endpoint({ access: STAFF }, async (context) => {
   const id = schoolIdParam(context.params.id);
-  const input = parseInput(SchoolUpdateSchema, await readJson(context.request, 8_000), 'school change');
+  const input = parseInput(SchoolUpdateSchema, await readJson(context.request, BODY_BYTES_LONG_FORM), 'school change');
   return { school: await schoolUpdate(id, input, actorUser(context.locals.actor).userId) };
 });

@@ -9,6 +9,7 @@ import { InputError } from '../../../../lib/errors';
 import { endpoint } from '../../../../lib/http/endpoint';
 import { readJson } from '../../../../lib/http/respond';
 import { parseInput } from '../../../../lib/validation';
+import { BODY_BYTES_LIST } from '../../../../lib/http/body-limits';
 
 /** How many came from each school (staff). */
 export const GET = endpoint({ access: STAFF }, async ({ locals, params }) => {
@@ -20,7 +21,7 @@ export const GET = endpoint({ access: STAFF }, async ({ locals, params }) => {
 export const PUT = endpoint({ access: STAFF }, async (context) => {
   const staff = actorUser(context.locals.actor);
   const event = await eventVisible(context.locals.actor, context.params.id ?? '');
-  const input = parseInput(AttendanceSchema, await readJson(context.request, 64_000), 'attendance');
+  const input = parseInput(AttendanceSchema, await readJson(context.request, BODY_BYTES_LIST), 'attendance');
   await db().transaction(async (trx) => {
     const ids = input.rows.map((r) => r.schoolId);
     const known = ids.length ? await trx('schools').whereIn('id', ids).pluck('id') : [];

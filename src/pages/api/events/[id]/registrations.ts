@@ -10,6 +10,7 @@ import { registrationCreateByEmail, registrationCreateForTeacher } from '../../.
 import { endpoint } from '../../../../lib/http/endpoint';
 import { json, readJson } from '../../../../lib/http/respond';
 import { parseInput } from '../../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../../lib/http/body-limits';
 
 /** The event's registrations (staff). */
 export const GET = endpoint({ access: STAFF }, async ({ locals, params }) => {
@@ -30,7 +31,7 @@ export const POST = endpoint({ access: ['anyone'] }, async (context) => {
     return json({ registration: await registrationCreateForTeacher(params.id ?? '', actor, site) }, 201);
   }
   await rateLimitEnforce(RATE_LIMITS.eventRegistrationIp, clientIp(context));
-  const input = parseInput(RegistrationCreateSchema, await readJson(request, 4_000), 'registration');
+  const input = parseInput(RegistrationCreateSchema, await readJson(request, BODY_BYTES_FORM), 'registration');
   await rateLimitEnforce(RATE_LIMITS.eventRegistrationEmail, input.email);
   return json({ registration: await registrationCreateByEmail(params.id ?? '', input, site) }, 201);
 });

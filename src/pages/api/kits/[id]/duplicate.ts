@@ -5,6 +5,7 @@ import { readJson, json } from '../../../../lib/http/respond';
 import { kitDuplicate, kitOwnedOrThrow, kitView, kitVisible } from '../../../../lib/kit/saved-kit.server';
 import { endpoint } from '../../../../lib/http/endpoint';
 import { parseInput } from '../../../../lib/validation';
+import { BODY_BYTES_FORM } from '../../../../lib/http/body-limits';
 
 const KitDuplicateSchema = z.object({
   /** Another of the teacher's classes; the same class when left out. */
@@ -16,7 +17,11 @@ const KitDuplicateSchema = z.object({
 export const POST = endpoint({ access: ['teacher'] }, async (context) => {
   const row = await kitOwnedOrThrow(context.locals.actor, context.params.id ?? '');
   const hasBody = (context.request.headers.get('content-length') ?? '0') !== '0';
-  const input = parseInput(KitDuplicateSchema, hasBody ? await readJson(context.request, 4_000) : {}, 'duplicate');
+  const input = parseInput(
+    KitDuplicateSchema,
+    hasBody ? await readJson(context.request, BODY_BYTES_FORM) : {},
+    'duplicate',
+  );
   const id = await kitDuplicate(context.locals.actor, row, siteUrl(context.url), input.classId, input.title);
   return json({ kit: kitView(await kitVisible(context.locals.actor, id)) }, 201);
 });
