@@ -163,6 +163,8 @@ describe('harder solids unfold with no overlap and fold back', () => {
   const cases: [string, () => Soup][] = [
     ['an icosphere of 1,280 faces', () => geometrySoup(new THREE.IcosahedronGeometry(60, 7))],
     ['a torus (genus 1)', () => geometrySoup(new THREE.TorusGeometry(50, 20, 16, 32))],
+    // 800 steps round the ring turn neighbouring quads 0.45° apart: they stay separate faces.
+    ['a finely bent torus of 4,800 triangles', () => geometrySoup(new THREE.TorusGeometry(60, 20, 3, 800))],
     ['a five-pointed star prism (non-convex caps)', () => starPrismSoup()],
     ['a spiky icosahedron (star-shaped, non-convex)', () => spikySoup()],
   ];
