@@ -3,6 +3,7 @@
  * PostgreSQL (127.0.0.1:54329) for development and tests when it is not given.
  */
 import type { Knex } from 'knex';
+import { DATABASE_POOL_MAX_DEFAULT } from './src/lib/db/knex';
 
 const common: Knex.Config = {
   client: 'pg',
@@ -17,15 +18,15 @@ function connection(fallbackDatabase: string): string {
 }
 
 const config: Record<'development' | 'test' | 'production', Knex.Config> = {
-  development: { ...common, connection: connection('kitwright'), pool: { min: 0, max: 10 } },
-  test: { ...common, connection: connection('kitwright_test'), pool: { min: 0, max: 10 } },
+  development: { ...common, connection: connection('kitwright'), pool: { min: 0, max: DATABASE_POOL_MAX_DEFAULT } },
+  test: { ...common, connection: connection('kitwright_test'), pool: { min: 0, max: DATABASE_POOL_MAX_DEFAULT } },
   production: {
     ...common,
     get connection() {
       if (!process.env.DATABASE_URL) throw new Error('DATABASE_URL must be set in production.');
       return process.env.DATABASE_URL;
     },
-    pool: { min: 2, max: Number(process.env.DATABASE_POOL_MAX ?? 20) },
+    pool: { min: 2, max: Number(process.env.DATABASE_POOL_MAX ?? DATABASE_POOL_MAX_DEFAULT) },
   },
 };
 

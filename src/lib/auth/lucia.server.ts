@@ -1,12 +1,14 @@
 /**
- * lucia v3 on PostgreSQL (tables users and user_sessions through @lucia-auth/adapter-postgresql on its own pg
- * Pool). Sessions last 30 days and slide: validateSession renews one with less than half its time left and
+ * lucia v3 on PostgreSQL (tables users and user_sessions through @lucia-auth/adapter-postgresql, its queries
+ * sent through the app's one Knex pool, so sessions take no connections of their own). Sessions last 30 days and slide: validateSession renews one with less than half its time left and
  * reports it as fresh, so the middleware re-sends the cookie. The cookie is HttpOnly, SameSite=Lax, and
  * Secure unless SITE_URL is plain http on loopback.
  */
 import { Lucia, TimeSpan } from 'lucia';
 import { NodePostgresAdapter } from '@lucia-auth/adapter-postgresql';
-import pg from 'pg';
+import type { Knex } from 'knex';
+import type { Pool } from 'pg';
+import { db } from '../db/knex';
 import type { Role } from './actor';
 import { USER_SESSION_COOKIE, USER_SESSION_DAYS, cookieSecure } from './cookies';
 
@@ -19,8 +21,24 @@ interface DatabaseUserAttributes {
   deactivated_at: Date | null;
 }
 
-function luciaCreate(pool: pg.Pool) {
-  return new Lucia(new NodePostgresAdapter(pool, { user: 'users', session: 'user_sessions' }), {
+/**
+ * The one method of a pg Pool that NodePostgresAdapter calls, answered on Knex's pool: its `$n` placeholders
+ * become Knex's `?`, each with its argument, and Knex's raw answer on pg is pg's own result (with `rows`).
+ */
+const knexPool = {
+  query(sql: string, args: readonly unknown[] = []) {
+    const bindings: Knex.RawBinding[] = [];
+    const text = sql.replace(/\$(\d+)/g, (_, n: string) => {
+      bindings.push(args[Number(n) - 1] as Knex.RawBinding);
+      return '?';
+    });
+    return db().raw(text, bindings);
+  },
+};
+
+function luciaCreate() {
+  // NodePostgresAdapter is typed for a pg Pool but calls only query(sql, args).
+  return new Lucia(new NodePostgresAdapter(knexPool as unknown as Pool, { user: 'users', session: 'user_sessions' }), {
     sessionExpiresIn: new TimeSpan(USER_SESSION_DAYS, 'd'),
     sessionCookie: {
       name: USER_SESSION_COOKIE,
@@ -48,10 +66,6 @@ let instance: ReturnType<typeof luciaCreate> | undefined;
 
 /** The shared lucia instance, created on first use so a build without DATABASE_URL does not fail. */
 export function lucia(): ReturnType<typeof luciaCreate> {
-  if (!instance) {
-    const url = process.env.DATABASE_URL;
-    if (!url) throw new Error('DATABASE_URL is not set; start the app with `npm start` or `npm run dev`.');
-    instance = luciaCreate(new pg.Pool({ connectionString: url, max: Number(process.env.DATABASE_POOL_MAX ?? 10) }));
-  }
+  instance ??= luciaCreate();
   return instance;
 }

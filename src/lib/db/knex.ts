@@ -4,6 +4,9 @@
  */
 import knexFactory, { type Knex } from 'knex';
 
+/** Connections per app instance when DATABASE_POOL_MAX is not set (README); lucia shares this pool. */
+export const DATABASE_POOL_MAX_DEFAULT = 10;
+
 let instance: Knex | undefined;
 
 /** The shared Knex instance. */
@@ -14,7 +17,7 @@ export function db(): Knex {
     instance = knexFactory({
       client: 'pg',
       connection: url,
-      pool: { min: 0, max: Number(process.env.DATABASE_POOL_MAX ?? 10) },
+      pool: { min: 0, max: Number(process.env.DATABASE_POOL_MAX ?? DATABASE_POOL_MAX_DEFAULT) },
     });
   }
   return instance;
