@@ -1,20 +1,40 @@
 /**
  * The review bench's own data (not the demo seed), for a database of its own: invented schools, teachers, classes
- * and REVIEW_BENCH_ENTRIES journal entries spread over every state, activity and the last half year, made by
- * PostgreSQL itself (INSERT … SELECT over generate_series: one statement a table, no rows sent over the wire), then
- * VACUUM ANALYZEd (visibility map and statistics, as autovacuum leaves a settled database) so the planner sees the
- * real spread. Skips the work when the database already holds exactly this data.
+ * and REVIEW_BENCH_ENTRIES journal entries (Markdown bodies of 0.9–3.6 kB, every tenth with a real saved result)
+ * spread over every state, activity and the last half year, made by PostgreSQL itself (INSERT … SELECT over
+ * generate_series: one statement a table, no rows sent over the wire), then VACUUM ANALYZEd (visibility map and
+ * statistics, as autovacuum leaves a settled database) so the planner sees the real spread. Skips the work when the database already holds exactly this data.
  */
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Knex } from 'knex';
 import { PROJECT_ROOT } from '../../scripts/lib/postgres';
+import { vibrationSavedResult } from '../../src/lib/analysis/saved-result-tools';
+import { vibrationAnalyse } from '../../src/lib/analysis/vibration';
+import { vibrationInputFromCsv } from '../../src/lib/analysis/vibration-csv';
+import { vibrationSampleCsv } from '../../src/lib/tools/vibration-sample';
 
 export const REVIEW_BENCH_ENTRIES = 100_000;
 export const REVIEW_BENCH_SCHOOLS = 40;
 const TEACHERS_PER_SCHOOL = 10;
 const CLASSES_PER_TEACHER = 3;
-export const REVIEW_BENCH_COORDINATOR_EMAIL = 'bench-coordinator@example.org';
+/** Names the seed's version too: a database seeded by an older seed is emptied and seeded again. */
+export const REVIEW_BENCH_COORDINATOR_EMAIL = 'bench-coordinator-2@example.org';
+
+/** One paragraph of an entry body in Markdown (invented); entry i has 1 + i mod 4 of them, 0.9–3.6 kB. */
+const BODY_PARAGRAPH =
+  'We built the **paper probe** at 1:20 and shook it on the foam block for ten seconds per run, three runs in ' +
+  'all. Two tabs came loose on the first run, so we added *white glue* and waited a day. The phone recorded ' +
+  'the acceleration on three axes at 100 Hz; we saved the [PSD](https://example.org/psd) and compared the peaks ' +
+  'with the ones the class before us found. Our loudest peak was near 20 Hz, where the foam block rocks. ' +
+  'Next time we want to tape the phone closer to the centre and try a stiffer block, then repeat all three ' +
+  'runs with the panels folded in.\n\n';
+
+/** The shake-test tool's own sample, analysed as the tool does: a real saved result (about 28 kB of JSON). */
+function benchSavedResult(): string {
+  const sample = vibrationInputFromCsv(vibrationSampleCsv(), { units: 'auto' });
+  return JSON.stringify(vibrationSavedResult(vibrationAnalyse(sample.input, sample.unitSource)));
+}
 
 /**
  * The state of entry i, by i mod 20: 40 % published, 30 % submitted and approved (the queue), 5 % team entries
@@ -84,22 +104,23 @@ export async function reviewBenchSeed(knex: Knex, entries = REVIEW_BENCH_ENTRIES
        WHERE users.role = 'teacher'`,
       [CLASSES_PER_TEACHER],
     );
-    // Entry i goes to class i mod n (so every class has entries in every state) and was submitted
-    // (i × 37) mod 180 days' worth of minutes ago.
+    // Entry i goes to class i mod n (so every class has entries in every state), was submitted (i × 37) mod 180
+    // days' worth of minutes ago, and every tenth carries a saved result.
     await trx.raw(
       `WITH c AS (SELECT id, teacher_id, row_number() OVER (ORDER BY id) - 1 AS n FROM classes),
        k AS (SELECT count(*) AS total FROM classes),
        g AS (SELECT i, ${STATE_OF_I} AS state,
                now() - make_interval(mins => (i * 37) % (180 * 24 * 60)) AS sent
              FROM generate_series(1, ?) AS i)
-       INSERT INTO entries (class_id, author_kind, author_id, team_name, title, body, activity_slug, state,
-         teacher_approved, submitted_at, reviewed_at, published_at, review_note)
+       INSERT INTO entries (class_id, author_kind, author_id, team_name, title, body, saved_results, activity_slug,
+         state, teacher_approved, submitted_at, reviewed_at, published_at, review_note)
        SELECT c.id,
          CASE WHEN i % 3 = 0 OR i % 20 = 14 THEN 'team' ELSE 'teacher' END::entry_author_kind,
          CASE WHEN i % 3 = 0 OR i % 20 = 14 THEN NULL ELSE c.teacher_id END,
          CASE WHEN i % 3 = 0 OR i % 20 = 14 THEN 'Team ' || (i % 50) END,
          'Bench entry ' || substr(md5(i::text), 1, 10),
-         'Invented bench text for entry ' || i || '.',
+         repeat(?, 1 + i % 4),
+         CASE WHEN i % 10 = 0 THEN jsonb_build_array(?::jsonb) ELSE '[]'::jsonb END,
          (?::text[])[1 + i % ?],
          g.state,
          g.state <> 'draft' AND i % 20 <> 14,
@@ -108,7 +129,7 @@ export async function reviewBenchSeed(knex: Knex, entries = REVIEW_BENCH_ENTRIES
          CASE WHEN g.state = 'published' THEN g.sent + interval '1 hour' END,
          CASE WHEN g.state IN ('returned', 'declined') THEN 'Invented bench note.' END
        FROM g, k, c WHERE c.n = g.i % k.total`,
-      [entries, slugs, slugs.length],
+      [entries, BODY_PARAGRAPH, benchSavedResult(), slugs, slugs.length],
     );
   });
   await knex.raw('VACUUM ANALYZE schools, users, classes, entries');

@@ -45,7 +45,45 @@ export interface EntryJoined extends EntryRow {
   kit_title: string | null;
 }
 
-function entrySelect(trx: Knex) {
+/** An entry as lists and the review queue read it: the start of its body and the number of its saved results. */
+export interface EntryListRow extends Omit<EntryJoined, 'body' | 'saved_results'> {
+  /** The first ENTRY_LIST_BODY_CHARS characters of the body: enough for an excerpt. */
+  body: string;
+  result_count: number;
+}
+
+/**
+ * Characters of the body a list reads: an excerpt shows about 220 characters of text, and Markdown markup rarely
+ * takes more than a few times that (common practice, no source). Reading whole bodies (up to ENTRY_BODY_MAX) and
+ * saved results (up to three of SAVED_RESULT_MAX_BYTES) for 25 rows costs the database, the wire and the
+ * Markdown renderer far more than a page of the queue needs.
+ */
+export const ENTRY_LIST_BODY_CHARS = 2_000;
+
+const ENTRY_LIST_COLUMNS = [
+  'id',
+  'class_id',
+  'kit_id',
+  'activity_slug',
+  'author_kind',
+  'author_id',
+  'team_name',
+  'title',
+  'state',
+  'teacher_approved',
+  'review_note',
+  'reviewed_by',
+  'photos_confirmed_at',
+  'photos_confirmed_by',
+  'submitted_at',
+  'reviewed_at',
+  'published_at',
+  'created_at',
+  'updated_at',
+].map((c) => `entries.${c}`);
+
+/** Entries with their class, school, teacher, reviewer and kit joined, and those tables' names selected. */
+function entryJoined(trx: Knex) {
   return trx('entries')
     .join('classes', 'classes.id', 'entries.class_id')
     .leftJoin('schools', 'schools.id', 'classes.school_id')
@@ -53,7 +91,6 @@ function entrySelect(trx: Knex) {
     .leftJoin('users as reviewer', 'reviewer.id', 'entries.reviewed_by')
     .leftJoin('kits', 'kits.id', 'entries.kit_id')
     .select(
-      'entries.*',
       'classes.name as class_name',
       'classes.teacher_id as teacher_id',
       'classes.school_id as school_id',
@@ -63,6 +100,18 @@ function entrySelect(trx: Knex) {
       'reviewer.display_name as reviewer_name',
       'kits.title as kit_title',
     );
+}
+
+function entrySelect(trx: Knex) {
+  return entryJoined(trx).select('entries.*');
+}
+
+function entryListSelect(trx: Knex) {
+  return entryJoined(trx).select(
+    ...ENTRY_LIST_COLUMNS,
+    trx.raw('left(entries.body, ?) as body', [ENTRY_LIST_BODY_CHARS]),
+    trx.raw('jsonb_array_length(entries.saved_results)::int as result_count'),
+  );
 }
 
 /** The entry with this id, or null; `forUpdate` locks its row until the transaction ends. */
@@ -181,28 +230,28 @@ export async function entryDelete(id: string, states: readonly EntryState[], trx
   return (await trx('entries').where({ id }).whereIn('state', states).delete()) > 0;
 }
 
-/** Entries of a class, newest first, optionally in some states only. */
+/** Entries of a class as lists read them, newest first, optionally in some states only. */
 export async function entryListForClass(
   classId: string,
   options: { states?: readonly EntryState[]; limit?: number } = {},
   trx: Knex = db(),
-): Promise<EntryJoined[]> {
+): Promise<EntryListRow[]> {
   if (!isUuid(classId)) return [];
-  const query = entrySelect(trx)
+  const query = entryListSelect(trx)
     .where('entries.class_id', classId)
     .orderBy('entries.updated_at', 'desc')
     .limit(options.limit ?? 500);
   if (options.states) query.whereIn('entries.state', options.states);
-  return (await query) as EntryJoined[];
+  return (await query) as EntryListRow[];
 }
 
-/** Entries of all of a teacher's classes, newest first. */
-export async function entryListForTeacher(teacherId: string, trx: Knex = db()): Promise<EntryJoined[]> {
-  return (await entrySelect(trx)
+/** Entries of all of a teacher's classes as lists read them, newest first. */
+export async function entryListForTeacher(teacherId: string, trx: Knex = db()): Promise<EntryListRow[]> {
+  return (await entryListSelect(trx)
     .where('classes.teacher_id', teacherId)
     .whereNull('classes.archived_at')
     .orderBy('entries.updated_at', 'desc')
-    .limit(500)) as EntryJoined[];
+    .limit(500)) as EntryListRow[];
 }
 
 const QUEUE_SORT_COLUMNS: Record<ReviewQueueQuery['sort'], string> = {
@@ -235,7 +284,7 @@ export async function reviewQueuePage(
   q: ReviewQueueQuery,
   now: Date,
   trx: Knex = db(),
-): Promise<{ rows: EntryJoined[]; total: number }> {
+): Promise<{ rows: EntryListRow[]; total: number }> {
   const order = [
     { column: QUEUE_SORT_COLUMNS[q.sort], order: q.dir, nulls: 'last' as const },
     { column: 'entries.id', order: q.dir },
@@ -250,7 +299,7 @@ export async function reviewQueuePage(
   if (q.sort === 'school') ids.leftJoin('schools', 'schools.id', 'classes.school_id');
   const [countRow, rows] = await Promise.all([
     reviewQueueFiltered(q, now, trx).count<{ count: string }[]>({ count: '*' }).first(),
-    entrySelect(trx).whereIn('entries.id', ids).orderBy(order) as Promise<EntryJoined[]>,
+    entryListSelect(trx).whereIn('entries.id', ids).orderBy(order) as Promise<EntryListRow[]>,
   ]);
   return { rows, total: Number(countRow?.count ?? 0) };
 }

@@ -1,6 +1,6 @@
 /** An entry as the API and the pages show it: the body as safe HTML beside its Markdown, and its photos. */
 import type { Actor } from '../auth/actor';
-import type { EntryJoined } from '../db/entries';
+import type { EntryJoined, EntryListRow } from '../db/entries';
 import { actorReviews, entryAuthorSide, entryIsOwnClass } from './entry-access.server';
 import { ENTRY_STATE_LABELS, entryStateEditable } from './entry-rules';
 import { markdownExcerpt, markdownToSafeHtml } from './markdown';
@@ -39,7 +39,7 @@ export function entryView(entry: EntryJoined, actor: Actor) {
 export type EntryView = ReturnType<typeof entryView>;
 
 /** One row of the review queue or a list: no body, an excerpt. */
-export function entrySummary(entry: EntryJoined, now: Date) {
+export function entrySummary(entry: EntryListRow, now: Date) {
   return {
     id: entry.id,
     title: entry.title,
@@ -53,7 +53,7 @@ export function entrySummary(entry: EntryJoined, now: Date) {
     teamName: entry.team_name,
     state: entry.state,
     teacherApproved: entry.teacher_approved,
-    resultCount: entry.saved_results.length,
+    resultCount: entry.result_count,
     submittedAt: iso(entry.submitted_at),
     publishedAt: iso(entry.published_at),
     waitingDays: entry.submitted_at

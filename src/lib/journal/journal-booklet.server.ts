@@ -6,7 +6,7 @@
  */
 import { classForActor } from '../auth/class-access.server';
 import type { Actor } from '../actor';
-import { entryListForClass, publishedEntries, type EntryJoined } from '../db/entries';
+import { entryById, entryListForClass, publishedEntries, type EntryJoined, type EntryListRow } from '../db/entries';
 import { schoolRecordById } from '../db/school-directory';
 import { ForbiddenError, NotFoundError } from '../errors';
 import { kitFonts } from '../kit/fonts.server';
@@ -16,14 +16,20 @@ import { journalBookletPdf, type BookletEntry } from './journal-booklet-pdf';
 
 const day = (d: Date) => new Date(d).toISOString().slice(0, 10);
 
+/** The whole entries of list rows (one read each; a booklet is a rare download). */
+async function entriesWhole(rows: EntryListRow[]): Promise<EntryJoined[]> {
+  return (await Promise.all(rows.map((r) => entryById(r.id)))).filter((e) => e !== null);
+}
+
 /** The entries and the booklet's title for the actor, or a NotFound/Forbidden error. */
 async function bookletSource(actor: Actor, query: JournalBookletQuery) {
   const staff = actor.kind === 'user' && actor.role !== 'teacher';
   if (query.classId) {
     const klass = await classForActor(actor, query.classId);
+    // A teacher's list reads the start of each body only; the booklet prints whole entries.
     const rows = staff
       ? await publishedEntries({ classId: klass.id, limit: JOURNAL_BOOKLET_ENTRIES_MAX })
-      : await entryListForClass(klass.id, { limit: JOURNAL_BOOKLET_ENTRIES_MAX });
+      : await entriesWhole(await entryListForClass(klass.id, { limit: JOURNAL_BOOKLET_ENTRIES_MAX }));
     return {
       title: `${klass.name} journal`,
       subtitle: staff
