@@ -8,7 +8,7 @@ import { TextSchema } from '../text-schema';
 import { PAPER_GSM_DEFAULT } from '../geometry/paper';
 import { PaperGsmSchema } from '../geometry/pattern-option-schemas';
 import { SHEET_SIZE_IDS } from '../layout/sheet-sizes';
-import { CustomVenueSchema, VENUES, type VenueId } from '../layout/venues';
+import { CustomVenueSchema, VENUES, venueCustom, type Venue, type VenueId } from '../layout/venues';
 import { zodFieldErrors } from '../validation';
 
 const VENUE_IDS = Object.keys(VENUES) as [VenueId, ...VenueId[]];
@@ -47,4 +47,11 @@ export function scaleQueryParse(params: URLSearchParams): {
   const parsed = ScaleQuerySchema.safeParse(raw);
   if (parsed.success) return { query: parsed.data, fields: {} };
   return { query: null, fields: zodFieldErrors(parsed.error) };
+}
+
+/** The venue a parsed query names: a preset, or the custom floor of its length and width. */
+export function scaleQueryVenue(query: ScaleQuery): Venue {
+  return query.venue === 'custom'
+    ? venueCustom({ lengthM: query.lengthM!, widthM: query.widthM! })
+    : VENUES[query.venue as VenueId];
 }
