@@ -3,7 +3,7 @@
  * PostgreSQL (127.0.0.1:54329) for development and tests when it is not given.
  */
 import type { Knex } from 'knex';
-import { DATABASE_POOL_MAX_DEFAULT } from './src/lib/db/knex';
+import { DATABASE_POOL_MAX_DEFAULT, serverConfig } from './src/lib/server-config';
 
 const common: Knex.Config = {
   client: 'pg',
@@ -26,7 +26,7 @@ const config: Record<'development' | 'test' | 'production', Knex.Config> = {
       if (!process.env.DATABASE_URL) throw new Error('DATABASE_URL must be set in production.');
       return process.env.DATABASE_URL;
     },
-    pool: { min: 2, max: Number(process.env.DATABASE_POOL_MAX ?? DATABASE_POOL_MAX_DEFAULT) },
+    pool: { min: 2, max: serverConfig('DATABASE_POOL_MAX') },
   },
 };
 

@@ -12,13 +12,14 @@ import { requestIdNew } from './lib/http/request-id';
 import { cspStyleHashesDropped, pageSecurityHeaders } from './lib/http/security-headers';
 import { routeMethodsAllowed, routeModulePaths, routeUrlMalformed } from './lib/http/route-methods';
 import { InputError, MethodNotAllowedError, NotFoundError } from './lib/errors';
+import { serverConfig } from './lib/server-config';
 
 /** The API route modules, loaded only to name a route's methods in a 405 (the route itself is loaded already). */
 const API_MODULES = import.meta.glob<Record<string, unknown>>('./pages/api/**/*.ts');
 
 // Read once, as astro.config.mjs does for the adapter's host handling: a bad SITE_URL fails at start, not per request.
-const ALLOWED_HOSTNAMES = originAllowedHostnames(process.env.SITE_URL);
-const PAGE_SECURITY_HEADERS = Object.entries(pageSecurityHeaders(process.env.SITE_URL));
+const ALLOWED_HOSTNAMES = originAllowedHostnames(serverConfig('SITE_URL'));
+const PAGE_SECURITY_HEADERS = Object.entries(pageSecurityHeaders(serverConfig('SITE_URL')));
 
 export const onRequest = defineMiddleware(async (context, next) => {
   const requestId = requestIdNew();

@@ -33,6 +33,7 @@ import {
 import { requestIdNew } from '../lib/http/request-id';
 import { pageSecurityHeaders } from '../lib/http/security-headers';
 import { liveLinkRedirect } from './live-link-redirect';
+import { serverConfig } from '../lib/server-config';
 
 /** Cache-Control of hashed build assets: a new build gives a changed file a new name. */
 export const IMMUTABLE_CACHE_CONTROL = 'public, max-age=31536000, immutable';
@@ -78,7 +79,7 @@ function flushStreamedLines(res: ServerResponse & { flush?: () => void }): void 
   }) as ServerResponse['write'];
 }
 
-const SECURITY_HEADERS = pageSecurityHeaders(process.env.SITE_URL);
+const SECURITY_HEADERS = pageSecurityHeaders(serverConfig('SITE_URL'));
 
 /**
  * Puts the request-target in origin-form (an absolute-form target becomes its path, its authority the Host), and
@@ -133,15 +134,15 @@ server.on('clientError', (err: NodeJS.ErrnoException, socket) => {
   socket.end(clientErrorAnswer(err.code, requestIdNew()));
 });
 
-const host = process.env.HOST ?? '127.0.0.1';
-const port = Number(process.env.PORT ?? 4321);
+const host = serverConfig('HOST');
+const port = serverConfig('PORT');
 server.listen(port, host, () => console.log(`Kitwright serving http://${host}:${port} from ${clientDir}`));
 
 // The job queue's worker (mail delivery, event reminders) runs in every app instance; KW_JOBS=off leaves it out.
 const jobs =
-  process.env.KW_JOBS === 'off' || !process.env.DATABASE_URL
+  serverConfig('KW_JOBS') === 'off' || !serverConfig('DATABASE_URL')
     ? null
-    : await jobWorkerStart({ connectionString: process.env.DATABASE_URL });
+    : await jobWorkerStart({ connectionString: serverConfig('DATABASE_URL')! });
 
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {

@@ -7,11 +7,11 @@
  * bucket of its own.
  */
 import type { APIContext } from 'astro';
+import { serverConfig } from '../server-config';
 
 /** How many proxies of ours stand in front (TRUST_PROXY); 0 when unset or not a whole number ≥ 1. */
 export function trustedProxyHops(): number {
-  const hops = Number(process.env.TRUST_PROXY ?? 0);
-  return Number.isInteger(hops) && hops >= 1 ? hops : 0;
+  return serverConfig('TRUST_PROXY');
 }
 
 /** The address to count attempts against; "unknown" when the adapter cannot tell. */

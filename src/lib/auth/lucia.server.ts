@@ -11,6 +11,7 @@ import type { Pool } from 'pg';
 import { db } from '../db/knex';
 import type { Role } from './actor';
 import { USER_SESSION_COOKIE, USER_SESSION_DAYS, cookieSecure } from './cookies';
+import { serverConfig } from '../server-config';
 
 interface DatabaseUserAttributes {
   email: string;
@@ -42,7 +43,7 @@ function luciaCreate() {
     sessionExpiresIn: new TimeSpan(USER_SESSION_DAYS, 'd'),
     sessionCookie: {
       name: USER_SESSION_COOKIE,
-      attributes: { secure: cookieSecure(process.env.SITE_URL), sameSite: 'lax' },
+      attributes: { secure: cookieSecure(serverConfig('SITE_URL')), sameSite: 'lax' },
     },
     getUserAttributes: (attributes) => ({
       email: attributes.email,

@@ -8,6 +8,7 @@ import { classSessionDelete, classSessionInsert } from '../db/classes';
 import { CLASS_SESSION_COOKIE, CLASS_SESSION_HOURS, cookieSecure } from './cookies';
 import { lucia } from './lucia.server';
 import { tokenHash, tokenNew } from './tokens.server';
+import { serverConfig } from '../server-config';
 
 type CookieContext = Pick<APIContext, 'cookies'>;
 
@@ -43,7 +44,7 @@ function classCookieOptions(maxAgeSeconds: number): AstroCookieSetOptions {
   return {
     httpOnly: true,
     sameSite: 'lax',
-    secure: cookieSecure(process.env.SITE_URL),
+    secure: cookieSecure(serverConfig('SITE_URL')),
     path: '/',
     maxAge: maxAgeSeconds,
   };

@@ -1,6 +1,8 @@
+import { serverConfig } from '../server-config';
+
 /** The public base URL links in mail point at: SITE_URL, else the origin the request came in on. */
 export function siteUrl(requestUrl: URL): string {
-  return process.env.SITE_URL || requestUrl.origin;
+  return serverConfig('SITE_URL') ?? requestUrl.origin;
 }
 
 /** True when a request is a plain HTML form post (answer with a redirect, not JSON). */

@@ -3,21 +3,19 @@
  * open connections at build time.
  */
 import knexFactory, { type Knex } from 'knex';
-
-/** Connections per app instance when DATABASE_POOL_MAX is not set (README); lucia shares this pool. */
-export const DATABASE_POOL_MAX_DEFAULT = 10;
+import { serverConfig } from '../server-config';
 
 let instance: Knex | undefined;
 
 /** The shared Knex instance. */
 export function db(): Knex {
   if (!instance) {
-    const url = process.env.DATABASE_URL;
+    const url = serverConfig('DATABASE_URL');
     if (!url) throw new Error('DATABASE_URL is not set; start the app with `npm start` or `npm run dev`.');
     instance = knexFactory({
       client: 'pg',
       connection: url,
-      pool: { min: 0, max: Number(process.env.DATABASE_POOL_MAX ?? DATABASE_POOL_MAX_DEFAULT) },
+      pool: { min: 0, max: serverConfig('DATABASE_POOL_MAX') },
     });
   }
   return instance;

@@ -7,6 +7,7 @@ import { db } from '../db/knex';
 import { remindersSend } from '../events/reminders.server';
 import type { MailMessage } from '../mail/message';
 import { mailDeliver } from '../mail/transport.server';
+import { serverConfig } from '../server-config';
 
 function isMailMessage(payload: unknown): payload is MailMessage {
   const m = payload as Partial<MailMessage> | null;
@@ -34,7 +35,7 @@ export const mailDeliverTask: Task = async (payload: unknown, helpers: JobHelper
 };
 
 export const eventRemindersTask: Task = async (_payload, helpers) => {
-  const sent = await remindersSend(process.env.SITE_URL ?? 'http://127.0.0.1:4321');
+  const sent = await remindersSend(serverConfig('SITE_URL') ?? 'http://127.0.0.1:4321');
   if (sent > 0) helpers.logger.info(`event-reminders: ${sent} reminder(s) queued`);
 };
 

@@ -3,18 +3,19 @@
  * npm test, and empty when a real SMTP_URL is configured).
  */
 import type { CapturedMail } from './captured-mail';
+import { serverConfig } from '../server-config';
 
 /** A captured message, as the SMTP fake serves it. */
 export type OutboxMessage = CapturedMail;
 
 /** True when an outbox exists to read (development and tests). */
 export function outboxAvailable(): boolean {
-  return Boolean(process.env.MAIL_OUTBOX_URL);
+  return serverConfig('MAIL_OUTBOX_URL') !== undefined;
 }
 
 /** The captured messages, newest first; null when there is no outbox or it cannot be reached. */
 export async function outboxMessages(): Promise<OutboxMessage[] | null> {
-  const url = process.env.MAIL_OUTBOX_URL;
+  const url = serverConfig('MAIL_OUTBOX_URL');
   if (!url) return null;
   try {
     const res = await fetch(url, { signal: AbortSignal.timeout(3000) });

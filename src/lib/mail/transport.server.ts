@@ -10,6 +10,7 @@ import type { Knex } from 'knex';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { jobAdd } from '../jobs/job-add.server';
 import type { MailMessage } from './message';
+import { serverConfig } from '../server-config';
 
 /** Delivery attempts before a message becomes a dead letter (backoff e^n s between tries: ~1.5 min in all). */
 export const MAIL_MAX_ATTEMPTS = 5;
@@ -23,7 +24,7 @@ function isLoopbackPlain(url: URL): boolean {
 /** The shared transport; throws when SMTP_URL is missing. */
 export function mailTransport(): Transporter {
   if (!transport) {
-    const smtpUrl = process.env.SMTP_URL;
+    const smtpUrl = serverConfig('SMTP_URL');
     if (!smtpUrl) throw new Error('SMTP_URL is not set; mail cannot be sent.');
     const url = new URL(smtpUrl);
     transport = nodemailer.createTransport(
@@ -36,7 +37,7 @@ export function mailTransport(): Transporter {
 /** Hands one message to the SMTP server and waits for it to accept it (the worker's job; not for requests). */
 export async function mailDeliver(message: MailMessage): Promise<void> {
   await mailTransport().sendMail({
-    from: process.env.MAIL_FROM ?? 'Kitwright <no-reply@kitwright.example>',
+    from: serverConfig('MAIL_FROM'),
     to: message.to,
     subject: message.subject,
     text: message.text,

@@ -8,6 +8,7 @@ import { resolve } from 'node:path';
 import { diskStorageCreate } from './disk-storage.server';
 import type { ObjectStorage } from './object-storage';
 import { s3StorageCreate } from './s3-storage.server';
+import { serverEnv } from '../server-config';
 
 /** The disk driver's folder when KW_STORAGE_DIR is not set, relative to the working folder. */
 export const STORAGE_DIR_DEFAULT = '.data/uploads';
@@ -34,8 +35,8 @@ export function storageFromEnv(env: Record<string, string | undefined>): ObjectS
 
 let instance: ObjectStorage | undefined;
 
-/** The process's storage (from process.env on first use). */
+/** The process's storage (from the environment on first use). */
 export function appStorage(): ObjectStorage {
-  instance ??= storageFromEnv(process.env);
+  instance ??= storageFromEnv(serverEnv());
   return instance;
 }

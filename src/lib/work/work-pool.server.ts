@@ -13,6 +13,7 @@ import type { StageReport } from '../http/progress-lines';
 import { workErrorRaise } from './work-errors';
 import type { WorkTask } from './work-tasks';
 import { WORK_ABORT_MESSAGE, type WorkMessage, type WorkOutcome } from './work-worker';
+import { serverConfig } from '../server-config';
 
 /** Tasks that may wait per thread before new ones are refused. // common practice, no source */
 export const WORK_QUEUE_MAX_PER_THREAD = 4;
@@ -74,8 +75,7 @@ export function workPoolCreate(o: { filename: string; threads: number; queueMax:
 
 /** Threads of the app's pool: KW_WORK_THREADS, else one per core but one, which the event loop keeps. */
 function threadCount(): number {
-  const set = Number(process.env.KW_WORK_THREADS);
-  return Number.isInteger(set) && set >= 1 ? set : Math.max(1, availableParallelism() - 1);
+  return serverConfig('KW_WORK_THREADS') ?? Math.max(1, availableParallelism() - 1);
 }
 
 let appPool: WorkPool | undefined;

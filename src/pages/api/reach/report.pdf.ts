@@ -7,9 +7,10 @@ import { reachReportPdf } from '../../../lib/reach/reach-report-pdf';
 import { reachSummary } from '../../../lib/reach/reach-data.server';
 import { queryObject, ReachReportQuerySchema } from '../../../lib/reach/reach-query';
 import { parseInput } from '../../../lib/validation';
+import { serverConfig } from '../../../lib/server-config';
 
 /** The office's name on the report (REACH_OFFICE_NAME), or a plain default. */
-const OFFICE_NAME = process.env.REACH_OFFICE_NAME ?? 'Outreach office';
+const OFFICE_NAME = serverConfig('REACH_OFFICE_NAME');
 const TOP_SCHOOLS = 10;
 
 /** The quarterly reach report PDF: the same figures as the dashboard for that quarter. */
