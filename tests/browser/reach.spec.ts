@@ -1,7 +1,8 @@
 /**
  * Reach in chromium against the test server: a coordinator opens the dashboard, downloads the quarterly PDF
  * (read back with pdf.js: page 1 states the headline figures on screen), filters by high-need and exports
- * the breakdown CSV (read back with papaparse: the rows on screen, every page); then handles teachers'
+ * the breakdown CSV (read back with papaparse: the rows on screen, every page) and the last eight quarters' CSV
+ * (the trend table on screen); then handles teachers'
  * proposed schools on the directory page — edits and accepts one, merges another into the school it
  * duplicates — and the database shows its teacher, class and event at the kept school.
  */
@@ -12,6 +13,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { pdfPageTexts } from '../fixtures/pdf-text';
+import { schoolWithMostKits } from '../fixtures/reach-schools';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
 import { axeSerious, browserLaunch, hydrated, pageWithSession } from './browser';
 
@@ -95,8 +97,11 @@ describe('the reach dashboard in the browser', () => {
     const page1 = pages[0]!.replace(/\n/g, ' ');
     for (const f of headline) expect(page1, f.label).toContain(`${f.label}: ${f.value.toLocaleString('en-US')}`);
 
-    const [answer] = await Promise.all([
+    const [answer, trendAnswer] = await Promise.all([
       page.waitForResponse((r) => r.url().includes('/api/reach/breakdown?') && r.url().includes('highNeed=true')),
+      page.waitForResponse(
+        (r) => r.url().includes('/api/reach/figures?') && r.url().includes('bucket=quarter&highNeed=true'),
+      ),
       page.locator('select[name="highNeed"]').selectOption('true'),
     ]);
     const { total } = (await answer.json()) as { total: number };
@@ -117,6 +122,19 @@ describe('the reach dashboard in the browser', () => {
     const names = onScreen.map((r) => r[0]!).filter((n) => n !== '');
     const flags = await knex('schools').whereIn('name', names).distinct('high_need');
     expect(flags.map((f) => f.high_need)).toEqual(names.length ? [true] : []);
+
+    // The last eight quarters under the same filter: the table on screen is its CSV, row for row.
+    await trendAnswer.finished();
+    await page.waitForTimeout(100);
+    const trendTable = page.getByTestId('trend-table');
+    const trendRows = await trendTable
+      .locator('tbody tr')
+      .evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')));
+    expect(trendRows.length).toBe(8);
+    const trendCsv = (await downloadBytes(page, 'trend-csv')).toString('utf8').replace(/^\uFEFF/, '');
+    const [trendHeader, ...trendCsvRows] = Papa.parse<string[]>(trendCsv, { skipEmptyLines: true }).data;
+    expect(trendHeader).toEqual(await trendTable.locator('thead th').allTextContents());
+    expect(trendCsvRows).toEqual(trendRows);
     expect(errors).toEqual([]);
   });
 });
@@ -207,6 +225,23 @@ describe('proposed schools in the browser', () => {
 });
 
 describe('the schools directory in the browser', () => {
+  it('shows the last eight quarters of a school and exports them as CSV, row for row', async () => {
+    const schoolId = await schoolWithMostKits(knex);
+    const { page, errors } = await pageAsCoordinator();
+    await page.goto(`/reach/schools/${schoolId}`);
+    const table = page.getByTestId('school-over-time');
+    const rows = await table
+      .locator('tbody tr')
+      .evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')));
+    expect(rows.length).toBe(8);
+    expect(rows.some((r) => r.slice(1).some((v) => Number(v) > 0))).toBe(true);
+    const csv = (await downloadBytes(page, 'school-over-time-csv')).toString('utf8').replace(/^\uFEFF/, '');
+    const [header, ...csvRows] = Papa.parse<string[]>(csv, { skipEmptyLines: true }).data;
+    expect(header).toEqual(await table.locator('thead th').allTextContents());
+    expect(csvRows).toEqual(rows);
+    expect(errors).toEqual([]);
+  });
+
   it('exports as CSV the schools the table shows under its filters', async () => {
     const { page, errors } = await pageAsCoordinator();
     await page.goto('/reach/schools');

@@ -1,17 +1,22 @@
 /**
  * The reach dashboard: a quarter and school filters, headline figures with the change from the quarter
- * before and their definitions, a chart of each figure by month (uPlot through the tools' Plot), the drill-down
- * of a figure's rows, the breakdown table and the quarterly report. Every number comes from /api/reach/*.
+ * before and their definitions, the drill-down of a figure's rows, each figure over the last eight quarters
+ * (a chart each, uPlot through the tools' Plot, and a table with its CSV), the breakdown table and the quarterly
+ * report. Every number comes from /api/reach/*.
  */
 import { useEffect, useMemo, useState } from 'react';
 import { api } from '../../lib/http/client';
 import type { ReachFigureId } from '../../lib/reach/figures';
+import { quartersEnding, REACH_TREND_QUARTERS } from '../../lib/reach/period';
 import type { ReachSummary } from '../../lib/reach/reach-data.server';
 import Plot from '../tools/Plot';
 import ReachBreakdownTable from './ReachBreakdownTable';
+import ReachSeriesTable from './ReachSeriesTable';
 
 interface Props {
   initial: ReachSummary;
+  /** Every figure by quarter over the REACH_TREND_QUARTERS quarters ending with `quarter`. */
+  initialTrend: ReachSummary;
   quarter: string;
   /** Quarters offered, newest first ('YYYY-Qn' and its label). */
   quarters: { value: string; label: string }[];
@@ -33,14 +38,19 @@ function change(value: number, previous: number): string {
   return `${pct >= 0 ? '+' : ''}${pct}% on the quarter before (${numberText(previous)})`;
 }
 
-export default function ReachDashboard({ initial, quarter: initialQuarter, quarters }: Props) {
+export default function ReachDashboard({ initial, initialTrend, quarter: initialQuarter, quarters }: Props) {
   const [quarter, setQuarter] = useState(initialQuarter);
   const [highNeed, setHighNeed] = useState('');
   const [summary, setSummary] = useState(initial);
+  const [trend, setTrend] = useState(initialTrend);
   const [drill, setDrill] = useState<Drill | null>(null);
   const [error, setError] = useState<string | null>(null);
   const query = useMemo<Record<string, string>>(
     () => ({ quarter, ...(highNeed ? { highNeed } : {}) }),
+    [quarter, highNeed],
+  );
+  const trendQuery = useMemo<Record<string, string>>(
+    () => ({ ...quartersEnding(quarter, REACH_TREND_QUARTERS)!, bucket: 'quarter', ...(highNeed ? { highNeed } : {}) }),
     [quarter, highNeed],
   );
 
@@ -51,6 +61,14 @@ export default function ReachDashboard({ initial, quarter: initialQuarter, quart
       .catch((e: Error) => abort.signal.aborted || setError(e.message));
     return () => abort.abort();
   }, [query]);
+
+  useEffect(() => {
+    const abort = new AbortController();
+    api<ReachSummary>('/api/reach/figures', { query: trendQuery, signal: abort.signal })
+      .then(setTrend)
+      .catch((e: Error) => abort.signal.aborted || setError(e.message));
+    return () => abort.abort();
+  }, [trendQuery]);
 
   async function drillDown(figure: ReachFigureId) {
     const body = await api<{
@@ -161,27 +179,34 @@ export default function ReachDashboard({ initial, quarter: initialQuarter, quart
         </section>
       )}
 
-      <section aria-labelledby="charts-heading">
-        <h2 id="charts-heading" className="text-xl font-bold">
-          By month
+      <section aria-labelledby="trend-heading">
+        <h2 id="trend-heading" className="text-xl font-bold">
+          The last {REACH_TREND_QUARTERS} quarters
         </h2>
-        <p className="text-sm text-ink-soft">
-          Months of the quarter: {summary.buckets.map((b, i) => `${i + 1} = ${b.label}`).join(', ')}.
-        </p>
+        <a
+          className="btn-secondary mt-2 inline-block text-sm"
+          href={`/api/reach/figures.csv?${new URLSearchParams(trendQuery)}`}
+          data-testid="trend-csv"
+          download
+        >
+          Download CSV
+        </a>
         <div className="mt-3 grid gap-6 lg:grid-cols-3">
-          {summary.figures.map((f) => (
+          {trend.figures.map((f) => (
             <Plot
               heightPx={180}
+              xFormat={(x) => trend.buckets[x - 1]?.label ?? ''}
               plot={{
                 kind: 'bar',
                 title: f.label,
-                xLabel: 'Month of the quarter',
+                xLabel: 'Quarter',
                 yLabel: f.label,
-                series: [{ label: f.label, points: summary.series[f.id].map((v, i) => [i + 1, v]) }],
+                series: [{ label: f.label, points: trend.series[f.id].map((v, i) => [i + 1, v]) }],
               }}
             />
           ))}
         </div>
+        <ReachSeriesTable summary={trend} testId="trend-table" />
       </section>
 
       <section aria-labelledby="breakdown-heading">

@@ -75,6 +75,15 @@ export function quarterPeriod(quarter: string): ReachPeriod | null {
   return { from, to: monthShift(from, 3) };
 }
 
+/** The trend shown beside a quarter: how many calendar quarters, ending with it. */
+export const REACH_TREND_QUARTERS = 8;
+
+/** The period of `count` calendar quarters ending with `quarter` (that one included), or null when it is not one. */
+export function quartersEnding(quarter: string, count: number): ReachPeriod | null {
+  const last = quarterPeriod(quarter);
+  return last && { from: monthShift(last.from, -3 * (count - 1)), to: last.to };
+}
+
 /** The calendar quarter 'YYYY-Qn' that holds a date. */
 export function quarterOf(iso: string): string {
   const d = dateParse(iso);

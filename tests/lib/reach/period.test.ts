@@ -6,6 +6,7 @@ import {
   quarterLabel,
   quarterOf,
   quarterPeriod,
+  quartersEnding,
   schoolYearOf,
 } from '../../../src/lib/reach/period';
 
@@ -22,6 +23,14 @@ describe('quarterPeriod', () => {
     expect(quarterOf('2026-07-01')).toBe('2026-Q3');
     expect(quarterOf('2026-09-30')).toBe('2026-Q3');
     expect(quarterOf('2026-10-01')).toBe('2026-Q4');
+  });
+});
+
+describe('quartersEnding', () => {
+  it('spans eight whole quarters back from the one given, across year boundaries', () => {
+    expect(quartersEnding('2026-Q3', 8)).toEqual({ from: '2024-10-01', to: '2026-10-01' });
+    expect(quartersEnding('2026-Q1', 1)).toEqual(quarterPeriod('2026-Q1'));
+    expect(quartersEnding('2026-Q9', 8)).toBeNull();
   });
 });
 
