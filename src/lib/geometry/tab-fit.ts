@@ -55,11 +55,13 @@ export function tabFit(
   const edge = tabEdge(a, b);
   const near = obstacles
     .filter((o) => boundsNear(o, a, b, depthWantedMm))
-    .map((polygon) => ({
-      polygon,
-      bounds: pointsBounds(polygon),
-    }));
-  const probe: TabProbe = { edge, tan: [0, 0], corners: new Float64Array(8), obstacles: [] };
+    .map((polygon) => ({ flat: flatConvex(polygon), bounds: pointsBounds(polygon) }));
+  const probe: TabProbe = {
+    edge,
+    tan: [0, 0],
+    shape: { xy: [0, 0, 0, 0, 0, 0, 0, 0], lengths: [0, 0, 0, 0] },
+    obstacles: [],
+  };
   let best: FittedTab = { polygonMm: [], depthMm: 0 };
   for (const taper of TAPERS) {
     const depthCap = Math.min(depthWantedMm, (0.98 * edgeMm) / taper.tanSum);
@@ -67,10 +69,10 @@ export function tabFit(
     probe.tan = taper.probeTan;
     // Every probe up to depthCap lies in the trapezoid at depthCap (its sides are rays from a and b), so an
     // obstacle clear of that trapezoid's bounds can never meet one: test only the rest.
-    tabProbeInto(edge, depthCap, probe.tan, probe.corners, false);
-    const reach = cornersBounds(probe.corners);
+    tabProbeInto(edge, depthCap, probe.tan, probe.shape.xy, false);
+    const reach = cornersBounds(probe.shape.xy);
     const pad = 1e-6 * Math.max(1, edgeMm, depthCap);
-    probe.obstacles = near.filter((o) => !boundsApart(o.bounds, reach, pad)).map((o) => o.polygon);
+    probe.obstacles = near.filter((o) => !boundsApart(o.bounds, reach, pad)).map((o) => o.flat);
     // A probe grows with its depth, so a slant whose probe at the depth to beat is blocked cannot beat it.
     const floor = Math.max(best.depthMm, depthMinMm);
     if (depthCap < floor || (floor > 0 && !probeFits(probe, floor))) continue;
@@ -95,9 +97,9 @@ export function tabFit(
 interface TabProbe {
   edge: TabEdge;
   tan: readonly [number, number];
-  /** Scratch: the probe's corners at the depth last tried. */
-  corners: Float64Array;
-  obstacles: (readonly Vec2Mm[])[];
+  /** Scratch: the probe at the depth last tried. */
+  shape: FlatConvex;
+  obstacles: FlatConvex[];
 }
 
 /**
@@ -105,17 +107,18 @@ interface TabProbe {
  * one that blocked it is moved to the front, where the next (usually deeper or equal) try meets it first.
  */
 function probeFits(probe: TabProbe, depthMm: number): boolean {
-  tabProbeInto(probe.edge, depthMm, probe.tan, probe.corners);
+  tabProbeInto(probe.edge, depthMm, probe.tan, probe.shape.xy);
+  flatLengthsSet(probe.shape);
   const obstacles = probe.obstacles;
   for (let i = 0; i < obstacles.length; i++) {
-    if (!probeOverlaps(probe.corners, obstacles[i]!)) continue;
+    if (!flatOverlap(probe.shape, obstacles[i]!)) continue;
     if (i > 0) obstacles.unshift(...obstacles.splice(i, 1));
     return false;
   }
   return true;
 }
 
-function cornersBounds(c: Float64Array): { minX: number; minY: number; maxX: number; maxY: number } {
+function cornersBounds(c: number[]): { minX: number; minY: number; maxX: number; maxY: number } {
   return {
     minX: Math.min(c[0]!, c[2]!, c[4]!, c[6]!),
     minY: Math.min(c[1]!, c[3]!, c[5]!, c[7]!),
@@ -139,7 +142,7 @@ function tabEdge(a: Vec2Mm, b: Vec2Mm): TabEdge {
 
 /** The trapezoid [b, a, a', b'] outside edge a→b, its sides leaning in by the given tangents. */
 function tabPolygon(e: TabEdge, depthMm: number, tan: readonly [number, number]): Vec2Mm[] {
-  const p = new Float64Array(8);
+  const p = [0, 0, 0, 0, 0, 0, 0, 0];
   tabProbeInto(e, depthMm, tan, p, false);
   return [
     [p[0]!, p[1]!],
@@ -153,13 +156,7 @@ function tabPolygon(e: TabEdge, depthMm: number, tan: readonly [number, number])
  * Writes the trapezoid's corners (x, y pairs) into `into`; the probe form lifts its base corners off the edge
  * by a thousandth of the depth, so the face owning the edge never counts as touching it.
  */
-function tabProbeInto(
-  e: TabEdge,
-  depthMm: number,
-  tan: readonly [number, number],
-  into: Float64Array,
-  probe = true,
-): void {
+function tabProbeInto(e: TabEdge, depthMm: number, tan: readonly [number, number], into: number[], probe = true): void {
   const { a, b, dir, out } = e;
   const a2x = a[0] + out[0] * depthMm + dir[0] * (depthMm * tan[0]),
     a2y = a[1] + out[1] * depthMm + dir[1] * (depthMm * tan[0]);
@@ -188,29 +185,6 @@ function tabProbeInto(
   into[7] = b2y;
 }
 
-/** convexOverlap for a probe given as four corners (x, y pairs), without building its points. */
-function probeOverlaps(p: Float64Array, q: readonly Vec2Mm[]): boolean {
-  for (let i = 0; i < 4; i++) if (insideConvexXY(p[i * 2]!, p[i * 2 + 1]!, q)) return true;
-  for (const v of q) if (insideProbe(v[0], v[1], p)) return true;
-  for (let i = 0; i < 4; i++) {
-    const j = (i + 1) % 4;
-    for (let k = 0; k < q.length; k++) {
-      const c = q[k]!,
-        d = q[(k + 1) % q.length]!;
-      if (segmentsCrossXY(p[i * 2]!, p[i * 2 + 1]!, p[j * 2]!, p[j * 2 + 1]!, c[0], c[1], d[0], d[1])) return true;
-    }
-  }
-  return false;
-}
-
-function insideProbe(x: number, y: number, p: Float64Array): boolean {
-  for (let i = 0; i < 4; i++) {
-    const j = (i + 1) % 4;
-    if (!insideEdge(x, y, p[i * 2]!, p[i * 2 + 1]!, p[j * 2]!, p[j * 2 + 1]!)) return false;
-  }
-  return true;
-}
-
 function boundsApart(
   o: { minX: number; minY: number; maxX: number; maxY: number },
   r: { minX: number; minY: number; maxX: number; maxY: number },
@@ -232,35 +206,78 @@ function boundsNear(poly: readonly Vec2Mm[], a: Vec2Mm, b: Vec2Mm, reachMm: numb
 
 /** Whether two convex CCW polygons share interior points: a vertex inside the other, or crossing edges. */
 export function convexOverlap(p: readonly Vec2Mm[], q: readonly Vec2Mm[]): boolean {
-  if (p.some((v) => insideConvexXY(v[0], v[1], q)) || q.some((v) => insideConvexXY(v[0], v[1], p))) return true;
-  for (let i = 0; i < p.length; i++) {
-    const p1 = p[i]!,
-      p2 = p[(i + 1) % p.length]!;
-    for (let j = 0; j < q.length; j++) {
-      const c = q[j]!,
-        d = q[(j + 1) % q.length]!;
-      if (segmentsCrossXY(p1[0], p1[1], p2[0], p2[1], c[0], c[1], d[0], d[1])) return true;
+  return flatOverlap(flatConvex(p), flatConvex(q));
+}
+
+/** A convex polygon as packed corners (x, y pairs) with the length of each edge i → i + 1, worked out once. */
+interface FlatConvex {
+  xy: number[];
+  lengths: number[];
+}
+
+function flatConvex(poly: readonly Vec2Mm[]): FlatConvex {
+  const xy: number[] = [];
+  for (const v of poly) xy.push(v[0], v[1]);
+  const out = { xy, lengths: poly.map(() => 0) };
+  flatLengthsSet(out);
+  return out;
+}
+
+function flatLengthsSet(c: FlatConvex): void {
+  const { xy, lengths } = c;
+  const n = lengths.length;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    lengths[i] = Math.hypot(xy[j * 2]! - xy[i * 2]!, xy[j * 2 + 1]! - xy[i * 2 + 1]!);
+  }
+}
+
+function flatOverlap(p: FlatConvex, q: FlatConvex): boolean {
+  const n = p.lengths.length,
+    m = q.lengths.length;
+  for (let i = 0; i < n; i++) if (flatInside(p.xy[i * 2]!, p.xy[i * 2 + 1]!, q)) return true;
+  for (let k = 0; k < m; k++) if (flatInside(q.xy[k * 2]!, q.xy[k * 2 + 1]!, p)) return true;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    for (let k = 0; k < m; k++) {
+      const l = (k + 1) % m;
+      const [a, b] = [p.xy, q.xy];
+      if (
+        segmentsCrossXY(
+          a[i * 2]!,
+          a[i * 2 + 1]!,
+          a[j * 2]!,
+          a[j * 2 + 1]!,
+          b[k * 2]!,
+          b[k * 2 + 1]!,
+          b[l * 2]!,
+          b[l * 2 + 1]!,
+        )
+      )
+        return true;
     }
   }
   return false;
 }
 
-function insideConvexXY(x: number, y: number, poly: readonly Vec2Mm[]): boolean {
-  for (let i = 0; i < poly.length; i++) {
-    const a = poly[i]!,
-      b = poly[(i + 1) % poly.length]!;
-    if (!insideEdge(x, y, a[0], a[1], b[0], b[1])) return false;
+/**
+ * (x, y) lies left of every edge by more than a billionth of a millimetre (or of the edge, if longer); an
+ * edge of no length passes.
+ */
+function flatInside(x: number, y: number, c: FlatConvex): boolean {
+  const { xy, lengths } = c;
+  const n = lengths.length;
+  for (let i = 0; i < n; i++) {
+    const len = lengths[i]!;
+    if (len === 0) continue;
+    const j = (i + 1) % n;
+    const ax = xy[i * 2]!,
+      ay = xy[i * 2 + 1]!;
+    const ex = xy[j * 2]! - ax,
+      ey = xy[j * 2 + 1]! - ay;
+    if (!((ex * (y - ay) - ey * (x - ax)) / len > 1e-9 * Math.max(1, len))) return false;
   }
   return true;
-}
-
-/** (x, y) lies left of a→b by more than a billionth of a millimetre (or of the edge, if longer); a point edge passes. */
-function insideEdge(x: number, y: number, ax: number, ay: number, bx: number, by: number): boolean {
-  const ex = bx - ax,
-    ey = by - ay;
-  const len = Math.hypot(ex, ey);
-  if (len === 0) return true;
-  return (ex * (y - ay) - ey * (x - ax)) / len > 1e-9 * Math.max(1, len);
 }
 
 function segmentsCrossXY(

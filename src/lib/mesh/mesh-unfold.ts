@@ -367,7 +367,9 @@ function separatedBy(p: readonly Vec2Mm[], q: readonly Vec2Mm[], tol: number): b
       b = p[(i + 1) % 3]!;
     const limit = tol * Math.hypot(b[0] - a[0], b[1] - a[1]);
     // robust-predicates' orient2d is negative when the third point is left of a→b (inside a CCW triangle).
-    if (q.every((r) => -orient2d(a[0], a[1], b[0], b[1], r[0], r[1]) <= limit)) return true;
+    let outside = true;
+    for (let k = 0; k < 3 && outside; k++) outside = -orient2d(a[0], a[1], b[0], b[1], q[k]![0], q[k]![1]) <= limit;
+    if (outside) return true;
   }
   return false;
 }
@@ -443,7 +445,8 @@ function freeAngleAt(index: RBush<TriItem>, at: Vec2Mm, toward: Vec2Mm, turn: 1 
     for (let i = 0; i < poly.length; i++) {
       const p = poly[i]!;
       if (Math.abs(p[0] - at[0]) > tol || Math.abs(p[1] - at[1]) > tol) continue;
-      for (const q of [poly[(i + 1) % poly.length]!, poly[(i + poly.length - 1) % poly.length]!]) {
+      for (let side = 0; side < 2; side++) {
+        const q = poly[(i + (side === 0 ? 1 : poly.length - 1)) % poly.length]!;
         let angle = turn * (Math.atan2(q[1] - at[1], q[0] - at[0]) - base);
         angle = ((angle % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
         if (angle > 1e-9 && angle < 2 * Math.PI - 1e-9) free = Math.min(free, angle);
