@@ -62,7 +62,8 @@ const assets = sirv(clientDir, {
 });
 
 const compress = compression({
-  // Tiny bodies (most JSON errors) cost more to compress than they save; 1 kB is the middleware's own default.
+  // Tiny bodies (most JSON errors) cost more to compress than they save; 1 kB is the middleware's own default. The
+  // middleware can only see the size of an answer that states its Content-Length, as the API's JSON does (respond.ts).
   threshold: 1024,
   // The media-type list the middleware consults does not know NDJSON; its result line holds every sheet's SVG.
   filter: (req, res) =>
@@ -93,14 +94,11 @@ function targetRefused(req: IncomingMessage, res: ServerResponse): boolean {
     req.headers.host = absolute.host;
   }
   const target = req.url ?? '';
+  const refuse = !target.startsWith('/') ? rawTargetUnusable : rawTargetLeavesApi(target) ? rawTargetAnswer : null;
+  if (!refuse) return false;
+  // An id only for a request answered here: the middleware gives every other request its own.
   const requestId = requestIdNew();
-  const refusal = !target.startsWith('/')
-    ? rawTargetUnusable(target, requestId)
-    : rawTargetLeavesApi(target)
-      ? rawTargetAnswer(target, requestId)
-      : null;
-  if (!refusal) return false;
-  const { status, body } = refusal;
+  const { status, body } = refuse(target, requestId);
   res.writeHead(status, {
     ...SECURITY_HEADERS,
     'content-type': 'application/json; charset=utf-8',

@@ -63,11 +63,23 @@ describe('compression', () => {
     expect(decoded(packed).toString('utf8').slice(0, 200)).toBe(plain.body.toString('utf8').slice(0, 200));
   });
 
-  it('compresses a JSON answer of the API', async () => {
-    const res = await raw('/api/models', { 'accept-encoding': 'gzip, br' });
+  it('compresses a JSON answer of the API above the 1 kB threshold', async () => {
+    const res = await raw('/api/activities', { 'accept-encoding': 'gzip, br' });
     expect(res.status).toBe(200);
     expect(res.headers['content-encoding']).toBe('br');
+    expect(decoded(res).byteLength).toBeGreaterThan(1024);
     expect(JSON.parse(decoded(res).toString('utf8'))).toBeTruthy();
+  });
+
+  it('sends a JSON answer under the threshold as it is, with its Content-Length and no chunked framing', async () => {
+    const res = await raw('/api/health', { 'accept-encoding': 'gzip, br' });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBeUndefined();
+    // RFC 9112 §6.1–6.3: the length is known, so the body goes without chunk headers.
+    expect(res.headers['transfer-encoding']).toBeUndefined();
+    expect(Number(res.headers['content-length'])).toBe(res.body.byteLength);
+    expect(res.body.byteLength).toBeLessThan(1024);
+    expect((JSON.parse(res.body.toString('utf8')) as { status: string }).status).toBe('ok');
   });
 
   it('answers a build script from its brotli twin, byte for byte the script, cached as immutable', async () => {

@@ -35,7 +35,8 @@ export function rawTargetUnusable(target: string, requestId: string): { status: 
 
 /** True when the raw request-target names /api/ but its resolved path lies outside /api/. */
 export function rawTargetLeavesApi(target: string): boolean {
-  if (!target.startsWith(API_PREFIX)) return false;
+  // Only a dot segment climbs, and one is written with a dot or its escape: most targets need no URL parse.
+  if (!target.startsWith(API_PREFIX) || !/\.|%2e/i.test(target)) return false;
   try {
     return !new URL(target, 'http://target.invalid').pathname.startsWith(API_PREFIX);
   } catch {

@@ -11,9 +11,16 @@ export interface ErrorBody {
 
 const JSON_HEADERS = { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'no-store' };
 
-/** A JSON response with the given status. */
+/**
+ * A JSON response with the given status, and its Content-Length: without one node sends the body chunked, a
+ * chunk header and a last empty chunk around every answer (RFC 9112 §7.1).
+ */
 export function json(data: unknown, status = 200, headers: Record<string, string> = {}): Response {
-  return new Response(JSON.stringify(data), { status, headers: { ...JSON_HEADERS, ...headers } });
+  const bytes = new TextEncoder().encode(JSON.stringify(data) ?? '');
+  return new Response(bytes, {
+    status,
+    headers: { ...JSON_HEADERS, 'content-length': String(bytes.byteLength), ...headers },
+  });
 }
 
 /** A JSON error response of the shared shape. */

@@ -2,11 +2,17 @@
  * The entry of each worker thread of the pool (work-pool.server.ts; config/server-entries.mjs builds it beside the
  * server's entry.mjs). A task arrives with a MessagePort: stage reports go out on it as they happen, and an
  * "abort" coming in stops the task between stages, as it would on the request's thread. Modules load once per
- * thread, so the font bytes (kit/fonts.server.ts) are read once per worker, not per build.
+ * thread, so the font bytes (kit/fonts.server.ts) are read once per worker, not per build. Each thread runs at a
+ * lower CPU priority than the event loop (thread-priority.server.ts).
  */
-import type { MessagePort } from 'node:worker_threads';
+import { isMainThread, type MessagePort } from 'node:worker_threads';
 import { workErrorData, type WorkErrorData } from './work-errors';
 import { workTaskRun, type WorkTask } from './work-tasks';
+import { threadPriorityLower } from './thread-priority.server';
+
+// Builds yield the cores to the event loop, which answers every other request meanwhile. The request's thread
+// imports this module too (for WORK_ABORT_MESSAGE) and keeps its priority.
+if (!isMainThread) threadPriorityLower();
 
 export type WorkOutcome = { ok: true; value: unknown } | { ok: false; error: WorkErrorData };
 
