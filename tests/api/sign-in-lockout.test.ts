@@ -1,14 +1,15 @@
 /**
  * The escalating per-account sign-in lockout (src/lib/auth/sign-in-lockout.ts) against the server: ten wrong
  * passwords lock the address for a minute, each further one for twice as long, always 429 with Retry-After;
- * an address without an account behaves the same; a completed reset-by-mail ends the lock.
+ * an address without an account behaves the same; a completed reset-by-mail ends the lock; wrong current
+ * passwords of the account page's password change count toward the same lock (a second door to guess through).
  */
 import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RATE_LIMITS } from '../../src/lib/auth/rate-limit-rules';
 import { testKnex } from '../db/database';
 import { postJson } from './harness';
-import { accountCreate, emailUnique, linkIn, mailWait, TEST_PASSWORD } from './auth-helpers';
+import { accountCreate, emailUnique, linkIn, mailWait, TEST_PASSWORD, userSessionCookie } from './auth-helpers';
 
 let knex: Knex;
 beforeAll(() => {
@@ -82,5 +83,23 @@ describe('escalating sign-in lockout', () => {
       .where({ key: `${RATE_LIMITS.signInAccount.name}:${teacher.email}` })
       .delete();
     expect((await signIn(teacher.email, password)).status).toBe(200);
+  });
+
+  it('counts wrong current passwords of a password change toward the same lock', async () => {
+    const teacher = await accountCreate(knex, { role: 'teacher', label: 'lockout-change' });
+    const cookie = await userSessionCookie(knex, teacher.id);
+    const change = (currentPassword: string) =>
+      postJson('/api/auth/password', { currentPassword, newPassword: 'a new password nobody guessed' }, { cookie });
+    for (let i = 0; i < 10; i += 1) expect((await change(`a guess number ${i}`)).status).toBe(400);
+    // The flat per-minute window is spent too; only the lock may refuse what follows.
+    await knex('rate_limit_counters')
+      .where({ key: `${RATE_LIMITS.signInAccount.name}:${teacher.email}` })
+      .delete();
+    const locked = await change(TEST_PASSWORD);
+    expect(locked.status).toBe(429);
+    expect(Number(locked.headers.get('retry-after'))).toBeGreaterThan(55);
+    // The same lock holds at sign-in, for the right password as well.
+    expect((await signIn(teacher.email, TEST_PASSWORD)).status).toBe(429);
+    expect((await knex('sign_in_lockouts').where({ email: teacher.email }).first()).failures).toBe(10);
   });
 });

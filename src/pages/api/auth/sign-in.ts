@@ -5,9 +5,9 @@ import { housekeepingMaybe } from '../../../lib/auth/housekeeping.server';
 import { RATE_LIMITS } from '../../../lib/auth/rate-limit-rules';
 import { rateLimitEnforce, rateLimitReset } from '../../../lib/auth/rate-limit.server';
 import { SignInSchema } from '../../../lib/auth/schemas';
-import { signInFailureCount, signInLockEnd, signInLockEnforce } from '../../../lib/auth/sign-in-lockout.server';
+import { passwordCheckLocked } from '../../../lib/auth/sign-in-lockout.server';
 import { userSessionStart } from '../../../lib/auth/session.server';
-import { signInCheck, signInWarm } from '../../../lib/auth/sign-in.server';
+import { signInWarm } from '../../../lib/auth/sign-in.server';
 import { siteUrl } from '../../../lib/auth/site-url';
 import { AuthenticationError, ForbiddenError } from '../../../lib/errors';
 import { endpoint } from '../../../lib/http/endpoint';
@@ -27,13 +27,9 @@ export const POST = endpoint({ access: ['anyone'] }, async (context) => {
   const input = parseInput(SignInSchema, await readJson(context.request, BODY_BYTES_LONG_FORM), 'sign-in');
   await rateLimitEnforce(RATE_LIMITS.signInIp, clientIp(context));
   await rateLimitEnforce(RATE_LIMITS.signInAccount, input.email);
-  await signInLockEnforce(input.email);
-  const check = await signInCheck(input.email, input.password);
+  const check = await passwordCheckLocked(input.email, input.password);
   if (!check.ok) {
-    if (check.reason === 'credentials') {
-      await signInFailureCount(input.email);
-      throw new AuthenticationError(WRONG);
-    }
+    if (check.reason === 'credentials') throw new AuthenticationError(WRONG);
     if (check.reason === 'deactivated') {
       throw new ForbiddenError('This account has been deactivated. Ask an admin of your outreach office.');
     }
@@ -41,7 +37,6 @@ export const POST = endpoint({ access: ['anyone'] }, async (context) => {
     throw new ForbiddenError(`Confirm your e-mail address first: we have sent a new link to ${check.account.email}.`);
   }
   await rateLimitReset(RATE_LIMITS.signInAccount, input.email);
-  await signInLockEnd(input.email);
   housekeepingMaybe(context.locals.requestId);
   await userSessionStart(context, check.account.id);
   return {
