@@ -150,6 +150,42 @@ describe('live links', () => {
     expect(error.fields.paper[0]).toContain('letter, a4, tabloid, a3');
   });
 
+  it('filters the /links page by code, title or target, by whose links and by state', async () => {
+    const tag = `filter${Date.now().toString(36)}`;
+    type Made = { id: string; code: string; title: string };
+    const made: Made[] = [];
+    for (const [title, target] of [
+      [`${tag} hall poster`, '/activities'],
+      [`${tag} bookmark`, `https://example.org/${tag}`],
+      [`${tag} 100% done`, '/'],
+    ] as const) {
+      made.push((await (await send('POST', '/api/links', { title, target })).json()).link);
+    }
+    const [hall, bookmark, percent] = made as [Made, Made, Made];
+    expect((await send('PATCH', `/api/links/${hall.id}`, { retired: true })).status).toBe(200);
+    const codes = async (query: string) => {
+      const html = await (await api(`/links?${query}`, { headers: { cookie } })).text();
+      return made.filter((l) => html.includes(l.title)).map((l) => l.code);
+    };
+    expect(await codes(`q=${tag}`)).toEqual(made.map((l) => l.code));
+    expect(await codes(`q=${tag}&state=live`)).toEqual([bookmark.code, percent.code]);
+    expect(await codes(`q=${tag}&state=retired`)).toEqual([hall.code]);
+    expect(await codes(`q=${bookmark.code.toLowerCase()}`)).toEqual([bookmark.code]);
+    expect(await codes(`q=example.org/${tag}`)).toEqual([bookmark.code]);
+    // "%" is a literal percent sign here, not a wildcard.
+    expect(await codes(`q=${encodeURIComponent(`${tag} 100%`)}`)).toEqual([percent.code]);
+    // None of these links belongs to a kit.
+    expect(await codes(`q=${tag}&owner=kit`)).toEqual([]);
+    expect(await codes(`q=${tag}&owner=other`)).toEqual(made.map((l) => l.code));
+    const html = await (await api(`/links?q=${tag}&state=retired`, { headers: { cookie } })).text();
+    expect(html).toContain('1 link matches your filters.');
+    // A demo kit's own link is found under the kits' links only.
+    const kitLink = await knex('live_links').whereNotNull('kit_id').first('code');
+    const kitPage = (owner: string) => api(`/links?q=${kitLink.code}&owner=${owner}`, { headers: { cookie } });
+    expect(await (await kitPage('kit')).text()).toContain('1 link matches your filters.');
+    expect(await (await kitPage('other')).text()).toContain('No link matches these filters.');
+  });
+
   it('offers the poster and the bookmarks on every print size on the /links page, each a PDF', async () => {
     await send('POST', '/api/links', { title: 'Listed', target: '/activities' });
     const html = await (await api('/links', { headers: { cookie } })).text();

@@ -35,6 +35,8 @@ interface Props {
   site: string;
   /** The sizes a link prints on (LINK_PRINT_PAPERS) with their labels, from the page. */
   printSizes: PrintSize[];
+  /** The page lists only the links its filters keep (an empty list then means none matched). */
+  filtered: boolean;
 }
 
 /** A print size: its sheet size id and label ("US Letter"). */
@@ -43,7 +45,7 @@ export interface PrintSize {
   label: string;
 }
 
-export default function LiveLinks({ initialLinks, site, printSizes }: Props) {
+export default function LiveLinks({ initialLinks, site, printSizes, filtered }: Props) {
   const [links, setLinks] = useState(initialLinks);
   const [chartFor, setChartFor] = useState<LiveLinkView | null>(null);
   const replace = (link: LiveLinkView) => setLinks((ls) => ls.map((l) => (l.id === link.id ? link : l)));
@@ -59,7 +61,9 @@ export default function LiveLinks({ initialLinks, site, printSizes }: Props) {
         <h2 id="links-heading" className="text-xl font-bold">
           Links
         </h2>
-        {links.length === 0 ? (
+        {links.length === 0 && filtered ? (
+          <p className="card mt-3">No link matches these filters.</p>
+        ) : links.length === 0 ? (
           <p className="card mt-3">
             No live links yet. Create one above, print its QR code, and change its target whenever the page it should
             open changes.

@@ -2,6 +2,7 @@
 import type { Knex } from 'knex';
 import type { ClientBase as PgConnection } from 'pg';
 import { linkCodeNew } from '../links/link-code';
+import { LINK_FILTER_NONE, linkSearchPattern, type LinkFilter } from '../links/link-filter';
 import { isUuid } from './accounts';
 import { db } from './knex';
 
@@ -115,18 +116,34 @@ export async function liveLinkList(trx: Knex = db()): Promise<LiveLinkView[]> {
   return (await withScans(trx).orderBy('l.created_at', 'desc')).map(view);
 }
 
-/** One page of links, newest first, with how many there are in all; `page` counts from 1. */
+/** Keeps the links `filter` asks for (src/lib/links/link-filter.ts). */
+function linkFiltered(query: Knex.QueryBuilder, filter: LinkFilter): Knex.QueryBuilder {
+  if (filter.search) {
+    const pattern = linkSearchPattern(filter.search);
+    query.where((w) =>
+      w.whereILike('l.code', pattern).orWhereILike('l.title', pattern).orWhereILike('l.target_url', pattern),
+    );
+  }
+  if (filter.owner === 'kit') query.whereNotNull('l.kit_id');
+  if (filter.owner === 'other') query.whereNull('l.kit_id');
+  if (filter.state === 'live') query.whereNull('l.retired_at');
+  if (filter.state === 'retired') query.whereNotNull('l.retired_at');
+  return query;
+}
+
+/** One page of the links `filter` keeps, newest first, with how many it keeps in all; `page` counts from 1. */
 export async function liveLinkPage(
   page: number,
   pageSize: number,
+  filter: LinkFilter = LINK_FILTER_NONE,
   trx: Knex = db(),
 ): Promise<{ links: LiveLinkView[]; total: number }> {
   const [rows, count] = await Promise.all([
-    withScans(trx)
+    linkFiltered(withScans(trx), filter)
       .orderBy([{ column: 'l.created_at', order: 'desc' }, { column: 'l.id' }])
       .limit(pageSize)
       .offset((page - 1) * pageSize),
-    trx('live_links').count({ count: '*' }).first(),
+    linkFiltered(trx('live_links as l'), filter).count({ count: '*' }).first(),
   ]);
   return { links: rows.map(view), total: Number(count?.count ?? 0) };
 }
