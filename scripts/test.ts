@@ -80,10 +80,18 @@ async function vitest(name: string, config: string, env: NodeJS.ProcessEnv): Pro
   total.skipped += report.numPendingTests + report.numTodoTests;
 }
 
-function chromiumEnsure(): void {
-  if (existsSync('/usr/bin/chromium')) return;
-  console.log('[test] /usr/bin/chromium missing: installing Debian packages chromium and poppler-utils…');
-  aptInstall(['chromium', 'poppler-utils']);
+/** The Debian packages the tests run, each with a program it installs: the browser, poppler and qpdf. */
+const TEST_TOOLS: { pkg: string; bin: string }[] = [
+  { pkg: 'chromium', bin: '/usr/bin/chromium' },
+  { pkg: 'poppler-utils', bin: '/usr/bin/pdffonts' },
+  { pkg: 'qpdf', bin: '/usr/bin/qpdf' },
+];
+
+function testToolsEnsure(): void {
+  const missing = TEST_TOOLS.filter((t) => !existsSync(t.bin)).map((t) => t.pkg);
+  if (missing.length === 0) return;
+  console.log(`[test] installing missing Debian packages: ${missing.join(', ')}…`);
+  aptInstall(missing);
 }
 
 async function main(): Promise<void> {
@@ -117,7 +125,7 @@ async function main(): Promise<void> {
     await seedDemoIfEmpty(dbUrl);
     const mail = await smtpFakeStart(smtpPort, mailHttpPort);
     started.push({ stop: () => mail.close() });
-    chromiumEnsure();
+    testToolsEnsure();
     appBuild();
     const env = appEnv({ databaseUrl: dbUrl, host, port, smtpPort, mailHttpPort });
     const serverLog = join(reportDir, 'server.log');
