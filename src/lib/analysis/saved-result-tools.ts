@@ -11,13 +11,22 @@ import type { LaunchStackInput, LaunchStackResult } from './launch-stack';
 import type { MagneticResult } from './magnetic';
 import type { OrbitEclipseInput, OrbitEclipseResult } from './orbit-eclipse';
 import type { PsdProfileResult } from './psd-profile';
-import { SAVED_RESULT_MAX_SERIES, savedResultBuild, seriesDownsample, type SavedResult } from './saved-result';
+import {
+  SAVED_RESULT_MAX_SERIES,
+  savedResultBuild,
+  seriesDownsample,
+  seriesLabel,
+  type SavedResult,
+} from './saved-result';
 import type { ThermalInput, ThermalResult } from './thermal';
 import type { VibrationResult } from './vibration';
 
 const zip = (x: ArrayLike<number>, y: ArrayLike<number>): [number, number][] =>
   Array.from({ length: Math.min(x.length, y.length) }, (_, i) => [x[i]!, y[i]!]);
-const series = (label: string, pts: [number, number][]) => ({ label, points: seriesDownsample(pts) });
+const series = (label: string, pts: [number, number][], suffix = '') => ({
+  label: seriesLabel(label, suffix),
+  points: seriesDownsample(pts),
+});
 const positive = (pts: [number, number][]) => pts.filter(([x, y]) => x > 0 && y > 0);
 
 /** Saved form of a vibration result: the statistics and bands, and the PSD per axis on log-log axes. */
@@ -80,7 +89,7 @@ export function thermalSavedResult(input: ThermalInput, r: ThermalResult): Saved
       t / 60,
       fit.finalTemperature + (fit.initialTemperature - fit.finalTemperature) * Math.exp(-(t - t0) / fit.timeConstantS),
     ]);
-    return [readings, series(`${run.label} (fit)`, curve)];
+    return [readings, series(run.label, curve, ' (fit)')];
   });
   return savedResultBuild(
     'thermal',
@@ -194,12 +203,14 @@ export function deploymentSavedResult(r: DeploymentResult): SavedResult {
     return [
       series(d.label, seriesThin(d.runningRatePct)),
       series(
-        `${d.label}: 95 % low`,
+        d.label,
         band.map(([t, lo]) => [t, lo]),
+        ': 95 % low',
       ),
       series(
-        `${d.label}: 95 % high`,
+        d.label,
         band.map(([t, , hi]) => [t, hi]),
+        ': 95 % high',
       ),
     ];
   });

@@ -11,6 +11,8 @@ import { TextSchema } from '../text-schema';
 /** Most points a saved plot series may hold; longer series are downsampled. */
 export const SAVED_RESULT_MAX_POINTS = 2_000;
 export const SAVED_RESULT_MAX_SERIES = 12;
+/** Longest label of a saved plot series, characters. */
+export const SAVED_SERIES_LABEL_MAX = 60;
 /** Largest serialised saved result, bytes (checked by savedResultParse). */
 export const SAVED_RESULT_MAX_BYTES = 400_000;
 /** Version of the computations in src/lib/analysis; bump when a result would change. */
@@ -40,7 +42,9 @@ export const SavedPlotSchema = z
     xLabel: text(60),
     yLabel: text(60),
     series: z
-      .array(z.object({ label: text(60), points: z.array(point).max(SAVED_RESULT_MAX_POINTS) }).strict())
+      .array(
+        z.object({ label: text(SAVED_SERIES_LABEL_MAX), points: z.array(point).max(SAVED_RESULT_MAX_POINTS) }).strict(),
+      )
       .max(SAVED_RESULT_MAX_SERIES),
   })
   .strict();
@@ -62,6 +66,21 @@ export const SavedResultSchema = z
   );
 export type SavedResult = z.infer<typeof SavedResultSchema>;
 export type SavedPlot = z.infer<typeof SavedPlotSchema>;
+
+/**
+ * A series label of at most SAVED_SERIES_LABEL_MAX characters: `name` followed by `suffix` (" (fit)",
+ * ": 95 % low"), the name shortened with an ellipsis where both would not fit, so a long name the tool accepted
+ * still makes a valid saved plot and the suffix that tells two lines apart survives.
+ */
+export function seriesLabel(name: string, suffix = ''): string {
+  if (name.length + suffix.length <= SAVED_SERIES_LABEL_MAX) return name + suffix;
+  let kept = '';
+  for (const ch of name) {
+    if (kept.length + ch.length + 1 + suffix.length > SAVED_SERIES_LABEL_MAX) break;
+    kept += ch;
+  }
+  return `${kept}…${suffix}`;
+}
 
 /**
  * Keeps at most `maxPoints` points of a series, as the minimum and maximum of equal-count buckets in

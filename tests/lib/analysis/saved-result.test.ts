@@ -3,9 +3,17 @@ import { CleanroomInputSchema, cleanroomClassify } from '../../../src/lib/analys
 import { MagneticInputSchema, dipoleFieldAxialT, magneticFieldFit } from '../../../src/lib/analysis/magnetic';
 import { orbitEclipse } from '../../../src/lib/analysis/orbit-eclipse';
 import { psdProfileGrms } from '../../../src/lib/analysis/psd-profile';
-import { SAVED_RESULT_MAX_POINTS, SavedResultSchema, seriesDownsample } from '../../../src/lib/analysis/saved-result';
+import { DeploymentInputSchema, deploymentAnalyse } from '../../../src/lib/analysis/deployment';
+import {
+  SAVED_RESULT_MAX_POINTS,
+  SAVED_SERIES_LABEL_MAX,
+  SavedResultSchema,
+  seriesDownsample,
+  seriesLabel,
+} from '../../../src/lib/analysis/saved-result';
 import {
   cleanroomSavedResult,
+  deploymentSavedResult,
   magneticSavedResult,
   orbitEclipseSavedResult,
   psdProfileSavedResult,
@@ -88,5 +96,39 @@ describe('tool saved results', () => {
     ];
     for (const s of all) expect(SavedResultSchema.safeParse(JSON.parse(JSON.stringify(s))).success).toBe(true);
     expect(all[0]!.plot.series.map((s) => s.label)).toEqual(['lamp', 'lamp (fit)']);
+  });
+});
+
+describe('series labels at the length limit', () => {
+  const longest = 'w'.repeat(SAVED_SERIES_LABEL_MAX);
+
+  it('keeps a name and suffix that fit, and shortens a longer name so the suffix survives', () => {
+    expect(seriesLabel('lamp', ' (fit)')).toBe('lamp (fit)');
+    const label = seriesLabel(longest, ': 95 % low');
+    expect(label).toHaveLength(SAVED_SERIES_LABEL_MAX);
+    expect(label.endsWith('…: 95 % low')).toBe(true);
+    // A character outside the BMP (two UTF-16 units, as zod counts) is never split in half.
+    const astral = seriesLabel('🚀'.repeat(40), ' (fit)');
+    expect(astral.length).toBeLessThanOrEqual(SAVED_SERIES_LABEL_MAX);
+    expect(astral).toMatch(/^(🚀)+… \(fit\)$/u);
+  });
+
+  it('saves a deployment and a thermal result whose names are as long as the tools accept', () => {
+    const deployment = DeploymentInputSchema.parse({
+      designs: [{ label: longest, trials: [{ outcome: 'none' }, { outcome: 'partial' }] }],
+    });
+    const thermal = ThermalInputSchema.parse({
+      runs: [{ label: longest, timeS: [0, 60, 120, 180], temperatureC: [40, 30, 25, 22] }],
+    });
+    const saved = [
+      deploymentSavedResult(deploymentAnalyse(deployment)),
+      thermalSavedResult(thermal, thermalAnalyse(thermal)),
+    ];
+    for (const s of saved) {
+      expect(SavedResultSchema.safeParse(JSON.parse(JSON.stringify(s))).success).toBe(true);
+      // Each line of a plot keeps a label of its own.
+      const labels = s.plot.series.map((x) => x.label);
+      expect(new Set(labels).size).toBe(labels.length);
+    }
   });
 });
