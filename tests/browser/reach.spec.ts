@@ -43,6 +43,11 @@ async function downloadBytes(page: Page, testId: string): Promise<Buffer> {
   return readFile((await download.path())!);
 }
 
+/** Waits until a table has drawn its newest answer: the island clears aria-busy once the rows are set. */
+async function tableSettled(page: Page, testId: string): Promise<void> {
+  await page.locator(`[data-testid="${testId}"][aria-busy="false"]`).waitFor();
+}
+
 /** The breakdown table's body rows as cell texts, collected over every page with its Next button. */
 async function breakdownRowsOnScreen(page: Page): Promise<string[][]> {
   const rows: string[][] = [];
@@ -60,7 +65,7 @@ async function breakdownRowsOnScreen(page: Page): Promise<string[][]> {
       next.click(),
     ]);
     await answer.finished();
-    await page.waitForTimeout(100);
+    await tableSettled(page, 'breakdown-table');
   }
 }
 
@@ -125,7 +130,7 @@ describe('the reach dashboard in the browser', () => {
 
     // The last eight quarters under the same filter: the table on screen is its CSV, row for row.
     await trendAnswer.finished();
-    await page.waitForTimeout(100);
+    await tableSettled(page, 'trend-table');
     const trendTable = page.getByTestId('trend-table');
     const trendRows = await trendTable
       .locator('tbody tr')

@@ -31,6 +31,7 @@ export default function ReachBreakdownTable({ query, figures }: Props) {
   const [page, setPage] = useState(1);
   const [data, setData] = useState<{ rows: Row[]; total: number }>({ rows: [], total: 0 });
   const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
 
   const params = useMemo(
     () => ({
@@ -45,12 +46,14 @@ export default function ReachBreakdownTable({ query, figures }: Props) {
   useEffect(() => setPage(1), [params]);
   useEffect(() => {
     const abort = new AbortController();
+    setBusy(true);
     api<{ rows: Row[]; total: number }>('/api/reach/breakdown', {
       query: { ...params, page, pageSize: PAGE_SIZE },
       signal: abort.signal,
     })
       .then((d) => (setData(d), setError(null)))
-      .catch((e: Error) => abort.signal.aborted || setError(e.message));
+      .catch((e: Error) => abort.signal.aborted || setError(e.message))
+      .finally(() => abort.signal.aborted || setBusy(false));
     return () => abort.abort();
   }, [params, page]);
 
@@ -109,7 +112,7 @@ export default function ReachBreakdownTable({ query, figures }: Props) {
         </p>
       )}
       <div className="mt-3 overflow-x-auto">
-        <table className="w-full text-left text-sm" data-testid="breakdown-table">
+        <table className="w-full text-left text-sm" data-testid="breakdown-table" aria-busy={busy}>
           <thead>
             {table.getHeaderGroups().map((hg) => (
               <tr key={hg.id} className="border-b border-ink/20">

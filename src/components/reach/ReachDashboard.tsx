@@ -43,6 +43,7 @@ export default function ReachDashboard({ initial, initialTrend, quarter: initial
   const [highNeed, setHighNeed] = useState('');
   const [summary, setSummary] = useState(initial);
   const [trend, setTrend] = useState(initialTrend);
+  const [trendBusy, setTrendBusy] = useState(false);
   const [drill, setDrill] = useState<Drill | null>(null);
   const [error, setError] = useState<string | null>(null);
   const query = useMemo<Record<string, string>>(
@@ -64,9 +65,11 @@ export default function ReachDashboard({ initial, initialTrend, quarter: initial
 
   useEffect(() => {
     const abort = new AbortController();
+    setTrendBusy(true);
     api<ReachSummary>('/api/reach/figures', { query: trendQuery, signal: abort.signal })
       .then(setTrend)
-      .catch((e: Error) => abort.signal.aborted || setError(e.message));
+      .catch((e: Error) => abort.signal.aborted || setError(e.message))
+      .finally(() => abort.signal.aborted || setTrendBusy(false));
     return () => abort.abort();
   }, [trendQuery]);
 
@@ -206,7 +209,7 @@ export default function ReachDashboard({ initial, initialTrend, quarter: initial
             />
           ))}
         </div>
-        <ReachSeriesTable summary={trend} testId="trend-table" />
+        <ReachSeriesTable summary={trend} testId="trend-table" busy={trendBusy} />
       </section>
 
       <section aria-labelledby="breakdown-heading">

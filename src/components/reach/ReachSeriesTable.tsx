@@ -8,12 +8,14 @@ import type { ReachSummary } from '../../lib/reach/reach-data.server';
 interface Props {
   summary: Pick<ReachSummary, 'bucket' | 'buckets' | 'figures' | 'series'>;
   testId: string;
+  /** True while newer figures are on their way: the table says so to assistive technology (aria-busy). */
+  busy?: boolean;
 }
 
-export default function ReachSeriesTable({ summary, testId }: Props) {
+export default function ReachSeriesTable({ summary, testId, busy = false }: Props) {
   return (
     <div className="mt-3 overflow-x-auto">
-      <table className="w-full text-left text-sm" data-testid={testId}>
+      <table className="w-full text-left text-sm" data-testid={testId} aria-busy={busy}>
         <thead>
           <tr className="border-b border-ink/20">
             <th className="py-2 pr-3">{REACH_BUCKET_HEADINGS[summary.bucket]}</th>
