@@ -5,10 +5,12 @@
  */
 import { createServer } from 'node:http';
 import pg from 'pg';
+import { serverConfig } from '../../src/lib/server-config';
 
+// The same pool size as the app's (src/lib/server-config.ts), so the two are compared on equal connections.
 const pool = new pg.Pool({
-  connectionString: process.env.DATABASE_URL,
-  max: Number(process.env.DATABASE_POOL_MAX ?? 10),
+  connectionString: serverConfig('DATABASE_URL'),
+  max: serverConfig('DATABASE_POOL_MAX'),
 });
 const COOKIE = /(?:^|;\s*)kw_session=([^;]+)/;
 
