@@ -139,10 +139,22 @@ export function volumetricTensor(positions: readonly Vec3[]): number[][] {
 
 /** Eigenvalues (largest first), semi-axes, axes, elongation and planarity of a formation. */
 export function formationQuality(positions: readonly Vec3[]): FormationQuality {
-  const eig = new EigenvalueDecomposition(new Matrix(volumetricTensor(positions)), { assumeSymmetric: true });
+  // The tensor is decomposed for the formation scaled to an extent of 1 about its centre, then scaled back:
+  // the same eigenvectors, eigenvalues × extent². At the formation's own scale, coordinates a class would
+  // never type but a request may hold (1e-300 cm beside 1e6 cm) leave subnormal entries on which ml-matrix's
+  // tql2 runs past the end of its arrays; so offsets below 1e-12 of the extent, far below any measurement, count
+  // as 0.
+  const centre = mesocentre(positions);
+  const extent = Math.max(...positions.flatMap((p) => sub(p, centre).map(Math.abs)));
+  const scaled = (x: number) => (Math.abs(x / extent) < 1e-12 ? 0 : x / extent);
+  const unit = extent > 0 ? positions.map((p) => sub(p, centre).map(scaled) as Vec3) : positions;
+  const eig = new EigenvalueDecomposition(new Matrix(volumetricTensor(unit)), { assumeSymmetric: true });
   const vectors = eig.eigenvectorMatrix;
   const order = eig.realEigenvalues
-    .map((value, i) => ({ value: Math.max(0, value), axis: vectors.getColumn(i) as Vec3 }))
+    .map((value, i) => ({
+      value: Math.max(0, value) * (extent > 0 ? extent * extent : 1),
+      axis: vectors.getColumn(i) as Vec3,
+    }))
     .sort((x, y) => y.value - x.value);
   const [a, b, c] = order.map((o) => Math.sqrt(o.value)) as Vec3;
   const elongation = a > 0 ? 1 - b / a : 1;

@@ -234,3 +234,17 @@ describe('fourPointGradient', () => {
     );
   });
 });
+
+describe('formations with coordinates far below the formation size', () => {
+  it('answers an InputError, not a crash inside the eigen-decomposition (a case the fuzz suite found)', () => {
+    const input = FourPointInputSchema.parse({
+      points: [
+        { positionCm: [5.4e-323, 6.15e-96, -2.7e-24], value: 1e-18 },
+        { positionCm: [-3.4e-304, 1.4e-302, 3.1e-209], value: 1e-40 },
+        { positionCm: [3e-323, 4.1e-284, -1_000_000], value: -1e-149 },
+        { positionCm: [-1.8e-302, -999_999, -1.5e-190], value: -8e-259 },
+      ],
+    });
+    expect(() => fourPointGradient(input)).toThrow(InputError);
+  });
+});
