@@ -9,6 +9,7 @@ import { STLExporter } from 'three/examples/jsm/exporters/STLExporter.js';
 import { OBJExporter } from 'three/examples/jsm/exporters/OBJExporter.js';
 import polygonClipping, { type Polygon } from 'polygon-clipping';
 import type { Piece, Vec2Mm } from '../../../src/lib/geometry/types';
+import type { ParsedMesh } from '../../../src/lib/mesh/mesh-types';
 
 export type Soup = number[][][]; // triangles → 3 points → xyz
 
@@ -18,6 +19,28 @@ export function geometrySoup(g: THREE.BufferGeometry): Soup {
   const out: Soup = [];
   for (let i = 0; i < p.count; i += 3) out.push([0, 1, 2].map((k) => [p.getX(i + k), p.getY(i + k), p.getZ(i + k)]));
   return out;
+}
+
+/** A soup as the parser would hand it over: every corner its own vertex; one group unless named per triangle. */
+export function soupMesh(soup: Soup, groups: string[] = ['Mesh'], triangleGroup?: number[]): ParsedMesh {
+  const n = soup.length;
+  return {
+    positions: Float64Array.from(soup.flat(2)),
+    triangles: Uint32Array.from({ length: n * 3 }, (_, i) => i),
+    triangleGroup: triangleGroup ? Uint16Array.from(triangleGroup) : new Uint16Array(n),
+    groups,
+  };
+}
+
+/** Signed volume by the divergence theorem (sum of origin tetrahedra), with three.js vector arithmetic. */
+export function meshVolume(m: ParsedMesh): number {
+  let v = 0;
+  const p = m.positions;
+  for (let t = 0; t < m.triangles.length; t += 3) {
+    const [a, b, c] = [0, 1, 2].map((k) => new THREE.Vector3().fromArray(p, m.triangles[t + k]! * 3));
+    v += a!.dot(b!.clone().cross(c!)) / 6;
+  }
+  return v;
 }
 
 export const PLATONIC = {

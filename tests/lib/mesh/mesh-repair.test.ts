@@ -3,30 +3,7 @@ import * as THREE from 'three';
 import { meshCheck } from '../../../src/lib/mesh/mesh-repair';
 import { meshPrepare } from '../../../src/lib/mesh/mesh-prepare';
 import { InputError } from '../../../src/lib/errors';
-import type { ParsedMesh } from '../../../src/lib/mesh/mesh-types';
-import { geometrySoup, stlBytes, type Soup } from './mesh-fixtures';
-
-function soupMesh(soup: Soup): ParsedMesh {
-  const positions = Float64Array.from(soup.flat(2));
-  const n = soup.length;
-  return {
-    positions,
-    triangles: Uint32Array.from({ length: n * 3 }, (_, i) => i),
-    triangleGroup: new Uint16Array(n),
-    groups: ['Mesh'],
-  };
-}
-
-/** Signed volume by the divergence theorem (sum of origin tetrahedra), computed here from the repaired mesh. */
-function volume(m: ParsedMesh): number {
-  let v = 0;
-  const p = m.positions;
-  for (let t = 0; t < m.triangles.length; t += 3) {
-    const [a, b, c] = [0, 1, 2].map((k) => new THREE.Vector3().fromArray(p, m.triangles[t + k]! * 3));
-    v += a!.dot(b!.clone().cross(c!)) / 6;
-  }
-  return v;
-}
+import { geometrySoup, meshVolume as volume, soupMesh, stlBytes, type Soup } from './mesh-fixtures';
 
 const cube = () => geometrySoup(new THREE.BoxGeometry(2, 2, 2));
 const flip = (tri: number[][]) => [tri[0]!, tri[2]!, tri[1]!];
