@@ -33,7 +33,10 @@ export type AuditAction =
   | 'event.updated'
   | 'event.attendance_recorded'
   | 'link.created'
-  | 'link.updated';
+  | 'link.updated'
+  | 'model.shared'
+  | 'model.unshared'
+  | 'model.deleted';
 
 export interface AuditEvent {
   id: string;

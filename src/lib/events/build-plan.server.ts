@@ -54,7 +54,7 @@ export async function buildPlanForEvent(
   const event = await planEvent(actor, id);
   const kit = event.kitId ? await kitById(event.kitId) : null;
   if (!kit) throw new ConflictError('This event has no kit yet: pick the kit to build in the event first.');
-  const request = kitRequestForRow(kit);
+  const request = await kitRequestForRow(kit);
   const venue = planVenue(event, query);
   const model = request.model;
   const fitted = stakeOutPlan(model, venue, 1).venueScale.scaleDenominator;

@@ -11,6 +11,7 @@ import { deployablePanelFrame } from './panel-pattern';
 import { CHORD_TOLERANCE_MM } from './paper';
 import { vec3Combine, vec3Cross, vec3Sub, vec3Length } from './vec';
 import { launchStackLoftRings } from './launch-stack';
+import { meshShapeSolid } from '../mesh/mesh-model';
 
 /** Slab thickness of panels in the mesh, mm at kit scale (a printable plate; common practice, no source). */
 export const PANEL_MESH_THICKNESS_MM = 1;
@@ -19,6 +20,7 @@ const RING_SEGMENTS_MAX = 128;
 
 /** The closed meshes of every solid part of a parsed model at 1:scaleDenominator. */
 export function modelMesh(model: Model, scaleDenominator: number): ModelMesh {
+  if (model.mesh) return meshShapeSolid(model.mesh, scaleDenominator);
   const k = 1000 / scaleDenominator;
   const positions: number[] = [];
   const indices: number[] = [];

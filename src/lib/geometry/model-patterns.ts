@@ -23,6 +23,7 @@ import { pieceFromNet } from './piece-builder';
 import { frameApply } from './hinge-tree';
 import { vec3Combine } from './vec';
 import { launchStackPieces } from './launch-stack';
+import { meshShapeUnfold } from '../mesh/mesh-model';
 
 export const PatternOptionsSchema = z.object({
   /** The kit is 1:scaleDenominator of the real model. */
@@ -30,6 +31,8 @@ export const PatternOptionsSchema = z.object({
   paperGsm: PaperGsmSchema,
   /** The class the kit is for: sets anchor sizes and which parts are too fine for paper. */
   gradeBand: z.enum(BUILD_GRADE_BANDS).default(BUILD_GRADE_BAND_DEFAULT),
+  /** The largest piece the sheet takes, mm: an imported mesh is cut along folds to fit it (parametric pieces are cut by the packer). */
+  pieceMaxMm: z.object({ widthMm: z.number().positive(), heightMm: z.number().positive() }).optional(),
 });
 export type PatternOptions = z.input<typeof PatternOptionsSchema>;
 
@@ -44,6 +47,14 @@ export interface ModelPatterns {
 export function modelPatterns(model: Model, options: PatternOptions): ModelPatterns {
   const { scaleDenominator: N, paperGsm: gsm } = options;
   const band = options.gradeBand ?? BUILD_GRADE_BAND_DEFAULT;
+  if (model.mesh) {
+    const { pieces } = meshShapeUnfold(model.mesh, {
+      scaleDenominator: N,
+      paperGsm: gsm,
+      pieceMaxMm: options.pieceMaxMm,
+    });
+    return { pieces, threads: [], substitutes: [] };
+  }
   if (model.stack) return { pieces: launchStackPieces(model, N, gsm, band), threads: [], substitutes: [] };
   const k = 1000 / N;
   const substitutes: PartSubstitute[] = [];

@@ -7,6 +7,7 @@ import { TextSchema } from '../text-schema';
 import { refineValid } from '../validation';
 import { BodySchema, lengthM } from './body-schema';
 import { bodyFaceSizesM } from './body-shape';
+import { isMeshShape, type MeshShape } from '../mesh/mesh-types';
 
 export {
   BodySchema,
@@ -134,6 +135,13 @@ export const ModelSchema = refineValid(
       .default([]),
     /** Present for a launch stack of identical probes (their body) on an adapter. */
     stack: LaunchStackSchema.optional(),
+    /**
+     * Present for an imported mesh (src/lib/mesh/mesh-model.ts): the body is then the mesh's bounding box and the
+     * pieces and solid come from the mesh. Only the server puts one here, from an upload; JSON cannot hold one.
+     */
+    mesh: z
+      .custom<MeshShape>(isMeshShape, 'a model cannot carry a mesh: upload the file and send its importId')
+      .optional(),
   }),
   (model, ctx) => {
     if (model.stack && model.appendages.length > 0) {

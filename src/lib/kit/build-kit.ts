@@ -2,14 +2,14 @@
  * The kit pipeline: a validated request → patterns (model engine) → sheet layout → PDF, SVG per sheet,
  * STL and JSON, with a content hash of the inputs and engine version. Pure; the caller passes the font bytes.
  */
-import { modelPatterns } from '../geometry/model-patterns';
+import { modelPatterns, type PatternOptions } from '../geometry/model-patterns';
 import type { Model } from '../geometry/model-schema';
 import type { Piece, WireBoomThread } from '../geometry/types';
-import { BUILDABILITY_MINIMUMS, type BuildGradeBand } from '../geometry/buildability';
+import { BUILDABILITY_MINIMUMS } from '../geometry/buildability';
 import type { PartSubstitute } from '../geometry/part-substitutes';
 import { printPlateMesh } from '../layout/print-plate';
 import { cutListRows } from '../layout/cut-list';
-import { sheetPackKit } from '../layout/sheet-packer';
+import { sheetPackKit, sheetPieceRoomMm } from '../layout/sheet-packer';
 import { sheetSize } from '../layout/sheet-sizes';
 import type { KitLayout } from '../layout/types';
 import { kitJson } from '../render/kit-json';
@@ -27,17 +27,12 @@ import type { KitRequest } from './kit-request';
 export interface KitEngine {
   patterns(
     model: Model,
-    scaleDenominator: number,
-    paperGsm: number,
-    gradeBand: BuildGradeBand,
+    options: PatternOptions,
   ): { pieces: Piece[]; threads: WireBoomThread[]; substitutes: PartSubstitute[] };
 }
 
 /** The model engine of src/lib/geometry. */
-export const GEOMETRY_KIT_ENGINE: KitEngine = {
-  patterns: (model, scaleDenominator, paperGsm, gradeBand) =>
-    modelPatterns(model, { scaleDenominator, paperGsm, gradeBand }),
-};
+export const GEOMETRY_KIT_ENGINE: KitEngine = { patterns: modelPatterns };
 
 export type KitStage = 'patterns' | 'layout' | 'pdf' | 'svg' | 'stl' | 'json';
 export type KitOutput = 'pdf' | 'svg' | 'stl' | 'json';
@@ -81,10 +76,15 @@ export async function buildKit(request: KitRequest, fonts: PdfFonts, options: Ki
   };
   options.signal?.throwIfAborted();
   const hash = contentHash(request);
-  const patterns = engine.patterns(request.model, request.scaleDenominator, request.paperGsm, request.gradeBand);
+  const size = sheetSize(request.sheetSizeId);
+  const patterns = engine.patterns(request.model, {
+    scaleDenominator: request.scaleDenominator,
+    paperGsm: request.paperGsm,
+    gradeBand: request.gradeBand,
+    pieceMaxMm: sheetPieceRoomMm(size, request.units),
+  });
   const { threads, substitutes } = patterns;
   await step('patterns');
-  const size = sheetSize(request.sheetSizeId);
   const { pieces, sheets } = sheetPackKit(patterns.pieces, {
     sheetSize: size,
     units: request.units,

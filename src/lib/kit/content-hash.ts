@@ -4,8 +4,13 @@
  */
 import { ENGINE_VERSION } from './engine-version';
 
-/** JSON with object keys in sorted order, so equal values give equal text; undefined members are left out. */
+/**
+ * JSON with object keys in sorted order, so equal values give equal text; undefined members are left out. A typed
+ * array is written as its kind and length only: the one object that holds them (an imported mesh, MeshShape)
+ * carries the SHA-256 of its stored bytes beside them, so equal text still means equal content.
+ */
 export function contentHashCanonicalJson(value: unknown): string {
+  if (ArrayBuffer.isView(value)) return JSON.stringify(`${value.constructor.name}:${value.byteLength}`);
   if (Array.isArray(value))
     return `[${value.map((v) => (v === undefined ? 'null' : contentHashCanonicalJson(v))).join(',')}]`;
   if (value && typeof value === 'object') {

@@ -22,8 +22,8 @@ export interface KitOutputBuild {
 
 function guardedEngine(request: KitRequest): KitEngine {
   return {
-    patterns: (model, n, gsm, band) => {
-      const result = GEOMETRY_KIT_ENGINE.patterns(model, n, gsm, band);
+    patterns: (model, options) => {
+      const result = GEOMETRY_KIT_ENGINE.patterns(model, options);
       kitScaleGuard(request, result.pieces);
       return result;
     },

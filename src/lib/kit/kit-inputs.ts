@@ -52,18 +52,21 @@ const DemoModelIdSchema = z
   .string()
   .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'modelId must be a demo model id like "skein-probe"');
 
-/** A demo model by id, or a whole model in real metres: exactly one of the two. */
+/** A demo model by id, an imported model by id, or a whole model in real metres: exactly one of the three. */
 export const ModelSourceSchema = z.object({
   modelId: DemoModelIdSchema.optional(),
+  importId: z.string().uuid('importId must be the id of an imported model').optional(),
   model: ModelSchema.optional(),
 });
+export type ModelSource = z.infer<typeof ModelSourceSchema>;
 
-function oneModel(value: { modelId?: string; model?: unknown }, ctx: z.RefinementCtx): void {
-  if ((value.modelId === undefined) === (value.model === undefined)) {
+function oneModel(value: ModelSource, ctx: z.RefinementCtx): void {
+  const sent = [value.modelId, value.importId, value.model].filter((v) => v !== undefined).length;
+  if (sent !== 1) {
     ctx.addIssue({
       code: 'custom',
       path: ['modelId'],
-      message: 'send either modelId (a demo model) or model, not both or neither',
+      message: 'send exactly one of modelId (a demo model), importId (an imported model) or model',
     });
   }
 }
@@ -100,7 +103,7 @@ export function kitVenue(choice: KitInputs['venue']): Venue {
  * the kit has no title of its own) and the URL the QR code points at (null: no page yet).
  */
 export function kitRequestOf(
-  inputs: Omit<KitInputs, 'modelId' | 'model' | 'venue' | 'instructionsAt'> &
+  inputs: Omit<KitInputs, 'modelId' | 'importId' | 'model' | 'venue' | 'instructionsAt'> &
     Partial<Pick<KitInputs, 'instructionsAt'>>,
   resolved: { model: Model; title: string },
   qrUrl: string | null,

@@ -4,7 +4,7 @@
  */
 import { activityPaperForSheet } from '../activities/activity-links';
 import { modelPatterns } from '../geometry/model-patterns';
-import { sheetPackKit } from '../layout/sheet-packer';
+import { sheetPackKit, sheetPieceRoomMm } from '../layout/sheet-packer';
 import { sheetSize } from '../layout/sheet-sizes';
 import { boomScale } from '../preview/boom-scale';
 import { assemblyRods, assemblySteps } from '../preview/assembly-steps';
@@ -15,14 +15,15 @@ import { kitMaterials } from './kit-materials';
 import { kitRequestForRow, kitView } from './saved-kit.server';
 
 /** The kit page's data for a kit row the actor may see. */
-export function kitPageData(row: KitRow) {
+export async function kitPageData(row: KitRow) {
   const view = kitView(row);
-  const request = kitRequestForRow(row);
+  const request = await kitRequestForRow(row);
   const venue = kitVenue(row.inputs.venue);
   const patterns = modelPatterns(request.model, {
     scaleDenominator: request.scaleDenominator,
     paperGsm: request.paperGsm,
     gradeBand: request.gradeBand,
+    pieceMaxMm: sheetPieceRoomMm(sheetSize(request.sheetSizeId), request.units),
   });
   const { threads, substitutes } = patterns;
   // The pieces as printed: cut at folds where the sheet is too small, so the steps match the PDF's.

@@ -4,6 +4,7 @@
  */
 import { modelPatterns } from '../geometry/model-patterns';
 import { sheetSize } from '../layout/sheet-sizes';
+import { sheetPieceRoomMm } from '../layout/sheet-packer';
 import { solveKitScale, solvePaperScale, type KitScale, type PaperScale } from '../layout/scale-solver';
 import type { z } from 'zod';
 import { contentHash } from './content-hash';
@@ -102,6 +103,7 @@ export function kitPatterns(input: KitPatternsInput) {
     scaleDenominator: input.scaleDenominator,
     paperGsm: input.paperGsm,
     gradeBand: input.gradeBand,
+    pieceMaxMm: sheetPieceRoomMm(sheetSize(input.sheetSizeId), 'metric'),
   });
   kitScaleGuard(kitRequestOf({ ...input, copies: 1, units: 'metric' }, resolved, null), result.pieces);
   return result;

@@ -11,7 +11,8 @@ import { liveLinkCodeForKit } from '../db/live-links';
 import { ConflictError, NotFoundError } from '../errors';
 import { linkAddress } from '../links/link-code';
 import { contentHash } from './content-hash';
-import { demoModelById, demoModelResolve } from './demo-models.server';
+import { demoModelById } from './demo-models.server';
+import { modelResolve } from '../models/model-source.server';
 import { ENGINE_VERSION } from './engine-version';
 import { kitRequestOf, type KitInputs } from './kit-inputs';
 import type { KitRequest } from './kit-request';
@@ -60,13 +61,13 @@ export function kitView(row: KitRow): KitView {
   };
 }
 
-/** The engine request a saved kit's files are rebuilt from (409 when its demo model left the library). */
-export function kitRequestForRow(row: KitRow): KitRequest {
-  const { modelId, model, qrUrl, venue: _v, ...settings } = row.inputs;
-  if (!model && !demoModelById(modelId ?? '')) {
+/** The engine request a saved kit's files are rebuilt from (409 when its demo or imported model is gone). */
+export async function kitRequestForRow(row: KitRow): Promise<KitRequest> {
+  const { modelId, importId, model, qrUrl, venue: _v, ...settings } = row.inputs;
+  if (!model && !importId && !demoModelById(modelId ?? '')) {
     throw new ConflictError(`The demo model "${modelId}" of this kit is no longer in the library; build a new kit.`);
   }
-  return kitRequestOf(settings, demoModelResolve({ modelId, model }), qrUrl);
+  return kitRequestOf(settings, await modelResolve(null, { modelId, importId, model }), qrUrl);
 }
 
 /** The kit if the actor may see it; NotFoundError otherwise. */
@@ -87,7 +88,7 @@ export async function kitOwnedOrThrow(actor: Actor, id: string): Promise<KitRow>
 export async function kitSave(actor: Actor, classId: string, inputs: KitInputs, siteUrl: string): Promise<string> {
   const owned = await classOwned(actor, classId);
   if (actor.kind !== 'user') throw new NotFoundError(NOT_FOUND);
-  const resolved = demoModelResolve(inputs);
+  const resolved = await modelResolve(actor, inputs);
   const id = randomUUID();
   await kitInsertWithLink(
     {
@@ -123,6 +124,6 @@ export async function kitDuplicate(actor: Actor, row: KitRow, siteUrl: string, c
 /** Renames an owned kit; the new title is printed on its sheets, so the content hash changes too. */
 export async function kitRenameOwned(row: KitRow, title: string): Promise<void> {
   const inputs: KitStoredInputs = { ...row.inputs, title };
-  const request = kitRequestForRow({ ...row, inputs });
+  const request = await kitRequestForRow({ ...row, inputs });
   await kitRename(row.id, title, inputs, await contentHash(request));
 }

@@ -23,7 +23,9 @@ import {
   type BuildGradeBand,
 } from '../geometry/buildability';
 import { sheetSize, type SheetSizeId } from './sheet-sizes';
-import { MAX_SHEETS, sheetPackKit } from './sheet-packer';
+import { MAX_SHEETS, sheetPackKit, sheetPieceRoomMm } from './sheet-packer';
+
+type PieceRoom = ReturnType<typeof sheetPieceRoomMm>;
 import { USUAL_SCALE_DENOMINATORS } from './scale-ratios';
 import { solveVenueScale, type Venue, type VenueScale } from './venues';
 import type { UnitSystem } from './units';
@@ -67,8 +69,9 @@ interface ScaleCheck {
 }
 
 /** Pieces' buildability at 1:N. */
-function scaleCheck(model: Model, n: number, gsm: number, band: BuildGradeBand): ScaleCheck {
-  const { pieces, substitutes } = modelPatterns(model, { scaleDenominator: n, paperGsm: gsm, gradeBand: band });
+function scaleCheck(model: Model, n: number, gsm: number, band: BuildGradeBand, pieceMaxMm: PieceRoom): ScaleCheck {
+  const options = { scaleDenominator: n, paperGsm: gsm, gradeBand: band, pieceMaxMm };
+  const { pieces, substitutes } = modelPatterns(model, options);
   return {
     pieces,
     substitutes,
@@ -81,9 +84,10 @@ function scaleCheck(model: Model, n: number, gsm: number, band: BuildGradeBand):
 export function solvePaperScale(model: Model, req: PaperScaleRequest): PaperScale {
   const band = req.gradeBand ?? BUILD_GRADE_BAND_DEFAULT;
   const size = sheetSize(req.sheetId);
+  const room = sheetPieceRoomMm(size, req.units ?? 'metric');
   const checks = new Map<number, ScaleCheck>();
   const check = (n: number): ScaleCheck =>
-    checks.get(n) ?? checks.set(n, scaleCheck(model, n, req.paperGsm, band)).get(n)!;
+    checks.get(n) ?? checks.set(n, scaleCheck(model, n, req.paperGsm, band, room)).get(n)!;
   // One kit at 1:N laid out as the pipeline does (pieces cut at folds to fit); null past MAX_SHEETS.
   const kits = new Map<number, { sheets: number; tiled: string[] } | null>();
   const kit = (n: number) => {

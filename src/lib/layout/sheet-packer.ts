@@ -298,6 +298,16 @@ function sheetPackSplit(pieces: readonly Piece[], free: readonly RectMm[], paper
   return pieces.flatMap((piece) => pieceSplit(piece, fits, paperGsm, () => ++number));
 }
 
+/** The largest piece a sheet after the first takes whole (its largest free rectangle), mm: what a mesh unfolds to fit. */
+export function sheetPieceRoomMm(
+  sheetSize: SheetSize,
+  units: KitLayout['units'],
+): { widthMm: number; heightMm: number } {
+  const { freeOther } = sheetPackSpace(0, { sheetSize, units, copies: 1 });
+  const best = freeOther.reduce((a, r) => (r.widthMm * r.heightMm > a.widthMm * a.heightMm ? r : a));
+  return { widthMm: best.widthMm, heightMm: best.heightMm };
+}
+
 /** The printable area and the free rectangles of the first sheet and of every other, around the furniture. */
 function sheetPackSpace(pieceCount: number, options: SheetPackOptions) {
   const printable = sheetFurniturePrintable(options.sheetSize, options.marginMm ?? SHEET_MARGIN_MM);

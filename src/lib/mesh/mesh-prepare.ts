@@ -27,6 +27,29 @@ export function meshPrepare(bytes: Uint8Array, fileName: string, angleDeg = MESH
   return { check, faces: meshFaces(check.mesh, angleDeg), extents, unitGuess: meshUnitGuess(Math.max(...extents)) };
 }
 
+/** What an upload's check found, as the import route keeps it: the repaired mesh and plain facts (no faces). */
+export interface MeshImported {
+  mesh: MeshPrepared['check']['mesh'];
+  findings: MeshPrepared['check']['findings'];
+  repairs: string[];
+  faceCount: number;
+  extents: [number, number, number];
+  unitGuess: MeshUnit;
+}
+
+/** Parses and checks an uploaded file for the import route (CPU work: the pool runs it). */
+export function meshImport(bytes: Uint8Array, fileName: string): MeshImported {
+  const { check, faces, extents, unitGuess } = meshPrepare(bytes, fileName);
+  return {
+    mesh: check.mesh,
+    findings: check.findings,
+    repairs: check.repairs,
+    faceCount: faces.length,
+    extents,
+    unitGuess,
+  };
+}
+
 export interface MeshKitSettings {
   unit: MeshUnit;
   scaleDenominator: number;

@@ -13,6 +13,10 @@ import type { Venue } from '../layout/venues';
 import type { SheetSizeId } from '../layout/sheet-sizes';
 import { scaleExplain } from '../tools/scale-explain';
 import { analysisRun, type AnalysisCall } from '../analysis/analysis-run';
+import { meshImport } from '../mesh/mesh-prepare';
+import type { MeshShape, ParsedMesh } from '../mesh/mesh-types';
+import { meshSimplify } from '../mesh/mesh-simplify';
+import { meshKitSummary, type MeshKitSummarySettings } from '../kit/mesh-kit-summary';
 import {
   kitPatterns,
   kitScaleSolveCompute,
@@ -31,7 +35,10 @@ export type WorkTask =
       req: { sheetId: SheetSizeId; paperGsm: number };
       venue: Venue;
       units: UnitSystem;
-    };
+    }
+  | { kind: 'mesh-import'; bytes: Uint8Array; fileName: string }
+  | { kind: 'mesh-kit-summary'; shape: MeshShape; settings: MeshKitSummarySettings }
+  | { kind: 'mesh-reduce'; mesh: ParsedMesh; targetTriangles: number };
 
 /** Runs one task, reporting stages as they end; stops between stages when the signal fires. */
 export function workTaskRun(task: WorkTask, onStage: StageReport, signal: AbortSignal): Promise<unknown> {
@@ -44,6 +51,12 @@ export function workTaskRun(task: WorkTask, onStage: StageReport, signal: AbortS
       return Promise.resolve(kitPatterns(task.input));
     case 'kit-scale-solve':
       return Promise.resolve(kitScaleSolveCompute(task.input));
+    case 'mesh-import':
+      return Promise.resolve(meshImport(task.bytes, task.fileName));
+    case 'mesh-kit-summary':
+      return Promise.resolve(meshKitSummary(task.shape, task.settings));
+    case 'mesh-reduce':
+      return meshSimplify(task.mesh, task.targetTriangles);
     case 'scale-explain':
       return Promise.resolve(scaleExplain(task.model, task.req, task.venue, task.units));
   }

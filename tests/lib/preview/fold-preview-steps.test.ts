@@ -45,8 +45,8 @@ const row: KitRow = {
 
 describe('the 3D preview of a saved kit', () => {
   test('walks the same steps as the PDF instructions of the Skein at 1:20, rod steps last', async () => {
-    const { preview } = kitPageData(row);
-    const { layout } = await buildKit(kitRequestForRow(row), fixtureFonts(), { outputs: ['pdf'] });
+    const { preview } = await kitPageData(row);
+    const { layout } = await buildKit(await kitRequestForRow(row), fixtureFonts(), { outputs: ['pdf'] });
     const printed = instructionsSteps(layout);
     const shown = assemblySteps(preview.pieces, preview.rods);
     // The Skein's thin booms become skewers at 1:20 (part-substitutes.ts), so there are rod steps to walk.

@@ -15,7 +15,7 @@ import { KIT_VIEWERS } from './_access';
 export function kitDownloadRoute(output: KitOutput) {
   return endpoint({ access: KIT_VIEWERS }, async (context: APIContext) => {
     const row = await kitVisible(context.locals.actor, context.params.id ?? '');
-    const request = { ...kitRequestForRow(row), qrUrl: await kitQrUrl(row, siteUrl(context.url)) };
+    const request = { ...(await kitRequestForRow(row)), qrUrl: await kitQrUrl(row, siteUrl(context.url)) };
     const { build } = await kitOutputBuild(request, output, { signal: context.request.signal });
     const q = context.url.searchParams;
     return kitFileResponse(context.request, request, build, output, {

@@ -8,6 +8,7 @@ import { progressWanted, type StreamedFile } from '../../../lib/http/progress-li
 import { progressResponse } from '../../../lib/http/progress-stream';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { modelSourceInline } from '../../../lib/models/model-source.server';
 
 const PreviewFileSchema = z.object({
   inputs: KitInputsSchema,
@@ -21,11 +22,9 @@ const PreviewFileSchema = z.object({
  * With `Accept: application/x-ndjson` the build streams its stages and the file comes base64 in the last line.
  */
 export const POST = endpoint({ access: ANY_ACCOUNT }, async (context) => {
-  const { inputs, output, sheet } = parseInput(
-    PreviewFileSchema,
-    await readJson(context.request, KIT_REQUEST_BYTES_MAX),
-    'download',
-  );
+  const parsed = parseInput(PreviewFileSchema, await readJson(context.request, KIT_REQUEST_BYTES_MAX), 'download');
+  const { output, sheet } = parsed;
+  const inputs = await modelSourceInline(context.locals.actor, parsed.inputs);
   const sheetParam = { sheet: sheet === undefined ? null : String(sheet) };
   if (!progressWanted(context.request)) {
     const { request, build } = await kitPreviewFile(inputs, output);

@@ -3,6 +3,7 @@ import { kitScaleSolve } from '../../../lib/kit/kit-preview.server';
 import { endpoint } from '../../../lib/http/endpoint';
 import { readJson } from '../../../lib/http/respond';
 import { parseInput } from '../../../lib/validation';
+import { modelSourceInline } from '../../../lib/models/model-source.server';
 import { KIT_VIEWERS } from '../kits/_access';
 
 /** The solver's scale for paper and venue together, with plain-words explanations and the nearest alternatives. */
@@ -12,5 +13,5 @@ export const POST = endpoint({ access: KIT_VIEWERS }, async (context) => {
     await readJson(context.request, KIT_REQUEST_BYTES_MAX),
     'scale request',
   );
-  return kitScaleSolve(input);
+  return kitScaleSolve(await modelSourceInline(context.locals.actor, input));
 });
