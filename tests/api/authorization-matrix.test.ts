@@ -234,6 +234,35 @@ const ROWS: Row[] = [
   { route: '/api/models', method: 'GET', expect: all(200) },
   { route: '/api/models/patterns', method: 'POST', body: {}, expect: { ...all(400), anonymous: 401 } },
   { route: '/api/scale/solve', method: 'POST', body: {}, expect: { ...all(400), anonymous: 401 } },
+  // Imported models: class sessions see the shared ones; accounts import and change their own (staff: any)
+  { route: '/api/models/imports', method: 'GET', expect: { ...all(200), anonymous: 401 } },
+  { route: '/api/models/imports', method: 'POST', body: {}, expect: accounts(400, 400, 400, 400) },
+  {
+    route: '/api/models/imports/[id]',
+    method: 'GET',
+    path: `/api/models/imports/${MISSING}`,
+    expect: { ...all(404), anonymous: 401 },
+  },
+  {
+    route: '/api/models/imports/[id]',
+    method: 'PATCH',
+    path: `/api/models/imports/${MISSING}`,
+    body: {},
+    expect: accounts(400, 400, 400, 400),
+  },
+  {
+    route: '/api/models/imports/[id]',
+    method: 'DELETE',
+    path: `/api/models/imports/${MISSING}`,
+    expect: accounts(404, 404, 404, 404),
+  },
+  {
+    route: '/api/models/imports/[id]/summary',
+    method: 'POST',
+    path: `/api/models/imports/${MISSING}/summary`,
+    body: {},
+    expect: { ...all(400), anonymous: 401 },
+  },
   // Kits. Rows with [id] use a kit id that does not exist: admitted visitors get 404, the rest 401/403.
   // (Ownership with real kits is tested beside the kit routes.)
   { route: '/api/kits', method: 'GET', expect: { ...all(200), anonymous: 401 } },
