@@ -21,9 +21,9 @@ export default function KitBuilder(props: KitBuilderProps) {
     });
     if (props.initialPreview) c.setQueryData(kitPreviewQueryOptions(props.initial).queryKey, props.initialPreview);
     if (props.initialSolve) {
-      const { modelId, sheetSizeId, paperGsm, units, venue, gradeBand } = props.initial;
+      const { modelId, importId, sheetSizeId, paperGsm, units, venue, gradeBand } = props.initial;
       c.setQueryData(
-        scaleSolveQueryOptions({ modelId, sheetSizeId, paperGsm, units, venue, gradeBand }).queryKey,
+        scaleSolveQueryOptions({ modelId, importId, sheetSizeId, paperGsm, units, venue, gradeBand }).queryKey,
         props.initialSolve,
       );
     }

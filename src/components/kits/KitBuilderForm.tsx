@@ -15,6 +15,7 @@ import ScaleAdvice from './ScaleAdvice';
 import SheetPreviews from './SheetPreviews';
 import { useBuildStages } from './useBuildStages';
 import { useSettledSettings } from './useSettledSettings';
+import { builderModelOf, modelFieldsOf } from './builder-models';
 
 /** Stands in for the saved kit while there is none (its sheets query is disabled then). */
 const PENDING_KIT = { id: '', contentHash: '', links: { svgSheets: [] as string[] } } as const;
@@ -41,6 +42,7 @@ export default function KitBuilderForm(props: KitBuilderProps) {
   const building = preview.isFetching;
   const solveParams = {
     modelId: settled.modelId,
+    importId: settled.importId,
     sheetSizeId: settled.sheetSizeId,
     paperGsm: settled.paperGsm,
     units: settled.units,
@@ -65,7 +67,14 @@ export default function KitBuilderForm(props: KitBuilderProps) {
     const band = classes.find((c) => c.id === id)?.gradeBand;
     if (band && limits.gradeBands.includes(band)) change('gradeBand', band);
   };
-  const model = props.models.find((m) => m.id === values.modelId);
+  // Both model fields change together (one is cleared), so the form is never read with two models or none.
+  const chooseModel = (choice: string) => {
+    const fields = modelFieldsOf(choice);
+    nextChangeNow(true);
+    setValue('modelId', fields.modelId, { shouldDirty: true });
+    setValue('importId', fields.importId, { shouldValidate: true, shouldDirty: true });
+  };
+  const model = builderModelOf(props, values);
   const sheets = saved && savedSheets.data ? savedSheets.data : (data?.sheets ?? []);
 
   return (
@@ -83,6 +92,7 @@ export default function KitBuilderForm(props: KitBuilderProps) {
           issues={parsed.success ? [] : parsed.error.issues}
           register={register}
           change={change}
+          chooseModel={chooseModel}
           settleNow={settleNow}
           suggestedScale={solve.data?.suggestedScaleDenominator ?? null}
           gradeBandFrom={gradeClass && values.gradeBand === gradeClass.gradeBand ? gradeClass.name : null}

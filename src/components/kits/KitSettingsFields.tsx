@@ -6,11 +6,12 @@ import type { KitBuilderProps } from '../../lib/kit/kit-builder-props';
 import PrintTargetFields from './PrintTargetFields';
 import RegisteredNumberField from './RegisteredNumberField';
 import ScaleField from './ScaleField';
+import { builderModelOf, IMPORT_PREFIX, modelOptions } from './builder-models';
 import VenueFields from './VenueFields';
 
 type StaticProps = Pick<
   KitBuilderProps,
-  'models' | 'activities' | 'sheetSizes' | 'venues' | 'printBeds' | 'usualScales' | 'limits' | 'initial'
+  'models' | 'imports' | 'activities' | 'sheetSizes' | 'venues' | 'printBeds' | 'usualScales' | 'limits' | 'initial'
 >;
 
 interface Props extends StaticProps {
@@ -22,6 +23,8 @@ interface Props extends StaticProps {
   register: UseFormRegister<KitForm>;
   /** Sets a setting; `now` false while typing, so the preview waits for a pause. */
   change: <K extends keyof KitForm>(name: K, value: KitForm[K], now?: boolean) => void;
+  /** Chooses the model: a demo model's id, or an imported model's as IMPORT_PREFIX + id. */
+  chooseModel: (choice: string) => void;
   /** Builds the current settings now (Enter in the scale field). */
   settleNow: () => void;
   /** The solver's suggested scale, or null while it works. */
@@ -33,7 +36,7 @@ interface Props extends StaticProps {
 /** The kit builder's settings: activity, model, scale, paper, grade band, venue, print target, copies, title. */
 export default function KitSettingsFields(props: Props) {
   const { values, errors: err, register, change, limits, initial } = props;
-  const model = props.models.find((m) => m.id === values.modelId);
+  const model = builderModelOf(props, values);
   const activityList = props.activities.filter(
     (a) => !values.modelId || a.models.includes(values.modelId) || a.slug === values.activitySlug,
   );
@@ -50,10 +53,10 @@ export default function KitSettingsFields(props: Props) {
       <SelectField
         label="Model"
         name="modelId"
-        value={values.modelId}
-        options={props.models.map((m) => ({ value: m.id, label: m.title }))}
+        value={values.importId ? `${IMPORT_PREFIX}${values.importId}` : (values.modelId ?? '')}
+        {...modelOptions(props)}
         hint={model?.summary}
-        onChange={(id) => change('modelId', id)}
+        onChange={props.chooseModel}
       />
       <ScaleField
         value={values.scaleDenominator}

@@ -12,7 +12,10 @@ import type { KitView } from '../../lib/kit/kit-view';
 export type { KitPreview, ScaleSolution, KitView };
 
 /** What the solver needs: everything of the form but the scale, title, copies and activity. */
-export type ScaleSolveParams = Pick<KitForm, 'modelId' | 'sheetSizeId' | 'paperGsm' | 'units' | 'venue' | 'gradeBand'>;
+export type ScaleSolveParams = Pick<
+  KitForm,
+  'modelId' | 'importId' | 'sheetSizeId' | 'paperGsm' | 'units' | 'venue' | 'gradeBand'
+>;
 
 /** Hears a build's progress: `begin` as a request starts, `stage` as the server finishes each stage. */
 export interface BuildListener {

@@ -6,13 +6,15 @@ interface Props {
   name: string;
   value: string;
   options: { value: string; label: string }[];
+  /** More options after `options`, each list under its own heading (an optgroup). */
+  groups?: { label: string; options: { value: string; label: string }[] }[];
   onChange: (value: string) => void;
   hint?: string;
   error?: string | undefined;
 }
 
 /** One select; `name` is the request field it fills, so API errors for it land here. */
-export default function SelectField({ label, name, value, options, onChange, hint, error }: Props) {
+export default function SelectField({ label, name, value, options, groups = [], onChange, hint, error }: Props) {
   return (
     <FieldShell label={label} hint={hint} error={error}>
       {({ id, describedBy }) => (
@@ -30,6 +32,17 @@ export default function SelectField({ label, name, value, options, onChange, hin
               {o.label}
             </option>
           ))}
+          {groups
+            .filter((g) => g.options.length > 0)
+            .map((g) => (
+              <optgroup key={g.label} label={g.label}>
+                {g.options.map((o) => (
+                  <option key={o.value} value={o.value}>
+                    {o.label}
+                  </option>
+                ))}
+              </optgroup>
+            ))}
         </select>
       )}
     </FieldShell>

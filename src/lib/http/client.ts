@@ -65,12 +65,17 @@ async function send(path: string, init: ApiInit): Promise<Response> {
     throw new ApiError(0, 'network', NETWORK_MESSAGE);
   }
   if (res.ok) return res;
-  const error = ((await res.json().catch(() => null)) as Partial<ErrorBody> | null)?.error;
-  const retry = Number(res.headers.get('retry-after'));
-  throw new ApiError(
-    res.status,
+  throw apiErrorOf(res.status, await res.json().catch(() => null), res.headers.get('retry-after'));
+}
+
+/** The ApiError of an error answer: its status, parsed body (null when not JSON) and Retry-After header. */
+function apiErrorOf(status: number, body: unknown, retryAfter: string | null): ApiError {
+  const error = (body as Partial<ErrorBody> | null)?.error;
+  const retry = Number(retryAfter);
+  return new ApiError(
+    status,
     error?.code ?? 'unknown',
-    error?.message ?? `The server answered ${res.status}.`,
+    error?.message ?? `The server answered ${status}.`,
     error?.fields ?? {},
     Number.isFinite(retry) && retry > 0 ? retry : undefined,
   );
@@ -131,4 +136,38 @@ export async function apiFileProgress(
   const file = await apiProgress<StreamedFile>(path, init);
   const bytes = Uint8Array.from(atob(file.base64), (c) => c.charCodeAt(0));
   return { blob: new Blob([bytes], { type: file.type }), fileName: file.name };
+}
+
+/**
+ * Posts a multipart form with XMLHttpRequest, which (unlike fetch) reports how much of the body is sent:
+ * `onProgress` hears the share sent, 0 to 1. Same-site with cookies like `api`; resolves with the parsed
+ * answer, throws ApiError for an error answer or a failed network, and aborts with the signal.
+ */
+export function apiUpload<T>(
+  path: string,
+  init: { form: FormData; onProgress?: (sentShare: number) => void; signal?: AbortSignal },
+): Promise<T> {
+  return new Promise<T>((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', path);
+    xhr.withCredentials = true;
+    xhr.responseType = 'text';
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable && e.total > 0) init.onProgress?.(e.loaded / e.total);
+    };
+    xhr.onload = () => {
+      let body: unknown = null;
+      try {
+        body = JSON.parse(xhr.responseText);
+      } catch {
+        // Not JSON (a proxy's page): the status alone says what happened.
+      }
+      if (xhr.status >= 200 && xhr.status < 300) resolve(body as T);
+      else reject(apiErrorOf(xhr.status, body, xhr.getResponseHeader('retry-after')));
+    };
+    xhr.onerror = () => reject(new ApiError(0, 'network', NETWORK_MESSAGE));
+    xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
+    init.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+    xhr.send(init.form);
+  });
 }

@@ -16,8 +16,25 @@ import { KIT_SETTINGS_LIMITS, type KitInputs } from './kit-inputs';
 import { kitPreview, kitScaleSolve } from './kit-preview.server';
 import { INSTRUCTIONS_PLACE_DEFAULT, type KitForm } from './kit-settings';
 import type { KitBuilderProps } from './kit-builder-props';
+import { importedModelList } from '../models/imported-models.server';
+import { modelSourceInline } from '../models/model-source.server';
+import type { ImportedModelView } from '../models/imported-model-inputs';
+import { meshSizeLabel } from '../ui/mesh-size-label';
 
-/** Props for the KitBuilder island from the query (?model=&activity=) and the actor's classes. */
+/** An imported model as the builder's model list shows it: faces, real size and, when shared, who shared it. */
+function importChoice(m: ImportedModelView): KitBuilderProps['imports'][number] {
+  const shared = m.shared && !m.canChange && m.ownerName ? ` · shared by ${m.ownerName}` : '';
+  return {
+    id: m.id,
+    title: m.title,
+    summary: `Imported from ${m.fileName}: ${m.faceCount.toLocaleString('en-US')} faces, ${meshSizeLabel(m.sizeByUnitM[m.unit])}${shared}.`,
+  };
+}
+
+/**
+ * Props for the KitBuilder island from the query (?model= a demo model or ?import= an imported one, &activity=)
+ * and the actor's classes and imported models.
+ */
 export async function kitBuilderProps(
   actor: Actor,
   query: URLSearchParams,
@@ -25,6 +42,8 @@ export async function kitBuilderProps(
 ): Promise<KitBuilderProps> {
   const models = demoModels();
   const model = demoModelById(query.get('model') ?? '') ?? demoModelById('skein-probe') ?? models[0]!;
+  const imports = actor.kind === 'user' ? await importedModelList(actor) : [];
+  const chosenImport = imports.find((m) => m.id === query.get('import'));
   const activity = activities.find((a) => a.slug === query.get('activity'));
   const sheetSizeId = query.get('sheet') === 'a4' ? 'a4' : 'letter';
   const classes =
@@ -34,7 +53,7 @@ export async function kitBuilderProps(
   // The grade band starts from the class the kit is for (?class=, else the teacher's first class).
   const gradeClass = classes.find((c) => c.id === query.get('class')) ?? classes[0];
   const base = {
-    modelId: model.id,
+    ...(chosenImport ? { importId: chosenImport.id } : { modelId: model.id }),
     sheetSizeId,
     paperGsm: PAPER_GSM_DEFAULT,
     units: 'metric',
@@ -42,11 +61,14 @@ export async function kitBuilderProps(
     gradeBand: gradeClass?.gradeBand ?? BUILD_GRADE_BAND_DEFAULT,
   } as const;
   let initialError: string | null = null;
-  const solve = await kitScaleSolve({ ...base, ratios: 'usual' }).catch((err: unknown) => {
-    if (!(err instanceof AppError)) throw err;
-    initialError = err.message;
-    return null;
-  });
+  // The engine's calls take an imported model inline, as the API routes hand it over (modelSourceInline).
+  const solve = await kitScaleSolve(await modelSourceInline(actor, { ...base, ratios: 'usual' as const })).catch(
+    (err: unknown) => {
+      if (!(err instanceof AppError)) throw err;
+      initialError = err.message;
+      return null;
+    },
+  );
   const initial = {
     ...base,
     venue: { ...base.venue },
@@ -56,13 +78,14 @@ export async function kitBuilderProps(
     instructionsAt: INSTRUCTIONS_PLACE_DEFAULT,
     ...(activity ? { activitySlug: activity.slug } : {}),
   } satisfies KitForm & KitInputs;
-  const preview = await kitPreview(initial).catch((err: unknown) => {
+  const preview = await kitPreview(await modelSourceInline(actor, initial)).catch((err: unknown) => {
     if (!(err instanceof AppError)) throw err;
     initialError = err.message;
     return null;
   });
   return {
     models: models.map(({ id, title, summary }) => ({ id, title, summary })),
+    imports: imports.map(importChoice),
     activities,
     classes,
     sheetSizes: Object.values(SHEET_SIZES).map(({ id, label }) => ({ id, label })),

@@ -4,6 +4,8 @@ import type { KitPreview, ScaleSolution } from './kit-preview.server';
 /** Plain data the /kits/new page reads on the server and hands to the KitBuilder island. */
 export interface KitBuilderProps {
   models: { id: string; title: string; summary: string }[];
+  /** The imported models the account may build (its own and shared ones), listed after the demo models. */
+  imports: { id: string; title: string; summary: string }[];
   activities: { slug: string; title: string; models: string[] }[];
   /** The teacher's own classes (empty for staff, who cannot save). */
   classes: { id: string; name: string; gradeBand: string }[];

@@ -122,13 +122,21 @@ export function kitSettingsSchema<S extends string, V extends string, G extends 
   });
 }
 
-/** The builder form: the settings plus the demo model's id. */
+/** The builder form: the settings plus its model, a demo model's id or an imported model's (exactly one). */
 export function kitFormSchema<S extends string, V extends string, G extends string>(
   limits: KitSettingsLimits<S, V, G>,
 ) {
-  return kitSettingsSchema(limits).extend({
-    modelId: z.string().regex(SLUG, 'choose a model'),
-  });
+  return kitSettingsSchema(limits)
+    .extend({
+      /** A demo model, by its id. */
+      modelId: z.string().regex(SLUG, 'choose a model').optional(),
+      /** An imported model, by its id. */
+      importId: z.string().uuid('choose a model').optional(),
+    })
+    .refine((form) => (form.modelId === undefined) !== (form.importId === undefined), {
+      message: 'choose a model',
+      path: ['modelId'],
+    });
 }
 export type KitForm = z.infer<ReturnType<typeof kitFormSchema<string, string, string>>>;
 export type KitVenueChoice = KitForm['venue'];

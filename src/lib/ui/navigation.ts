@@ -21,6 +21,10 @@ const EVENTS: NavItem = { href: '/events', label: 'Events' };
 const MANAGE_EVENTS: NavItem = { href: '/events/manage', label: 'Events' };
 const LIVE_LINKS: NavItem = { href: '/links', label: 'Live links' };
 
+/** Imported meshes: a teacher's own (and the shared ones), for staff every one. */
+const MODELS_OWN: NavItem = { href: '/models/imports', label: 'My models' };
+const MODELS_ALL: NavItem = { href: '/models/imports', label: 'Models' };
+
 const JOURNAL: NavItem = { href: '/entries', label: 'Class journal' };
 const REVIEW: NavItem = { href: '/review', label: 'Review queue' };
 
@@ -31,6 +35,7 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
     { href: '/classes', label: 'My classes' },
     { href: '/kits/new', label: 'Kit builder' },
     { href: '/kits', label: 'My kits' },
+    MODELS_OWN,
     JOURNAL,
     ACTIVITIES,
     TOOLS,
@@ -42,6 +47,7 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
     MANAGE_EVENTS,
     LIVE_LINKS,
     { href: '/kits', label: 'Kits' },
+    MODELS_ALL,
     { href: '/classes', label: 'Classes' },
     ACTIVITIES,
     TOOLS,
@@ -53,6 +59,7 @@ const BY_ROLE: Record<'teacher' | 'coordinator' | 'admin', NavItem[]> = {
     MANAGE_EVENTS,
     LIVE_LINKS,
     { href: '/kits', label: 'Kits' },
+    MODELS_ALL,
     { href: '/classes', label: 'Classes' },
     ACTIVITIES,
   ],

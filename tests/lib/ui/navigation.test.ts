@@ -48,6 +48,16 @@ describe('navigationFor', () => {
     expect(navigationFor(user('admin'), { outbox: true }).some((i) => i.href === '/admin/outbox')).toBe(true);
   });
 
+  it('takes every account to its imported models, and no class session or visitor', () => {
+    for (const role of ['teacher', 'coordinator', 'admin'] as const) {
+      expect(navigationFor(user(role)).map((i) => i.href)).toContain('/models/imports');
+    }
+    expect(navigationFor({ kind: 'class', classId: 'c', classSessionId: 's' }).map((i) => i.href)).not.toContain(
+      '/models/imports',
+    );
+    expect(navigationFor({ kind: 'anonymous' }).map((i) => i.href)).not.toContain('/models/imports');
+  });
+
   it('gives anonymous visitors only public pages', () => {
     expect(navigationFor({ kind: 'anonymous' }).map((i) => i.href)).toEqual(['/activities', '/tools', '/events']);
   });
