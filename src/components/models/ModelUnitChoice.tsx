@@ -21,7 +21,7 @@ export default function ModelUnitChoice({ model, onChanged }: Props) {
   const name = `unit-${model.id}`;
   const save = async () => {
     setSaved(null);
-    if (await change({ unit })) setSaved(`Saved: the file's numbers are ${MESH_UNIT_WORDS[unit]}.`);
+    if (await change({ unit })) setSaved(`Saved: the file’s numbers are ${MESH_UNIT_WORDS[unit]}.`);
   };
   return (
     <section className="card" aria-labelledby="unit-h">
