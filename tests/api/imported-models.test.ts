@@ -37,7 +37,7 @@ let classId: string;
 function upload(bytes: Uint8Array, fileName: string, as: string, field = 'file', title?: string): Promise<Response> {
   const form = new FormData();
   if (title !== undefined) form.append('title', title);
-  form.append(field, new Blob([bytes]), fileName);
+  form.append(field, new Blob([new Uint8Array(bytes)]), fileName);
   return api('/api/models/imports', { method: 'POST', body: form, headers: { origin: BASE_URL, cookie: as } });
 }
 

@@ -33,6 +33,8 @@ export interface KitRow {
   created_at: Date;
   updated_at: Date;
   class_name: string;
+  /** The title of the imported model the kit is built from (model_id "import:<id>"), else null. */
+  imported_model_title: string | null;
 }
 
 export interface KitInsert {
@@ -57,8 +59,9 @@ export interface KitSaveBuild {
 function kitSelect(trx: Knex) {
   return trx('kits')
     .join('classes', 'classes.id', 'kits.class_id')
+    .leftJoin('imported_models', trx.raw("kits.model_id = 'import:' || imported_models.id::text"))
     .whereNull('classes.archived_at')
-    .select('kits.*', 'classes.name as class_name');
+    .select('kits.*', 'classes.name as class_name', 'imported_models.title as imported_model_title');
 }
 
 /** Narrows a kit query to what the actor may see (nothing for anonymous visitors). */

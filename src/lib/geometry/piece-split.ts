@@ -26,6 +26,7 @@ interface SplitSource {
   /** Per face: the piece's tabs that fold on one of its edges (or share one, for an overlap strip). */
   tabsOf: NetTab[][];
   labelsOf: EdgeLabel[][];
+  find: NetFinder;
 }
 
 /**
@@ -73,7 +74,7 @@ function splitPart(
   const cuts = source.piece.hinge.joints.filter((j) => inside.has(j.parent) && inside.has(j.child));
   if (fits(built) || cuts.length === 0) return [part];
   let best: { sides: [SplitPart, SplitPart]; misfits: number; largestMm2: number } | null = null;
-  for (const joint of cuts) {
+  for (const joint of evenCuts(cuts, part.faces.length)) {
     const sides = splitAt(source, part, joint, gsm, placeholder());
     const pieces = sides.map((s) => splitPiece(source, s, { id: source.piece.id, label: source.piece.label }));
     const misfits = pieces.filter((p) => !fits(p)).length;
@@ -82,6 +83,39 @@ function splitPart(
       best = { sides, misfits, largestMm2 };
   }
   return best!.sides.flatMap((s) => splitPart(source, s, fits, gsm, placeholder));
+}
+
+/**
+ * Joints tried at one cut. Each try builds both sides, so trying every joint of a piece of F faces costs F² face
+ * builds: fine for the engine's own pieces (a few dozen faces), minutes for an imported mesh's (hundreds). A part
+ * with more joints is tried only at those whose sides come out most even, which is where the cut lands anyway
+ * on the long strips and wide nets such parts are (the search's own rule, below: fewest misfits, then the
+ * smallest larger side).
+ */
+export const SPLIT_CUTS_TRIED_MAX = 24;
+
+/** The joints to try, in their tree order: all of them, or the SPLIT_CUTS_TRIED_MAX most even. */
+function evenCuts(cuts: Piece['hinge']['joints'], faceCount: number): Piece['hinge']['joints'] {
+  if (cuts.length <= SPLIT_CUTS_TRIED_MAX) return cuts;
+  const children = new Map<number, number[]>();
+  for (const j of cuts) children.set(j.parent, [...(children.get(j.parent) ?? []), j.child]);
+  const size = new Map<number, number>();
+  const sizeOf = (face: number): number => {
+    // Iterative post-order: a long strip is as deep as it is long.
+    const stack: [number, boolean][] = [[face, false]];
+    while (stack.length > 0) {
+      const [f, done] = stack.pop()!;
+      if (size.has(f)) continue;
+      if (done) size.set(f, 1 + (children.get(f) ?? []).reduce((a, c) => a + size.get(c)!, 0));
+      else stack.push([f, true], ...(children.get(f) ?? []).map((c): [number, boolean] => [c, false]));
+    }
+    return size.get(face)!;
+  };
+  const unevenness = new Map(cuts.map((j) => [j, Math.abs(2 * sizeOf(j.child) - faceCount)]));
+  const kept = new Set(
+    [...cuts].sort((a, b) => unevenness.get(a)! - unevenness.get(b)!).slice(0, SPLIT_CUTS_TRIED_MAX),
+  );
+  return cuts.filter((j) => kept.has(j));
 }
 
 /** The two sides of `part` without `joint`: the parent's side keeps the part's root. */
@@ -98,8 +132,8 @@ function splitAt(
   const keep = (faces: number[]) => {
     const set = new Set(faces);
     return {
-      tabs: part.tabs.filter((t) => set.has(tabFace(source.net, t))),
-      labels: part.edgeLabels.filter((l) => set.has(labelFace(source.net, l.atMm))),
+      tabs: part.tabs.filter((t) => set.has(source.find.tabFace(t))),
+      labels: part.edgeLabels.filter((l) => set.has(source.find.labelFace(l.atMm))),
     };
   };
   const [p, c] = [keep(parentFaces), keep(childFaces)];
@@ -113,7 +147,7 @@ function splitAt(
   const { tab, label } = netGluePair(source.net, parentEdge, childEdge, number, paperTabDepthMm(gsm, edgeMm), (on) =>
     on.face === joint.parent ? obstaclesOf(parentFaces, p.tabs) : obstaclesOf(childFaces, c.tabs),
   );
-  const onParent = parentFaces.includes(tabFace(source.net, tab));
+  const onParent = parentFaces.includes(source.find.tabFace(tab));
   return [
     {
       faces: parentFaces,
@@ -150,27 +184,38 @@ function splitPiece(source: SplitSource, part: SplitPart, name: { id: string; la
 function splitSource(piece: Piece): SplitSource {
   const folded = new Map(hingeTreeFold(piece.hinge, 1).map((f) => [f.id, f.polygonMm]));
   const net: NetFace[] = piece.hinge.faces.map((f) => ({ flatMm: f.polygonMm, modelMm: folded.get(f.id)! }));
+  const find = netFinder(net);
   const tabsOf: NetTab[][] = net.map(() => []);
   for (const t of piece.tabs) {
     const fold = piece.folds.find((f) => f.tabNumber === t.number);
     const tab: NetTab = fold ? { ...t, fold: { fromMm: fold.fromMm, toMm: fold.toMm, angleRad: fold.angleRad } } : t;
-    tabsOf[tabFace(net, tab)]!.push(tab);
+    tabsOf[find.tabFace(tab)]!.push(tab);
   }
   const labelsOf: EdgeLabel[][] = net.map(() => []);
-  for (const l of piece.edgeLabels) labelsOf[labelFace(net, l.atMm)]!.push(l);
-  return { piece, net, tabsOf, labelsOf };
+  for (const l of piece.edgeLabels) labelsOf[find.labelFace(l.atMm)]!.push(l);
+  return { piece, net, tabsOf, labelsOf, find };
 }
 
 /** Face indexes from the root down the tree (parents before children), then any face the tree misses. */
 function wholeOrder(piece: Piece): number[] {
   const order = [piece.hinge.root, ...subtreeOrder(piece, piece.hinge.root).slice(1)];
-  const rest = piece.hinge.faces.map((_, i) => i).filter((i) => !order.includes(i));
+  const inOrder = new Set(order);
+  const rest = piece.hinge.faces.map((_, i) => i).filter((i) => !inOrder.has(i));
   return [...order, ...rest];
 }
 
+/** Each face's children in joint order, per hinge tree (built once: a mesh piece has hundreds of faces). */
+const childrenByTree = new WeakMap<Piece['hinge'], Map<number, number[]>>();
+
 function subtreeOrder(piece: Piece, top: number): number[] {
+  let children = childrenByTree.get(piece.hinge);
+  if (!children) {
+    children = new Map();
+    for (const j of piece.hinge.joints) children.set(j.parent, [...(children.get(j.parent) ?? []), j.child]);
+    childrenByTree.set(piece.hinge, children);
+  }
   const out = [top];
-  for (let k = 0; k < out.length; k++) for (const j of piece.hinge.joints) if (j.parent === out[k]) out.push(j.child);
+  for (let k = 0; k < out.length; k++) out.push(...(children.get(out[k]!) ?? []));
   return out;
 }
 
@@ -187,32 +232,50 @@ function faceEdge(net: NetFace[], face: number, a: Vec2Mm, b: Vec2Mm): NetEdge {
   return { face, edge };
 }
 
-/** The face a tab belongs to: the one whose edge it folds on, or (an overlap strip) shares an edge with. */
-function tabFace(net: NetFace[], tab: NetTab): number {
-  // A tab lies right of its fold a→b and its face left of it, so the face runs the edge the same way; an
-  // overlap strip's own outline runs the shared edge the other way round.
-  const edges = tab.fold
-    ? [[tab.fold.fromMm, tab.fold.toMm] as const]
-    : ringEdges(tab.polygonMm).map(([a, b]) => [b, a] as const);
-  for (const [a, b] of edges) {
-    const face = net.findIndex((f) => ringEdges(f.flatMm).some(([p, q]) => key(p) === key(a) && key(q) === key(b)));
-    if (face >= 0) return face;
-  }
-  return 0;
+interface NetFinder {
+  /** The face a tab belongs to: the one whose edge it folds on, or (an overlap strip) shares an edge with. */
+  tabFace(tab: NetTab): number;
+  /** The face holding a printed number: the one containing the point, else the nearest by its centre. */
+  labelFace(p: Vec2Mm): number;
 }
 
-/** The face holding a printed number: the one containing the point, else the nearest by its centre. */
-function labelFace(net: NetFace[], p: Vec2Mm): number {
-  const inside = net.findIndex((f) => pointInPolygon(p, f.flatMm));
-  if (inside >= 0) return inside;
-  let best = 0;
-  let bestD = Infinity;
+/** Lookups over a net's faces, indexed once: faces by directed edge, and by bounding box. */
+function netFinder(net: NetFace[]): NetFinder {
+  const byEdge = new Map<string, number>();
   net.forEach((f, i) => {
-    const c = f.flatMm.reduce<[number, number]>((s, q) => [s[0] + q[0], s[1] + q[1]], [0, 0]);
-    const d = Math.hypot(c[0] / f.flatMm.length - p[0], c[1] / f.flatMm.length - p[1]);
-    if (d < bestD) [best, bestD] = [i, d];
+    for (const [p, q] of ringEdges(f.flatMm))
+      if (!byEdge.has(`${key(p)}>${key(q)}`)) byEdge.set(`${key(p)}>${key(q)}`, i);
   });
-  return best;
+  const bounds = net.map((f) => pointsBounds(f.flatMm));
+  return {
+    tabFace(tab) {
+      // A tab lies right of its fold a→b and its face left of it, so the face runs the edge the same way; an
+      // overlap strip's own outline runs the shared edge the other way round.
+      const edges = tab.fold
+        ? [[tab.fold.fromMm, tab.fold.toMm] as const]
+        : ringEdges(tab.polygonMm).map(([a, b]) => [b, a] as const);
+      for (const [a, b] of edges) {
+        const face = byEdge.get(`${key(a)}>${key(b)}`);
+        if (face !== undefined) return face;
+      }
+      return 0;
+    },
+    labelFace(p) {
+      const inside = net.findIndex((f, i) => {
+        const b = bounds[i]!;
+        return p[0] >= b.minX && p[0] <= b.maxX && p[1] >= b.minY && p[1] <= b.maxY && pointInPolygon(p, f.flatMm);
+      });
+      if (inside >= 0) return inside;
+      let best = 0;
+      let bestD = Infinity;
+      net.forEach((f, i) => {
+        const c = f.flatMm.reduce<[number, number]>((s, q) => [s[0] + q[0], s[1] + q[1]], [0, 0]);
+        const d = Math.hypot(c[0] / f.flatMm.length - p[0], c[1] / f.flatMm.length - p[1]);
+        if (d < bestD) [best, bestD] = [i, d];
+      });
+      return best;
+    },
+  };
 }
 
 const ringEdges = (poly: readonly Vec2Mm[]) => poly.map((p, i) => [p, poly[(i + 1) % poly.length]!] as const);

@@ -45,7 +45,7 @@ export function kitView(row: KitRow): KitView {
     classId: row.class_id,
     className: row.class_name,
     modelId: row.model_id,
-    modelTitle: model?.name ?? demoModelById(row.model_id)?.title ?? row.model_id,
+    modelTitle: model?.name ?? row.imported_model_title ?? demoModelById(row.model_id)?.title ?? row.model_id,
     activitySlug: row.activity_slug,
     settings,
     scaleDenominator: row.inputs.scaleDenominator,

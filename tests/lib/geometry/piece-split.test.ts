@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { hingeTreeFold } from '../../../src/lib/geometry/hinge-tree';
 import { modelPatterns } from '../../../src/lib/geometry/model-patterns';
-import { pieceSplit } from '../../../src/lib/geometry/piece-split';
+import { pieceSplit, SPLIT_CUTS_TRIED_MAX } from '../../../src/lib/geometry/piece-split';
 import type { Piece } from '../../../src/lib/geometry/types';
 import { polygonArea } from '../../../src/lib/geometry/vec';
 import { demoModel } from './fixtures';
@@ -20,6 +20,31 @@ describe('pieceSplit', () => {
   // CRC Standard Mathematical Tables: a regular hexagon with apothem a has side 2a·tan 30°; the Skein's
   // 2.4 m across the flats gives 1385.6 mm walls, 69.28 mm at 1:20, so the six-wall strip is 415.7 mm long.
   const side = (2 * 1200 * Math.tan(Math.PI / 6)) / 20;
+
+  test('cuts a 64-facet wall strip (more joints than it tries at one cut) into whole walls that each fit', () => {
+    // A cylinder of 64 facets, 1 m across at 1:10: its wall strip is about 314 mm long (the circumference).
+    const model = {
+      schemaVersion: 1 as const,
+      name: 'Drum',
+      body: { kind: 'cylinder' as const, diameterM: 1, heightM: 0.5, facets: 64 },
+      appendages: [],
+    };
+    const strip = modelPatterns(model, { scaleDenominator: 10, paperGsm: 160 }).pieces.find((p) => p.id === 'body')!;
+    expect(strip.hinge.joints.length).toBeGreaterThan(SPLIT_CUTS_TRIED_MAX);
+    let next = maxTab(strip);
+    const parts = pieceSplit(
+      strip,
+      (p) => longSideMm(p) <= 100,
+      160,
+      () => ++next,
+    );
+    for (const p of parts) expect(longSideMm(p)).toBeLessThanOrEqual(100);
+    // Every face lands in exactly one part, whole.
+    expect(parts.reduce((a, p) => a + p.hinge.faces.length, 0)).toBe(strip.hinge.faces.length);
+    expect(parts.reduce((a, p) => a + p.faceAreaMm2, 0)).toBeCloseTo(strip.faceAreaMm2, 6);
+    const walls = parts.map((p) => p.hinge.faces.length);
+    expect(Math.min(...walls)).toBeGreaterThanOrEqual(Math.max(...walls) / 2);
+  });
 
   test('cuts the Skein wall strip at 1:20 into parts of whole walls that each fit the limit', () => {
     let next = maxTab(wall());

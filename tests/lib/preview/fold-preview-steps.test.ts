@@ -41,6 +41,7 @@ const row: KitRow = {
   created_at: new Date(0),
   updated_at: new Date(0),
   class_name: 'Demo class',
+  imported_model_title: null,
 };
 
 describe('the 3D preview of a saved kit', () => {
