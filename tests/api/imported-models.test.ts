@@ -214,6 +214,19 @@ describe('a kit from an imported model', () => {
     const union = polygonClipping.union(faces[0]!, ...faces.slice(1));
     expect(polygonsArea(union)).toBeCloseTo(6 * (CUBE_SIDE / 2) ** 2, 6);
 
+    // The scale solver reads the mesh as any model: the sheets it counts at its scale are the sheets a preview
+    // at that scale lays out (the same unfold and packer, through another route).
+    const { scaleDenominator: _n, copies: _c, ...solveInputs } = inputs;
+    const solve = await postJson('/api/scale/solve', solveInputs, { cookie: cookie.teacher });
+    expect(solve.status, await solve.clone().text()).toBe(200);
+    const solved = (await solve.json()) as { kit: { paper: { scaleDenominator: number; sheetCount: number } } };
+    const atSolved = await postJson(
+      '/api/kits/preview',
+      { ...inputs, scaleDenominator: solved.kit.paper.scaleDenominator },
+      { cookie: cookie.teacher },
+    );
+    expect(((await atSolved.json()) as { sheetCount: number }).sheetCount).toBe(solved.kit.paper.sheetCount);
+
     const preview = await postJson('/api/kits/preview', inputs, { cookie: cookie.teacher });
     expect(preview.status, await preview.clone().text()).toBe(200);
     expect(((await preview.json()) as { sheetCount: number }).sheetCount).toBe(1);
