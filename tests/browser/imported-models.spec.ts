@@ -9,13 +9,15 @@ import * as THREE from 'three';
 import { STLExporter } from 'three/examples/jsm/exporters/STLExporter.js';
 import type { Browser } from 'playwright-core';
 import type { Knex } from 'knex';
-import { axeSerious, browserLaunch, hydrated, pageWithSession } from './browser';
+import { axeSerious, BASE_URL, browserLaunch, hydrated, pageWithSession } from './browser';
 import { testKnex } from '../db/database';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
 
 let browser: Browser;
 let knex: Knex;
 let teacherCookie: string;
+let coordinatorCookie: string;
+let otherTeacherCookie: string;
 
 beforeAll(async () => {
   browser = await browserLaunch();
@@ -23,6 +25,8 @@ beforeAll(async () => {
   const teacher = await accountCreate(knex, { role: 'teacher', label: 'imports-browser' });
   teacherCookie = await userSessionCookie(knex, teacher.id);
   await classCreateDirect(knex, teacher, 'Browser imports class');
+  coordinatorCookie = await userSessionCookie(knex, (await accountCreate(knex, { role: 'coordinator' })).id);
+  otherTeacherCookie = await userSessionCookie(knex, (await accountCreate(knex, { role: 'teacher' })).id);
 });
 afterAll(async () => {
   await browser?.close();
@@ -104,6 +108,34 @@ describe('imported models', () => {
       { timeout: 20_000 },
     );
     expect(errors).toEqual([]);
+  });
+
+  it('lets a coordinator share a model, which another teacher then finds in the builder', async () => {
+    const { page: owner } = await pageWithSession(browser, teacherCookie);
+    const created = await owner.request.post('/api/models/imports', {
+      multipart: {
+        title: 'Shared practice octahedron',
+        file: { name: 'shared.stl', mimeType: 'model/stl', buffer: octahedronStl() },
+      },
+      headers: { origin: BASE_URL },
+    });
+    expect(created.status()).toBe(201);
+    const { model } = (await created.json()) as { model: { id: string } };
+
+    const { page, errors } = await pageWithSession(browser, coordinatorCookie);
+    await page.goto(`/models/imports/${model.id}`);
+    await hydrated(page);
+    await page.getByLabel('Share with every account').check();
+    await page.getByText('Shared: every teacher sees this model').waitFor();
+    expect(errors).toEqual([]);
+
+    const { page: other } = await pageWithSession(browser, otherTeacherCookie);
+    await other.goto('/kits/new');
+    await hydrated(other);
+    const option = other.locator('select[name="modelId"] optgroup[label="Imported models"] option', {
+      hasText: 'Shared practice octahedron',
+    });
+    expect(await option.getAttribute('value')).toBe(`import:${model.id}`);
   });
 
   it('says what a file that is not a mesh is, beside the form', async () => {

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { ApiError, api } from '../../lib/http/client';
 import { scaleUsualAtLeast } from '../../lib/layout/scale-ratios';
 import {
@@ -42,8 +42,16 @@ const shapeKeyOf = (m: ImportedModelView) => `${m.unit}/${m.reducedTriangleCount
  * can take seconds: the panel says it is busy meanwhile). Shown before the teacher builds and saves a kit.
  */
 export default function MeshKitSummaryPanel({ model, sheetSizes, paperGsmDefault }: Props) {
-  const [scale, setScale] = useState(() => String(scaleSuggested(model)));
-  const [sheetSizeId, setSheetSizeId] = useState<string>(MeshKitSummaryRequestSchema.shape.sheetSizeId.parse(undefined));
+  const suggested = scaleSuggested(model);
+  const [scale, setScale] = useState(() => String(suggested));
+  const [scaleTyped, setScaleTyped] = useState(false);
+  // A new unit makes another scale suitable: follow it until the teacher types a scale of their own.
+  useEffect(() => {
+    if (!scaleTyped) setScale(String(suggested));
+  }, [suggested]);
+  const [sheetSizeId, setSheetSizeId] = useState<string>(
+    MeshKitSummaryRequestSchema.shape.sheetSizeId.parse(undefined),
+  );
   const [paperGsm, setPaperGsm] = useState(String(paperGsmDefault));
   const [busy, setBusy] = useState(false);
   const [errors, setErrors] = useState<Partial<Record<FieldName, string>>>({});
@@ -100,8 +108,11 @@ export default function MeshKitSummaryPanel({ model, sheetSizes, paperGsmDefault
           label="Scale 1 :"
           name="scaleDenominator"
           value={scale}
-          onChange={setScale}
-          hint={`Suggested for its size in ${model.unit}: 1:${scaleSuggested(model)}.`}
+          onChange={(v) => {
+            setScale(v);
+            setScaleTyped(true);
+          }}
+          hint={`Suggested for its size in ${model.unit}: 1:${suggested}.`}
           error={errors.scaleDenominator}
         />
         <div className="grid grid-cols-2 gap-3">

@@ -18,11 +18,17 @@ export default function ModelDeleteButton({ model }: { model: ImportedModelView 
   }
   return (
     <div>
-      <button type="button" className="btn-secondary" disabled={busy} onClick={() => void remove()}>
+      <button
+        type="button"
+        className="btn-secondary"
+        disabled={busy || model.kitCount > 0}
+        aria-describedby={model.kitCount > 0 ? `delete-hint-${model.id}` : undefined}
+        onClick={() => void remove()}
+      >
         {busy ? 'Deleting…' : 'Delete this model'}
       </button>
       {model.kitCount > 0 && (
-        <p className="mt-1 text-sm text-ink-soft">
+        <p id={`delete-hint-${model.id}`} className="mt-1 text-sm text-ink-soft">
           {model.kitCount === 1 ? '1 saved kit is' : `${model.kitCount} saved kits are`} built from it: delete{' '}
           {model.kitCount === 1 ? 'that kit' : 'those kits'} first.
         </p>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { ImportedModelView } from '../../lib/models/imported-model-inputs';
 import { FormAlert } from '../auth/FormAlert';
 import FieldShell from '../tools/FieldShell';
-import { useModelChange } from './useModelChange';
+import { kitsLockedSentence, useModelChange } from './useModelChange';
 
 interface Props {
   model: ImportedModelView;
@@ -47,7 +47,10 @@ export default function ModelReduction({ model, onChanged }: Props) {
           </>
         )}
       </p>
-      {model.canChange && (
+      {model.canChange && model.kitCount > 0 && (
+        <p className="mt-2 text-sm text-ink-soft">{kitsLockedSentence(model.kitCount)}</p>
+      )}
+      {model.canChange && model.kitCount === 0 && (
         <>
           <div className="mt-3 flex flex-wrap items-end gap-3">
             <FieldShell label="Target number of triangles" error={fieldError ?? undefined}>

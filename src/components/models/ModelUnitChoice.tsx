@@ -3,7 +3,7 @@ import { MESH_UNITS, type MeshUnit } from '../../lib/mesh/mesh-units';
 import type { ImportedModelView } from '../../lib/models/imported-model-inputs';
 import { MESH_UNIT_WORDS, meshSizeLabel } from '../../lib/ui/mesh-size-label';
 import { FormAlert } from '../auth/FormAlert';
-import { useModelChange } from './useModelChange';
+import { kitsLockedSentence, useModelChange } from './useModelChange';
 
 interface Props {
   model: ImportedModelView;
@@ -19,6 +19,7 @@ export default function ModelUnitChoice({ model, onChanged }: Props) {
   const { change, busy, error } = useModelChange(model.id, onChanged);
   const [saved, setSaved] = useState<string | null>(null);
   const name = `unit-${model.id}`;
+  const locked = model.kitCount > 0;
   const save = async () => {
     setSaved(null);
     if (await change({ unit })) setSaved(`Saved: the file’s numbers are ${MESH_UNIT_WORDS[unit]}.`);
@@ -32,7 +33,7 @@ export default function ModelUnitChoice({ model, onChanged }: Props) {
         A mesh file stores numbers without a unit. The sides of its box are {model.extents.map(fileNumber).join(' × ')}{' '}
         in the file; pick the unit that gives the real object its real size.
       </p>
-      <fieldset className="mt-3" disabled={!model.canChange || busy}>
+      <fieldset className="mt-3" disabled={!model.canChange || locked || busy}>
         <legend className="sr-only">Unit of the file&rsquo;s numbers</legend>
         <ul className="flex flex-col gap-2">
           {MESH_UNITS.map((u) => (
@@ -57,7 +58,9 @@ export default function ModelUnitChoice({ model, onChanged }: Props) {
           ))}
         </ul>
       </fieldset>
-      {model.canChange ? (
+      {locked ? (
+        <p className="mt-3 text-sm text-ink-soft">{kitsLockedSentence(model.kitCount)}</p>
+      ) : model.canChange ? (
         <div className="mt-3 flex flex-wrap items-center gap-3">
           <button
             type="button"

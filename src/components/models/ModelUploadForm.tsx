@@ -65,6 +65,7 @@ export default function ModelUploadForm() {
             name="file"
             type="file"
             accept={ACCEPT}
+            className="mt-2 block text-sm file:mr-3 file:rounded-md file:border file:border-ink/20 file:bg-white file:px-3 file:py-1.5 file:font-semibold file:text-ink"
             disabled={busy}
             aria-describedby={describedBy}
             onChange={(e) => {

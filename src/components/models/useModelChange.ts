@@ -26,3 +26,8 @@ export function useModelChange(modelId: string, onChanged: (model: ImportedModel
   }
   return { change, busy, error };
 }
+
+/** Why unit and reduction stay fixed: saved kits are built from the model as it is (the API answers 409 too). */
+export function kitsLockedSentence(kitCount: number): string {
+  return `${kitCount === 1 ? '1 saved kit is' : `${kitCount} saved kits are`} built from this model, so it stays as it is; import the file again to change it.`;
+}
