@@ -8,6 +8,7 @@ import type { SavedResult } from '../analysis/saved-result';
 import type { EntryAuthorKind, EntryState, ReviewQueueQuery } from '../journal/entry-rules';
 import { isUuid } from './accounts';
 import { db } from './knex';
+import { reachBuiltRows } from './reach-cache';
 
 export interface EntryRow {
   id: string;
@@ -279,7 +280,15 @@ function reviewQueueFiltered(q: ReviewQueueQuery, now: Date, trx: Knex) {
   return query;
 }
 
-/** One page of the review queue with the total that match the filters; the two queries run side by side. */
+/**
+ * One page of the review queue with the total that match the filters; the two queries run side by side. `now`
+ * sets the age filters: pass it to the minute (reviewQueueNow) so a repeated page is the same query.
+ */
+/** The queue's clock: now, to the minute, so age filters change once a minute and repeated pages can be cached. */
+export function reviewQueueNow(): Date {
+  return new Date(Math.floor(Date.now() / 60_000) * 60_000);
+}
+
 export async function reviewQueuePage(
   q: ReviewQueueQuery,
   now: Date,
@@ -297,11 +306,12 @@ export async function reviewQueuePage(
   // Only a sort by class or school needs those tables to choose the page.
   if (q.sort === 'class' || q.sort === 'school') ids.join('classes', 'classes.id', 'entries.class_id');
   if (q.sort === 'school') ids.leftJoin('schools', 'schools.id', 'classes.school_id');
-  const [countRow, rows] = await Promise.all([
-    reviewQueueFiltered(q, now, trx).count<{ count: string }[]>({ count: '*' }).first(),
-    entryListSelect(trx).whereIn('entries.id', ids).orderBy(order) as Promise<EntryListRow[]>,
+  // Pages asked for again before the queue changes (reloads, many coordinators) come from the reach cache.
+  const [countRows, rows] = await Promise.all([
+    reachBuiltRows<{ count: string }>(trx, reviewQueueFiltered(q, now, trx).count({ count: '*' })),
+    reachBuiltRows<EntryListRow>(trx, entryListSelect(trx).whereIn('entries.id', ids).orderBy(order)),
   ]);
-  return { rows, total: Number(countRow?.count ?? 0) };
+  return { rows, total: Number(countRows[0]?.count ?? 0) };
 }
 
 /** Published entries, newest first, for an activity, a class, a school, or all. */

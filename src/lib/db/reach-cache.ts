@@ -1,6 +1,8 @@
 /**
- * Reach query results kept in memory, keyed by the query and the database's reach data version (the sum of the
- * counters in reach_data_versions, raised in the same transaction as every change to a table the figures read).
+ * Results of queries that read only the reach source tables (the reach figures, and the review queue, whose
+ * entries, classes, schools, accounts and kits are all among them) kept in memory, keyed by the query and the
+ * database's reach data version (the sum of the counters in reach_data_versions, raised in the same transaction
+ * as every change to one of those tables).
  * A reader reads the version first and the data after, so a cached result is never older than its version:
  * the dashboard shows the same numbers as an uncached query, and many coordinators asking for the same quarter
  * cost one query until something changes. Queries inside a transaction are never cached (their uncommitted
@@ -21,8 +23,12 @@ export async function reachDataVersion(knex: Knex): Promise<bigint> {
 }
 
 /** The rows of a reach query, from memory when the same query ran at the current reach data version. */
-export async function reachQueryRows<Row>(knex: Knex, sql: string, bindings: Knex.ValueDict): Promise<Row[]> {
-  const run = async () => (await knex.raw(sql, bindings)).rows as Row[];
+export async function reachQueryRows<Row>(
+  knex: Knex,
+  sql: string,
+  bindings: Knex.ValueDict | readonly Knex.Value[],
+): Promise<Row[]> {
+  const run = async () => (await knex.raw(sql, bindings as Knex.ValueDict)).rows as Row[];
   if (knex.isTransaction) return run();
   const version = await reachDataVersion(knex);
   if (version > newestVersion) {
@@ -38,4 +44,10 @@ export async function reachQueryRows<Row>(knex: Knex, sql: string, bindings: Kne
   results.set(key, rows);
   if (results.size > REACH_CACHE_MAX_ENTRIES) results.delete(results.keys().next().value!);
   return (await rows) as Row[];
+}
+
+/** The rows of a built query that reads reach source tables only, through the same cache. */
+export function reachBuiltRows<Row>(knex: Knex, query: Knex.QueryBuilder): Promise<Row[]> {
+  const { sql, bindings } = query.toSQL();
+  return reachQueryRows<Row>(knex, sql, bindings);
 }

@@ -78,17 +78,64 @@ export function markdownToSafeHtml(source: string): string {
   return sanitizeHtml(md.render(source), SANITIZE);
 }
 
-/** The body as plain text for a summary (no markup), cut at `max` characters on a word. */
+/**
+ * The body as plain text for a summary (no markup), cut at `max` characters on a word: the text of the parsed
+ * Markdown's tokens (what the rendered HTML shows, images' alt text aside), read only until the cut. No HTML
+ * is rendered or sanitized, and only the paragraphs the cut needs are parsed: a queue page summarises 25 entries,
+ * and rendering each whole body cost about 0.6 ms.
+ */
 export function markdownExcerpt(source: string, max = 220): string {
-  const plain = sanitizeHtml(md.render(source), { allowedTags: [], allowedAttributes: {} })
-    .replace(/&lt;/g, '<')
-    .replace(/&gt;/g, '>')
-    .replace(/&quot;/g, '"')
-    .replace(/&#39;/g, "'")
-    .replace(/&amp;/g, '&')
-    .replace(/\s+/g, ' ')
-    .trim();
+  const key = `${max}\u0000${source}`;
+  let excerpt = excerpts.get(key);
+  if (excerpt === undefined) {
+    excerpt = excerptOf(source, max);
+    if (excerpts.size >= EXCERPTS_KEPT) excerpts.delete(excerpts.keys().next().value!);
+  } else excerpts.delete(key); // set again below: a Map's order is the recency order
+  excerpts.set(key, excerpt);
+  return excerpt;
+}
+
+/** Excerpts kept, by body: a queue page shows the same 25 bodies to every coordinator until one is decided. */
+const EXCERPTS_KEPT = 2_000;
+const excerpts = new Map<string, string>();
+
+function excerptOf(source: string, max: number): string {
+  const start = excerptSource(source, max);
+  let plain = markdownPlainText(start, max);
+  // Paragraphs of little text (long link addresses): read the whole body after all.
+  if (plain.length < max && start.length < source.length) plain = markdownPlainText(source, max);
   if (plain.length <= max) return plain;
   const cut = plain.slice(0, max);
   return `${cut.slice(0, Math.max(cut.lastIndexOf(' '), max - 30))}…`;
+}
+
+/** The text of the Markdown's tokens, whitespace collapsed, read until a little past `max` characters. */
+function markdownPlainText(source: string, max: number): string {
+  const parts: string[] = [];
+  let length = 0;
+  const add = (text: string) => {
+    parts.push(text);
+    length += text.length;
+  };
+  for (const block of md.parse(source, {})) {
+    if (block.type === 'inline') {
+      for (const t of block.children ?? []) {
+        if (t.type === 'text' || t.type === 'code_inline') add(t.content);
+        else if (t.type === 'softbreak' || t.type === 'hardbreak') add(' ');
+      }
+    } else if (block.type === 'fence' || block.type === 'code_block') add(block.content);
+    add(' ');
+    // Whitespace may still collapse, so read on a little past the cut before stopping.
+    if (length > 2 * max + 50) break;
+  }
+  return parts.join('').replace(/\s+/g, ' ').trim();
+}
+
+/**
+ * The start of a body that holds its first `max` characters of text: whole paragraphs up to the first blank line
+ * past 3 × max characters (no inline markup spans a blank line, so the cut changes nothing before it).
+ */
+function excerptSource(source: string, max: number): string {
+  const blank = source.indexOf('\n\n', 3 * max);
+  return blank < 0 ? source : source.slice(0, blank);
 }

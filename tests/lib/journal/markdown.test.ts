@@ -1,3 +1,5 @@
+import fc from 'fast-check';
+import sanitizeHtml from 'sanitize-html';
 /**
  * Entry bodies render no script, no event handler, no raw HTML and no link outside http/https/mailto. Judged by
  * parse5 (the WHATWG HTML parsing algorithm, as a browser would read the output), not by the sanitizer itself.
@@ -178,5 +180,52 @@ describe('markdownExcerpt', () => {
     const long = markdownExcerpt('word '.repeat(100), 40);
     expect(long.length).toBeLessThanOrEqual(41);
     expect(long.endsWith('word…')).toBe(true);
+  });
+
+  // The reference: the body as the entry page renders it (markdownToSafeHtml), stripped of every tag by
+  // sanitize-html (a library from the registry), whitespace collapsed and cut the same way. The excerpt, which
+  // renders no HTML, must read the same text.
+  const reference = (source: string, max: number) => {
+    const plain = sanitizeHtml(markdownToSafeHtml(source), {
+      allowedTags: [],
+      allowedAttributes: {},
+    })
+      .replace(/&lt;/g, '<')
+      .replace(/&gt;/g, '>')
+      .replace(/&quot;/g, '"')
+      .replace(/&#39;/g, "'")
+      .replace(/&amp;/g, '&')
+      .replace(/\s+/g, ' ')
+      .trim();
+    if (plain.length <= max) return plain;
+    const cut = plain.slice(0, max);
+    return `${cut.slice(0, Math.max(cut.lastIndexOf(' '), max - 30))}…`;
+  };
+  const fragment = fc.constantFrom(
+    'probe ',
+    'boom folded ',
+    '**bold words** ',
+    '*tilted* ',
+    '`code` ',
+    '[a link](https://example.org/a/very/long/address/that/has/no/text/to/show) ',
+    'https://example.org/bare ',
+    'Tom & Jerry ',
+    '&amp; &lt;b&gt; ',
+    '<b>raw</b> ',
+    '\n',
+    '\n\n',
+    '\n\n- item one\n- item two\n\n',
+    '\n\n```\nfenced line\n```\n\n',
+    '\n\n# Heading\n\n',
+    '![alt text](https://example.org/p.png) ',
+  );
+  it('reads the same text as the rendered, tag-stripped body (fast-check, 300 bodies)', () => {
+    fc.assert(
+      fc.property(fc.array(fragment, { maxLength: 120 }), fc.integer({ min: 20, max: 300 }), (parts, max) => {
+        const body = parts.join('');
+        expect(markdownExcerpt(body, max)).toBe(reference(body, max));
+      }),
+      { numRuns: 300 },
+    );
   });
 });

@@ -1,5 +1,5 @@
 import { STAFF } from '../../../lib/auth/actor';
-import { reviewQueuePage } from '../../../lib/db/entries';
+import { reviewQueueNow, reviewQueuePage } from '../../../lib/db/entries';
 import { endpoint } from '../../../lib/http/endpoint';
 import { ReviewQueueQuerySchema } from '../../../lib/journal/entry-rules';
 import { entrySummary } from '../../../lib/journal/entry-view.server';
@@ -8,7 +8,7 @@ import { parseInput } from '../../../lib/validation';
 /** One page of the review queue: submitted, teacher-approved entries, filtered and sorted on the server. */
 export const GET = endpoint({ access: STAFF }, async ({ url }) => {
   const query = parseInput(ReviewQueueQuerySchema, Object.fromEntries(url.searchParams), 'query');
-  const now = new Date();
+  const now = reviewQueueNow();
   const { rows, total } = await reviewQueuePage(query, now);
   return {
     entries: rows.map((r) => entrySummary(r, now)),
