@@ -297,7 +297,7 @@ describe('reach CSV exports', () => {
 
   it('parse back the figures over time (the school page table) into the series the API answers, row for row', async () => {
     const period = PERIODS['twelve months before this quarter']!;
-    const schoolId = await schoolWithMostKits(knex);
+    const schoolId = await schoolWithMostKits(knex, period);
     const q = `${periodQuery(period)}&bucket=quarter&schoolId=${schoolId}`;
     const summary = await getJson<{
       figures: { id: ReachFigureId; label: string }[];

@@ -5,12 +5,11 @@
  * whose 3D fold-along preview draws the pieces (or its flat fallback); axe-core checks the model pages.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import * as THREE from 'three';
-import { STLExporter } from 'three/examples/jsm/exporters/STLExporter.js';
 import type { Browser } from 'playwright-core';
 import type { Knex } from 'knex';
 import { axeSerious, BASE_URL, browserLaunch, hydrated, pageWithSession } from './browser';
 import { testKnex } from '../db/database';
+import { octahedronStl } from '../fixtures/mesh-files';
 import { accountCreate, classCreateDirect, userSessionCookie } from '../api/auth-helpers';
 
 let browser: Browser;
@@ -32,12 +31,6 @@ afterAll(async () => {
   await browser?.close();
   await knex?.destroy();
 });
-
-/** A regular octahedron of circumradius 30 as a binary STL: 8 triangles, a 60 × 60 × 60 box in file numbers. */
-function octahedronStl(): Buffer {
-  const view = new STLExporter().parse(new THREE.Mesh(new THREE.OctahedronGeometry(30)), { binary: true });
-  return Buffer.from(view.buffer, view.byteOffset, view.byteLength);
-}
 
 describe('imported models', () => {
   it('imports an STL, answers the unit question, sums up the kit, then builds and saves it from the builder', async () => {

@@ -13,6 +13,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testKnex } from '../db/database';
 import { accountCreate, classCreateDirect, classSessionCookie, userSessionCookie } from '../api/auth-helpers';
 import { BASE_URL, browserLaunch, hydrated, kitSaveRequest, pageNew } from './browser';
+import { octahedronStl } from '../fixtures/mesh-files';
 
 type Visitor = 'anonymous' | 'teacher' | 'admin' | 'classSession';
 interface Fixtures {
@@ -25,6 +26,8 @@ interface Fixtures {
   /** A submitted entry of the same class, approved and waiting for review. */
   submittedId: string;
   schoolId: string;
+  /** A model the teacher imported. */
+  importedModelId: string;
 }
 interface PageVisit {
   path: string | ((f: Fixtures) => string);
@@ -45,6 +48,7 @@ const VISITS: Record<string, PageVisit> = {
   '/kits/[id]/handout': { path: (f) => `/kits/${f.kitId}/handout`, as: 'teacher' },
   '/preview/[model]': { path: '/preview/skein-probe', as: 'teacher' },
   '/kits/new': { path: '/kits/new?model=skein-probe', as: 'teacher' },
+  '/models/imports/[id]': { path: (f) => `/models/imports/${f.importedModelId}`, as: 'teacher' },
   '/sign-in': { path: '/sign-in', as: 'anonymous' },
   '/sign-up': { path: '/sign-up', as: 'anonymous' },
   '/forgot-password': { path: '/forgot-password', as: 'anonymous' },
@@ -141,6 +145,12 @@ beforeAll(async () => {
   const saved = await kitSaveRequest(page, klass.id, { modelId: 'skein-probe', scaleDenominator: 20 });
   expect(saved.status()).toBe(201);
   const kitId = ((await saved.json()) as { kit: { id: string } }).kit.id;
+  const imported = await page.request.post('/api/models/imports', {
+    multipart: { file: { name: 'csp.stl', mimeType: 'model/stl', buffer: octahedronStl() } },
+    headers: { origin: BASE_URL },
+  });
+  expect(imported.status()).toBe(201);
+  const importedModelId = ((await imported.json()) as { model: { id: string } }).model.id;
   await page.context().close();
   const activitySlug = readdirSync(join(process.cwd(), 'content', 'activities'))
     .filter((f) => f.endsWith('.md'))
@@ -173,6 +183,7 @@ beforeAll(async () => {
     submittedId: submitted!.id,
     eventId: event.id,
     schoolId: school.id,
+    importedModelId,
   };
 }, 60_000);
 
