@@ -52,6 +52,7 @@ export function modelPatterns(model: Model, options: PatternOptions): ModelPatte
       scaleDenominator: N,
       paperGsm: gsm,
       pieceMaxMm: options.pieceMaxMm,
+      name: model.name,
     });
     return { pieces, threads: [], substitutes: [] };
   }

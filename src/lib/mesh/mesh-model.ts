@@ -43,6 +43,8 @@ export interface MeshPatternOptions {
   paperGsm: number;
   /** The largest piece the sheet takes; pieces are cut along folds to fit it. */
   pieceMaxMm?: { widthMm: number; heightMm: number };
+  /** The model's name: printed on the pieces of a mesh of one part (an STL's solid name is rarely meant for people). */
+  name?: string;
 }
 
 /** The mesh unfolded into paper pieces at 1:N (src/lib/mesh/mesh-unfold.ts), with what the unfold did. */
@@ -51,7 +53,7 @@ export function meshShapeUnfold(shape: MeshShape, options: MeshPatternOptions): 
     mmPerUnit: mmPerUnit(shape, options.scaleDenominator),
     paperGsm: options.paperGsm,
     pieceMaxMm: options.pieceMaxMm ?? PIECE_MAX_UNBOUNDED_MM,
-    groups: shape.mesh.groups,
+    groups: shape.mesh.groups.length === 1 && options.name ? [options.name] : shape.mesh.groups,
   });
 }
 

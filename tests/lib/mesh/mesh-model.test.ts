@@ -69,6 +69,8 @@ describe('an imported mesh as a model', () => {
     });
     expect(threads).toEqual([]);
     expect(substitutes).toEqual([]);
+    // A mesh of one part prints the model's name on its pieces, not the file's solid name ("Box").
+    for (const p of pieces) expect(p.label).toMatch(/^Cube \d/);
     const faces = pieces.flatMap((p) => p.hinge.faces.map((f) => [f.polygonMm] as Polygon));
     const areaOf = (poly: Polygon) => {
       const r = poly[0]!;
