@@ -6,9 +6,9 @@
 import { paperTabDepthMm } from '../geometry/paper';
 import { sheetPackKit, sheetPieceRoomMm } from '../layout/sheet-packer';
 import { sheetSize, type SheetSizeId } from '../layout/sheet-sizes';
-import { meshShapeUnfold } from '../mesh/mesh-model';
+import { meshShapeMmPerUnit, meshShapeUnfold } from '../mesh/mesh-model';
 import type { MeshShape } from '../mesh/mesh-types';
-import { meshExtents, MESH_UNIT_METRES } from '../mesh/mesh-units';
+import { meshExtents } from '../mesh/mesh-units';
 import type { MeshUnfoldSummary } from '../mesh/mesh-unfold';
 
 /** A folded-back piece may be off the mesh by this share of the mesh's size (issue's acceptance bound). */
@@ -39,8 +39,7 @@ export function meshKitSummary(shape: MeshShape, settings: MeshKitSummarySetting
     pieceMaxMm: sheetPieceRoomMm(size, 'metric'),
   });
   const packed = sheetPackKit(pieces, { sheetSize: size, units: 'metric', copies: 1, paperGsm: settings.paperGsm });
-  const sizeMm =
-    (Math.max(...meshExtents(shape.mesh.positions)) * MESH_UNIT_METRES[shape.unit] * 1000) / settings.scaleDenominator;
+  const sizeMm = Math.max(...meshExtents(shape.mesh.positions)) * meshShapeMmPerUnit(shape, settings.scaleDenominator);
   return {
     ...summary,
     pieceCount: packed.pieces.length,

@@ -31,7 +31,7 @@ export function meshModelOf(shape: MeshShape, name: string): Model {
 }
 
 /** Millimetres at 1:N per file unit. */
-function mmPerUnit(shape: MeshShape, scaleDenominator: number): number {
+export function meshShapeMmPerUnit(shape: MeshShape, scaleDenominator: number): number {
   return (MESH_UNIT_METRES[shape.unit] * 1000) / scaleDenominator;
 }
 
@@ -50,7 +50,7 @@ export interface MeshPatternOptions {
 /** The mesh unfolded into paper pieces at 1:N (src/lib/mesh/mesh-unfold.ts), with what the unfold did. */
 export function meshShapeUnfold(shape: MeshShape, options: MeshPatternOptions): MeshUnfold {
   return meshUnfold(placed(shape), meshFaces(shape.mesh), {
-    mmPerUnit: mmPerUnit(shape, options.scaleDenominator),
+    mmPerUnit: meshShapeMmPerUnit(shape, options.scaleDenominator),
     paperGsm: options.paperGsm,
     pieceMaxMm: options.pieceMaxMm ?? PIECE_MAX_UNBOUNDED_MM,
     groups: shape.mesh.groups.length === 1 && options.name ? [options.name] : shape.mesh.groups,
@@ -59,7 +59,7 @@ export function meshShapeUnfold(shape: MeshShape, options: MeshPatternOptions): 
 
 /** The mesh as the closed solid the STL, the preview and the stake-out read, at 1:N. */
 export function meshShapeSolid(shape: MeshShape, scaleDenominator: number): ModelMesh {
-  const k = mmPerUnit(shape, scaleDenominator);
+  const k = meshShapeMmPerUnit(shape, scaleDenominator);
   return { positions: Float32Array.from(placed(shape), (x) => x * k), indices: Uint32Array.from(shape.mesh.triangles) };
 }
 

@@ -6,7 +6,7 @@
  */
 import { randomUUID } from 'node:crypto';
 import type { Actor } from '../actor';
-import { auditRecord } from '../db/audit';
+import { auditRecord, type AuditAction } from '../db/audit';
 import {
   importedModelDelete,
   importedModelInsert,
@@ -24,14 +24,14 @@ import { MESH_FILE_BYTES_MAX } from '../mesh/mesh-limits';
 import { meshFileKind } from '../mesh/mesh-parse';
 import type { MeshImported } from '../mesh/mesh-prepare';
 import type { MeshSimplified } from '../mesh/mesh-simplify';
-import { MESH_UNITS } from '../mesh/mesh-units';
-import { meshRealSizeM } from '../mesh/mesh-units';
+import { MESH_UNITS, meshRealSizeM } from '../mesh/mesh-units';
 import { appStorage } from '../storage/storage.server';
 import { multipartRead } from '../upload/multipart-read.server';
 import { parseInput } from '../validation';
 import { workRun } from '../work/work-pool.server';
 import {
   IMPORTED_MODELS_LISTED_MAX,
+  IMPORTED_MODEL_TITLE_MAX,
   ImportedModelTitleSchema,
   type ImportedModelChange,
   type ImportedModelView,
@@ -92,11 +92,21 @@ export async function importedModelFind(actor: Actor, id: string): Promise<Impor
   return row;
 }
 
-async function changeable(actor: Actor, id: string): Promise<ImportedModelRow> {
+/** The model and the account changing it, when the actor may change it; 404 or 403 otherwise. */
+async function changeable(actor: Actor, id: string): Promise<{ row: ImportedModelRow; userId: string }> {
   const row = await importedModelFind(actor, id);
-  if (!canChange(actor, row))
+  if (actor.kind !== 'user' || !canChange(actor, row))
     throw new ForbiddenError('Only its owner, a coordinator or an admin may change this model.');
-  return row;
+  return { row, userId: actor.userId };
+}
+
+/** "2 saved kits are built from this model": why a model in use keeps its shape. */
+function kitsUsing(row: ImportedModelRow): string {
+  return `${row.kit_count} saved kit${row.kit_count === 1 ? ' is' : 's are'} built from this model`;
+}
+
+function modelAudit(userId: string, action: AuditAction, id: string, details?: Record<string, unknown>) {
+  return auditRecord({ actorId: userId, action, targetType: 'imported_model', targetId: id, details });
 }
 
 /**
@@ -111,7 +121,7 @@ export async function importedModelUpload(actor: Actor, request: Request): Promi
       fileBytesMax: MESH_FILE_BYTES_MAX,
       filesMax: 1,
       requestBytesMax: MESH_FILE_BYTES_MAX + UPLOAD_FRAMING_BYTES,
-      fieldBytesMax: 4 * 80,
+      fieldBytesMax: 4 * IMPORTED_MODEL_TITLE_MAX, // UTF-8: at most four bytes a character
       fieldsMax: 4,
       fileNoun: 'mesh file',
     },
@@ -131,7 +141,7 @@ export async function importedModelUpload(actor: Actor, request: Request): Promi
   const titleSent = fields[MESH_TITLE_FIELD]?.[0]?.trim();
   const title = parseInput(
     ImportedModelTitleSchema,
-    titleSent || file.fileName.replace(/\.[^.]*$/, '').slice(0, 80) || 'Imported model',
+    titleSent || file.fileName.replace(/\.[^.]*$/, '').slice(0, IMPORTED_MODEL_TITLE_MAX) || 'Imported model',
     'title',
   );
   const imported = (await workRun({ kind: 'mesh-import', bytes: file.bytes, fileName: file.fileName })) as MeshImported;
@@ -171,7 +181,7 @@ export async function importedModelChange(
   id: string,
   change: ImportedModelChange,
 ): Promise<ImportedModelView> {
-  const row = await changeable(actor, id);
+  const { row, userId } = await changeable(actor, id);
   const patch: ImportedModelPatch = { title: change.title, unit: change.unit };
   if (change.shared !== undefined && change.shared !== row.shared) {
     if (actor.kind !== 'user' || (actor.role !== 'coordinator' && actor.role !== 'admin'))
@@ -181,7 +191,7 @@ export async function importedModelChange(
   const reshapes = (change.unit !== undefined && change.unit !== row.unit) || change.reduceToTriangles !== undefined;
   if (reshapes && row.kit_count > 0) {
     throw new ConflictError(
-      `${row.kit_count} saved kit${row.kit_count === 1 ? ' is' : 's are'} built from this model, so its unit and triangle count stay as they are; import the file again to change them.`,
+      `${kitsUsing(row)}, so its unit and triangle count stay as they are; import the file again to change them.`,
     );
   }
   if (change.reduceToTriangles !== undefined) {
@@ -199,35 +209,19 @@ export async function importedModelChange(
     }
   }
   await importedModelUpdate(id, patch);
-  if (patch.shared !== undefined && actor.kind === 'user') {
-    await auditRecord({
-      actorId: actor.userId,
-      action: patch.shared ? 'model.shared' : 'model.unshared',
-      targetType: 'imported_model',
-      targetId: id,
-    });
-  }
+  if (patch.shared !== undefined) await modelAudit(userId, patch.shared ? 'model.shared' : 'model.unshared', id);
   return importedModelView(actor, await importedModelFind(actor, id));
 }
 
 /** Deletes a model the actor may change, with its stored file; 409 while saved kits are built from it. */
 export async function importedModelRemove(actor: Actor, id: string): Promise<void> {
-  const row = await changeable(actor, id);
+  const { row, userId } = await changeable(actor, id);
   if (row.kit_count > 0) {
-    throw new ConflictError(
-      `${row.kit_count} saved kit${row.kit_count === 1 ? ' is' : 's are'} built from this model; delete ${row.kit_count === 1 ? 'it' : 'them'} first.`,
-    );
+    throw new ConflictError(`${kitsUsing(row)}; delete ${row.kit_count === 1 ? 'it' : 'them'} first.`);
   }
   const key = await importedModelDelete(id);
   if (key) await appStorage().delete(key);
-  if (actor.kind === 'user')
-    await auditRecord({
-      actorId: actor.userId,
-      action: 'model.deleted',
-      targetType: 'imported_model',
-      targetId: id,
-      details: { title: row.title },
-    });
+  await modelAudit(userId, 'model.deleted', id, { title: row.title });
 }
 
 /** What the model makes as a kit with these settings (the unfold runs in the worker pool). */
