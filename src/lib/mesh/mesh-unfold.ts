@@ -5,7 +5,8 @@
  *    times (1 + cos θ)/2, θ the dihedral turn between the two faces: long, nearly flat edges become folds and
  *    the cuts are short, as in the minimum-perimeter cut-tree heuristic for polyhedron nets (W. Schlickenrieder,
  *    "Nets of Polyhedra", diploma thesis, TU Berlin, 1997; from memory), with the dihedral term added so sharp
- *    edges are cut first (common practice, no source). Edges between two parts (OBJ groups) are never folds.
+ *    edges are cut first (common practice, no source). Edges between two parts (OBJ groups) are never folds
+ *    (mesh-fold-forest.ts).
  * 2. Pieces: the tree is laid flat breadth-first from a root; each face is turned about its fold onto its
  *    parent's edge. A face that would overlap a face already in its piece, or make the piece larger than the
  *    sheet, is cut off there and starts a new piece with its subtree (greedy growth, as in the cut-and-grow
@@ -21,13 +22,14 @@ import RBush from 'rbush';
 import { orient2d } from 'robust-predicates';
 import type { EdgeLabel, Piece, Vec2Mm, Vec3Mm } from '../geometry/types';
 import { pieceFromNet, type NetFace, type NetTab } from '../geometry/piece-builder';
-import { netEdgeLabel, tabFoldAngle } from '../geometry/net-glue';
+import { netEdgeLabel, tabFoldAngle, type NetEdge } from '../geometry/net-glue';
 import { convexOverlap, tabFit } from '../geometry/tab-fit';
 import { paperTabDepthMm } from '../geometry/paper';
 import { hingeTreeFold } from '../geometry/hinge-tree';
 import { pointsBounds, vec2Add, vec2Length, vec2Scale, vec2Sub, vec2Unit } from '../geometry/vec';
 import type { MeshFace } from './mesh-faces';
 import { meshExtents } from './mesh-units';
+import { faceEdges, foldForest, type FaceEdges } from './mesh-fold-forest';
 
 /**
  * Faces closer than this fraction of the mesh's size count as touching, not overlapping: the rounding of
@@ -71,42 +73,97 @@ interface TriItem {
   minY: number;
   maxX: number;
   maxY: number;
-  face: number;
   tri: Vec2Mm[];
-}
-
-interface Adjacent {
-  f: number;
-  i: number;
-  g: number;
-  j: number;
-  lengthMm: number;
-  weight: number;
 }
 
 export function meshUnfold(positions: Float64Array, faces: MeshFace[], options: MeshUnfoldOptions): MeshUnfold {
   const k = options.mmPerUnit;
   const P = (v: number): Vec3Mm => [positions[v * 3]! * k, positions[v * 3 + 1]! * k, positions[v * 3 + 2]! * k];
-  const F = faces.length;
-  const local = faces.map((face) => faceLocal(face, P));
   const sizeMm = Math.max(...meshExtents(positions)) * k || 1;
   const tol = OVERLAP_TOLERANCE_RELATIVE * sizeMm;
-  const adjacent = faceAdjacency(faces, positions.length / 3, P);
-  const tree = foldForest(F, adjacent, faces);
+  const edges = faceEdges(faces, positions.length / 3, P);
   // Faces must leave room for a full tab on every side within the sheet.
   const margin = 2 * paperTabDepthMm(options.paperGsm);
   const sheet = {
     widthMm: Math.max(0, options.pieceMaxMm.widthMm - margin),
     heightMm: Math.max(0, options.pieceMaxMm.heightMm - margin),
   };
+  const grown = growPieces(faces, P, edges, sheet, tol);
+  const { tabsOf, labelsOf, taped } = glueCuts(grown, faces, P, edges, options.paperGsm, tol);
 
-  // 2. Grow pieces.
-  const placed: (Vec2Mm[] | null)[] = new Array(F).fill(null);
-  const pieceOf = new Int32Array(F).fill(-1);
+  // 4. Pieces in the engine's shape, and the fold-back check; model coordinates are made one piece at a time.
+  let deviation = 0;
+  const out: Piece[] = grown.pieces.map((piece, n) => {
+    const localId = new Map(piece.faces.map((f, i) => [f, i]));
+    const group = faces[piece.faces[0]!]!.group;
+    const name = options.groups[group] ?? 'Mesh';
+    const net = piece.faces.map((f): NetFace => ({ flatMm: grown.placed[f]!, modelMm: faces[f]!.loop.map(P) }));
+    const built = pieceFromNet({
+      id: `mesh-${n + 1}`,
+      partId: `mesh-part-${group + 1}`,
+      partKind: 'body',
+      label: `${name} ${n + 1}`,
+      assemblyStep: group + 1,
+      faces: net,
+      joints: piece.joints.map((j) => ({ parent: localId.get(j.parent)!, child: localId.get(j.child)! })),
+      tabs: tabsOf[n]!,
+      edgeLabels: labelsOf[n]!,
+    });
+    for (const folded of hingeTreeFold(built.hinge, 1)) {
+      const want = net[folded.id]!.modelMm;
+      folded.polygonMm.forEach((p, i) => {
+        const w = want[i]!;
+        deviation = Math.max(deviation, Math.hypot(p[0] - w[0], p[1] - w[1], p[2] - w[2]));
+      });
+    }
+    return built;
+  });
+  return {
+    pieces: out,
+    summary: {
+      faceCount: faces.length,
+      pieceCount: out.length,
+      cutLengthMm: out.reduce((s, p) => s + perimeter(p.outlineMm), 0),
+      tabCount: out.reduce((s, p) => s + p.tabs.length, 0),
+      tapedEdgeCount: taped,
+      oversizeFaceCount: grown.oversize,
+      foldBackDeviationMm: deviation,
+    },
+  };
+}
+
+interface Grown {
+  /** Each face's outline where it lies on the sheet. */
+  placed: Vec2Mm[][];
+  pieceOf: Int32Array;
+  pieces: { faces: number[]; joints: { parent: number; child: number }[] }[];
+  /** Each piece's triangles (and, once glued, tabs) for overlap searches. */
+  indexes: RBush<TriItem>[];
+  /** 1 for an edge that became a fold inside a piece. */
+  folded: Uint8Array;
+  oversize: number;
+}
+
+/** 2. Grow pieces along the fold forest. */
+function growPieces(
+  faces: MeshFace[],
+  P: (v: number) => Vec3Mm,
+  edges: FaceEdges,
+  sheet: MeshUnfoldOptions['pieceMaxMm'],
+  tol: number,
+): Grown {
+  const F = faces.length;
+  const tree = foldForest(faces, edges);
+  const grown: Grown = {
+    placed: new Array<Vec2Mm[]>(F),
+    pieceOf: new Int32Array(F).fill(-1),
+    pieces: [],
+    indexes: [],
+    folded: new Uint8Array(edges.count),
+    oversize: 0,
+  };
+  const { placed, pieceOf, pieces } = grown;
   const waiting = new Uint8Array(F);
-  const pieces: { faces: number[]; joints: { parent: number; child: number }[]; index: RBush<TriItem> }[] = [];
-  const jointEdges = new Set<Adjacent>();
-  let oversize = 0;
   for (let seed = 0; seed < F; seed++) {
     if (pieceOf[seed] !== -1) continue;
     const roots = [seed];
@@ -114,67 +171,79 @@ export function meshUnfold(positions: Float64Array, faces: MeshFace[], options: 
       const root = roots.pop()!;
       const id = pieces.length;
       const index = new RBush<TriItem>();
-      const piece = { faces: [root], joints: [] as { parent: number; child: number }[], index };
+      const piece = { faces: [root], joints: [] as { parent: number; child: number }[] };
       pieces.push(piece);
-      const rootFlat = local[root]!.loop;
-      placed[root] = rootFlat;
+      grown.indexes.push(index);
+      const rootFlat = layFlat(faces[root]!, P);
+      placed[root] = rootFlat.outline;
       pieceOf[root] = id;
-      const box = pointsBounds(rootFlat);
-      if (!fitsSheet(box, sheet)) oversize++;
-      index.load(triItems(root, local[root]!.tris, IDENTITY));
+      const box = pointsBounds(rootFlat.outline);
+      if (!fitsSheet(box, sheet)) grown.oversize++;
+      index.load(triItems(rootFlat.tris));
       for (let q = 0; q < piece.faces.length; q++) {
         const f = piece.faces[q]!;
-        for (const adj of tree[f]!) {
-          const [g, i, j] = adj.f === f ? [adj.g, adj.i, adj.j] : [adj.f, adj.j, adj.i];
+        for (let s = tree.start[f]!; s < tree.start[f + 1]!; s++) {
+          const e = tree.edge[s]!;
+          const [g, i, j] =
+            edges.f[e] === f ? [edges.g[e]!, edges.i[e]!, edges.j[e]!] : [edges.f[e]!, edges.j[e]!, edges.i[e]!];
           if (pieceOf[g] !== -1 || waiting[g]) continue;
-          const parentLoop = placed[f]!;
-          const a = parentLoop[i]!,
-            b = parentLoop[(i + 1) % parentLoop.length]!;
-          const gl = local[g]!;
-          // Child edge j runs b → a in its own plane.
-          const motion = rigidOnto(gl.loop[j]!, gl.loop[(j + 1) % gl.loop.length]!, b, a);
-          const loop = gl.loop.map((pt) => rigidApply(motion, pt));
-          loop[j] = b;
-          loop[(j + 1) % loop.length] = a;
-          const items = triItems(g, gl.tris, motion);
-          const grown = boundsUnion(box, pointsBounds(loop));
-          if (!fitsSheet(grown, sheet) || overlapsPiece(items, index, tol)) {
+          const [a, b] = edgeEnds(placed[f]!, i);
+          // Child edge j runs b → a.
+          const flat = layFlat(faces[g]!, P, { edge: j, from: b, to: a });
+          const items = triItems(flat.tris);
+          const bigger = boundsUnion(box, pointsBounds(flat.outline));
+          if (!fitsSheet(bigger, sheet) || overlapsPiece(items, index, tol)) {
             roots.push(g);
             waiting[g] = 1;
             continue;
           }
-          Object.assign(box, grown);
-          placed[g] = loop;
+          Object.assign(box, bigger);
+          placed[g] = flat.outline;
           pieceOf[g] = id;
           piece.faces.push(g);
           piece.joints.push({ parent: f, child: g });
-          jointEdges.add(adj);
+          grown.folded[e] = 1;
           index.load(items);
         }
       }
     }
   }
+  return grown;
+}
 
-  // 3. Glue on every cut edge.
-  const netFaces: NetFace[] = faces.map((face, f) => ({ flatMm: placed[f]!, modelMm: face.loop.map(P) }));
-  const tabsOf: NetTab[][] = pieces.map(() => []);
-  const labelsOf: EdgeLabel[][] = pieces.map(() => []);
+/**
+ * 3. Glue on every cut edge: a tab on one side, or both sides numbered for tape. Model coordinates are made
+ * for the edge's two faces only (the tab's fold angle needs them).
+ */
+function glueCuts(
+  grown: Grown,
+  faces: MeshFace[],
+  P: (v: number) => Vec3Mm,
+  edges: FaceEdges,
+  paperGsm: number,
+  tol: number,
+): { tabsOf: NetTab[][]; labelsOf: EdgeLabel[][]; taped: number } {
+  const { placed, pieceOf, indexes } = grown;
+  const tabsOf: NetTab[][] = grown.pieces.map(() => []);
+  const labelsOf: EdgeLabel[][] = grown.pieces.map(() => []);
   let number = 0;
   let taped = 0;
-  for (const adj of adjacent) {
-    if (jointEdges.has(adj)) continue;
+  for (let e = 0; e < edges.count; e++) {
+    if (grown.folded[e]) continue;
     number++;
-    const sides = [
-      { on: { face: adj.f, edge: adj.i }, partner: { face: adj.g, edge: adj.j } },
-      { on: { face: adj.g, edge: adj.j }, partner: { face: adj.f, edge: adj.i } },
+    // The edge's two sides, as faces 0 and 1 of a two-face net.
+    const faceIds = [edges.f[e]!, edges.g[e]!];
+    const net = faceIds.map((f): NetFace => ({ flatMm: placed[f]!, modelMm: faces[f]!.loop.map(P) }));
+    const sides: NetEdge[] = [
+      { face: 0, edge: edges.i[e]! },
+      { face: 1, edge: edges.j[e]! },
     ];
-    const want = paperTabDepthMm(options.paperGsm, adj.lengthMm);
-    let best: { side: (typeof sides)[number]; polygonMm: Vec2Mm[]; depthMm: number } | null = null;
-    for (const side of sides) {
-      const loop = placed[side.on.face]!;
-      const a = loop[side.on.edge]!,
-        b = loop[(side.on.edge + 1) % loop.length]!;
-      const index = pieces[pieceOf[side.on.face]!]!.index;
+    const pieceAt = (side: number) => pieceOf[faceIds[side]!]!;
+    const want = paperTabDepthMm(paperGsm, edges.lengthMm[e]);
+    let best: { side: number; polygonMm: Vec2Mm[]; depthMm: number } | null = null;
+    for (const side of [0, 1]) {
+      const [a, b] = edgeEnds(net[side]!.flatMm, sides[side]!.edge);
+      const index = indexes[pieceAt(side)]!;
       if (!tabCanReach(index, a, b, want * TAB_KEPT_SHARE_MIN, tol)) continue;
       const reach = tabReach(a, b, want);
       const near = index
@@ -187,78 +256,49 @@ export function meshUnfold(positions: Float64Array, faces: MeshFace[], options: 
     }
     if (!best || best.depthMm < want * TAB_KEPT_SHARE_MIN) {
       taped++;
-      for (const side of sides) labelsOf[pieceOf[side.on.face]!]!.push(netEdgeLabel(netFaces, side.on, number));
+      for (const side of [0, 1]) labelsOf[pieceAt(side)]!.push(netEdgeLabel(net, sides[side]!, number));
       continue;
     }
-    const { on, partner } = best.side;
-    const loop = placed[on.face]!;
-    const a = loop[on.edge]!,
-      b = loop[(on.edge + 1) % loop.length]!;
+    const on = best.side,
+      partner = 1 - on;
+    const [a, b] = edgeEnds(net[on]!.flatMm, sides[on]!.edge);
     const out = vec2Unit(vec2Sub(b, a));
     const labelAtMm = vec2Add(vec2Scale(vec2Add(a, b), 0.5), vec2Scale([out[1], -out[0]], best.depthMm / 2));
-    tabsOf[pieceOf[on.face]!]!.push({
+    tabsOf[pieceAt(on)]!.push({
       number,
       polygonMm: best.polygonMm,
       depthMm: best.depthMm,
       labelAtMm,
-      fold: { fromMm: a, toMm: b, angleRad: tabFoldAngle(netFaces, on, partner) },
+      fold: { fromMm: a, toMm: b, angleRad: tabFoldAngle(net, sides[on]!, sides[partner]!) },
     });
-    labelsOf[pieceOf[partner.face]!]!.push(netEdgeLabel(netFaces, partner, number));
-    const bb = pointsBounds(best.polygonMm);
-    pieces[pieceOf[on.face]!]!.index.insert({ ...bb, face: -1, tri: best.polygonMm });
+    labelsOf[pieceAt(partner)]!.push(netEdgeLabel(net, sides[partner]!, number));
+    indexes[pieceAt(on)]!.insert({ ...pointsBounds(best.polygonMm), tri: best.polygonMm });
   }
-
-  // 4. Pieces in the engine's shape, and the fold-back check.
-  const out: Piece[] = pieces.map((piece, n) => {
-    const localId = new Map(piece.faces.map((f, i) => [f, i]));
-    const group = faces[piece.faces[0]!]!.group;
-    const name = options.groups[group] ?? 'Mesh';
-    return pieceFromNet({
-      id: `mesh-${n + 1}`,
-      partId: `mesh-part-${group + 1}`,
-      partKind: 'body',
-      label: `${name} ${n + 1}`,
-      assemblyStep: group + 1,
-      faces: piece.faces.map((f) => netFaces[f]!),
-      joints: piece.joints.map((j) => ({ parent: localId.get(j.parent)!, child: localId.get(j.child)! })),
-      tabs: tabsOf[n]!,
-      edgeLabels: labelsOf[n]!,
-    });
-  });
-  let deviation = 0;
-  for (const [n, piece] of out.entries()) {
-    const model = pieces[n]!.faces.map((f) => netFaces[f]!.modelMm);
-    for (const folded of hingeTreeFold(piece.hinge, 1)) {
-      const want = model[folded.id]!;
-      folded.polygonMm.forEach((p, i) => {
-        const w = want[i]!;
-        deviation = Math.max(deviation, Math.hypot(p[0] - w[0], p[1] - w[1], p[2] - w[2]));
-      });
-    }
-  }
-  return {
-    pieces: out,
-    summary: {
-      faceCount: F,
-      pieceCount: out.length,
-      cutLengthMm: out.reduce((s, p) => s + perimeter(p.outlineMm), 0),
-      tabCount: out.reduce((s, p) => s + p.tabs.length, 0),
-      tapedEdgeCount: taped,
-      oversizeFaceCount: oversize,
-      foldBackDeviationMm: deviation,
-    },
-  };
+  return { tabsOf, labelsOf, taped };
 }
 
-interface FaceLocal {
-  loop: Vec2Mm[];
-  /** The face's triangles in its own plane, three points each. */
+const edgeEnds = (loop: Vec2Mm[], edge: number): [Vec2Mm, Vec2Mm] => [loop[edge]!, loop[(edge + 1) % loop.length]!];
+
+interface FlatFace {
+  /** The outline, counter-clockwise. */
+  outline: Vec2Mm[];
+  /** The triangles, three corners each, sharing the outline's points; a one-triangle face's is its outline. */
   tris: Vec2Mm[][];
 }
 
-/** The face in its own plane: origin at its first outline vertex, x along xAxis, y = normal × x. */
-function faceLocal(face: MeshFace, P: (v: number) => Vec3Mm): FaceLocal {
-  const o = P(face.loop[0]!);
+/**
+ * The face laid flat, one point per vertex: in its own plane (origin at its first outline vertex, x along
+ * xAxis, y = normal × x), or, given `onto`, turned and moved so that outline edge `onto.edge` runs from
+ * `onto.from` to `onto.to`, those two corners being the very points given. Triangle vertices off the outline
+ * (inside a merged face, or dropped from a straight edge) get points of their own after the outline's.
+ */
+function layFlat(
+  face: MeshFace,
+  P: (v: number) => Vec3Mm,
+  onto?: { edge: number; from: Vec2Mm; to: Vec2Mm },
+): FlatFace {
+  const { loop, triangles } = face;
+  const o = P(loop[0]!);
   const n = face.normal,
     x = face.xAxis;
   const y: Vec3Mm = [n[1] * x[2] - n[2] * x[1], n[2] * x[0] - n[0] * x[2], n[0] * x[1] - n[1] * x[0]];
@@ -267,64 +307,29 @@ function faceLocal(face: MeshFace, P: (v: number) => Vec3Mm): FaceLocal {
     const d = [p[0] - o[0], p[1] - o[1], p[2] - o[2]] as const;
     return [d[0] * x[0] + d[1] * x[1] + d[2] * x[2], d[0] * y[0] + d[1] * y[1] + d[2] * y[2]];
   };
-  const tris: Vec2Mm[][] = [];
-  for (let t = 0; t < face.triangles.length; t += 3)
-    tris.push([flat(face.triangles[t]!), flat(face.triangles[t + 1]!), flat(face.triangles[t + 2]!)]);
-  return { loop: face.loop.map(flat), tris };
-}
-
-/** Every pair of face edges that are one edge of the mesh (the second runs the other way). */
-function faceAdjacency(faces: MeshFace[], vertexCount: number, P: (v: number) => Vec3Mm): Adjacent[] {
-  const byEdge = new Map<number, [number, number]>();
-  faces.forEach((face, f) => {
-    const L = face.loop;
-    for (let i = 0; i < L.length; i++) byEdge.set(L[i]! * vertexCount + L[(i + 1) % L.length]!, [f, i]);
-  });
-  const out: Adjacent[] = [];
-  faces.forEach((face, f) => {
-    const L = face.loop;
-    for (let i = 0; i < L.length; i++) {
-      const a = L[i]!,
-        b = L[(i + 1) % L.length]!;
-      const other = byEdge.get(b * vertexCount + a);
-      if (!other || other[0] <= f) continue;
-      const [g, j] = other;
-      const pa = P(a),
-        pb = P(b);
-      const lengthMm = Math.hypot(pb[0] - pa[0], pb[1] - pa[1], pb[2] - pa[2]);
-      const nf = face.normal,
-        ng = faces[g]!.normal;
-      const cos = nf[0] * ng[0] + nf[1] * ng[1] + nf[2] * ng[2];
-      out.push({ f, i, g, j, lengthMm, weight: (lengthMm * (1 + cos)) / 2 });
-    }
-  });
-  return out;
-}
-
-/** Kruskal's maximum spanning forest over faces of one group; tree edges listed per face. */
-function foldForest(F: number, adjacent: Adjacent[], faces: MeshFace[]): Adjacent[][] {
-  const parent = new Int32Array(F);
-  for (let i = 0; i < F; i++) parent[i] = i;
-  const find = (x: number): number => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]!]!;
-    return x;
-  };
-  const tree: Adjacent[][] = Array.from({ length: F }, () => []);
-  const order = [...adjacent].sort((p, q) => q.weight - p.weight);
-  for (const e of order) {
-    if (faces[e.f]!.group !== faces[e.g]!.group) continue;
-    const rf = find(e.f),
-      rg = find(e.g);
-    if (rf === rg) continue;
-    parent[rf] = rg;
-    tree[e.f]!.push(e);
-    tree[e.g]!.push(e);
+  const single = triangles.length === 3 && loop.length === 3 && triangles.every((v, i) => v === loop[i]);
+  const vertices = [...loop];
+  const corner = new Map<number, number>();
+  if (!single) {
+    loop.forEach((v, i) => corner.set(v, i));
+    for (const v of triangles) if (!corner.has(v)) corner.set(v, vertices.push(v) - 1);
   }
-  return tree;
+  const points = vertices.map(flat);
+  if (onto) {
+    const j = onto.edge,
+      j1 = (j + 1) % loop.length;
+    const motion = rigidOnto(points[j]!, points[j1]!, onto.from, onto.to);
+    points.forEach((p, c) => (points[c] = c === j ? onto.from : c === j1 ? onto.to : rigidApply(motion, p)));
+  }
+  const outline = points.length === loop.length ? points : points.slice(0, loop.length);
+  if (single) return { outline, tris: [outline] };
+  const tris: Vec2Mm[][] = [];
+  for (let t = 0; t < triangles.length; t += 3)
+    tris.push([0, 1, 2].map((c) => points[corner.get(triangles[t + c]!)!]!));
+  return { outline, tris };
 }
 
 type Rigid = { c: number; s: number; tx: number; ty: number };
-const IDENTITY: Rigid = { c: 1, s: 0, tx: 0, ty: 0 };
 
 /** The rotation + translation taking p0 → q0 and the direction p0→p1 onto q0→q1. */
 function rigidOnto(p0: Vec2Mm, p1: Vec2Mm, q0: Vec2Mm, q1: Vec2Mm): Rigid {
@@ -336,11 +341,8 @@ function rigidOnto(p0: Vec2Mm, p1: Vec2Mm, q0: Vec2Mm, q1: Vec2Mm): Rigid {
 
 const rigidApply = (m: Rigid, p: Vec2Mm): Vec2Mm => [m.c * p[0] - m.s * p[1] + m.tx, m.s * p[0] + m.c * p[1] + m.ty];
 
-function triItems(face: number, tris: Vec2Mm[][], m: Rigid): TriItem[] {
-  return tris.map((t) => {
-    const tri = t.map((p) => rigidApply(m, p));
-    return { ...pointsBounds(tri), face, tri };
-  });
+function triItems(tris: Vec2Mm[][]): TriItem[] {
+  return tris.map((tri) => ({ ...pointsBounds(tri), tri }));
 }
 
 function overlapsPiece(items: TriItem[], index: RBush<TriItem>, tol: number): boolean {
