@@ -90,6 +90,8 @@ export function meshUnfold(positions: Float64Array, faces: MeshFace[], options: 
   };
   const grown = growPieces(faces, P, edges, sheet, tol);
   const { tabsOf, labelsOf, taped } = glueCuts(grown, faces, P, edges, options.paperGsm, tol);
+  // The overlap indexes are done with: let them go before the pieces are built, when the most is live.
+  grown.indexes.length = 0;
 
   // 4. Pieces in the engine's shape, and the fold-back check; model coordinates are made one piece at a time.
   let deviation = 0;
@@ -179,7 +181,7 @@ function growPieces(
       pieceOf[root] = id;
       const box = pointsBounds(rootFlat.outline);
       if (!fitsSheet(box, sheet)) grown.oversize++;
-      index.load(triItems(rootFlat.tris));
+      index.load(rootFlat.tris.map(triItem));
       for (let q = 0; q < piece.faces.length; q++) {
         const f = piece.faces[q]!;
         for (let s = tree.start[f]!; s < tree.start[f + 1]!; s++) {
@@ -190,7 +192,7 @@ function growPieces(
           const [a, b] = edgeEnds(placed[f]!, i);
           // Child edge j runs b → a.
           const flat = layFlat(faces[g]!, P, { edge: j, from: b, to: a });
-          const items = triItems(flat.tris);
+          const items = flat.tris.map(triItem);
           const bigger = boundsUnion(box, pointsBounds(flat.outline));
           if (!fitsSheet(bigger, sheet) || overlapsPiece(items, index, tol)) {
             roots.push(g);
@@ -272,7 +274,7 @@ function glueCuts(
       fold: { fromMm: a, toMm: b, angleRad: tabFoldAngle(net, sides[on]!, sides[partner]!) },
     });
     labelsOf[pieceAt(partner)]!.push(netEdgeLabel(net, sides[partner]!, number));
-    indexes[pieceAt(on)]!.insert({ ...pointsBounds(best.polygonMm), tri: best.polygonMm });
+    indexes[pieceAt(on)]!.insert(triItem(best.polygonMm));
   }
   return { tabsOf, labelsOf, taped };
 }
@@ -341,8 +343,13 @@ function rigidOnto(p0: Vec2Mm, p1: Vec2Mm, q0: Vec2Mm, q1: Vec2Mm): Rigid {
 
 const rigidApply = (m: Rigid, p: Vec2Mm): Vec2Mm => [m.c * p[0] - m.s * p[1] + m.tx, m.s * p[0] + m.c * p[1] + m.ty];
 
-function triItems(tris: Vec2Mm[][]): TriItem[] {
-  return tris.map((tri) => ({ ...pointsBounds(tri), tri }));
+/**
+ * The index entry of a triangle or tab. Its fields are written out, not spread from pointsBounds: V8 gave
+ * every spread copy a hidden class of its own, some 200 bytes more per triangle.
+ */
+function triItem(tri: Vec2Mm[]): TriItem {
+  const { minX, minY, maxX, maxY } = pointsBounds(tri);
+  return { minX, minY, maxX, maxY, tri };
 }
 
 function overlapsPiece(items: TriItem[], index: RBush<TriItem>, tol: number): boolean {
