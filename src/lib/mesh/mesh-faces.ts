@@ -27,7 +27,7 @@ const COLLINEAR_RELATIVE = 1e-9;
 export interface MeshFace {
   /** The outline, counter-clockwise seen from outside. */
   loop: number[];
-  /** The face's triangles (vertex ids, three each), covering the outline. */
+  /** The face's triangles (vertex ids, three each), covering the outline; a face that is one triangle shares `loop`. */
   triangles: number[];
   group: number;
   /** Unit normal (area-weighted) and a unit x axis in the face's plane; flat y = normal × x. */
@@ -90,16 +90,24 @@ export function meshFaces(mesh: ParsedMesh, angleDeg = MESH_COPLANAR_ANGLE_DEG):
   }
   const dissolve = dissolvableVertices(tr, edges.partner, region, p);
   return finalRegions.map((members, id) => {
-    const loop = loops[id]!.filter((v) => !dissolve[v]);
+    const outline = loops[id]!;
+    const loop = outline.some((v) => dissolve[v]) ? outline.filter((v) => !dissolve[v]) : outline;
     const normal = regionNormal(normals, p, tr, members);
     return {
       loop,
-      triangles: members.flatMap((t) => [tr[t * 3]!, tr[t * 3 + 1]!, tr[t * 3 + 2]!]),
+      triangles: loop === outline && members.length === 1 ? loop : regionTriangles(tr, members),
       group: mesh.triangleGroup[members[0]!]!,
       normal,
       xAxis: planeAxis(p, loop, normal),
     };
   });
+}
+
+/** The region's triangles' vertex ids, three each. */
+function regionTriangles(tr: Uint32Array, members: number[]): number[] {
+  const out: number[] = [];
+  for (const t of members) out.push(tr[t * 3]!, tr[t * 3 + 1]!, tr[t * 3 + 2]!);
+  return out;
 }
 
 /** The region's boundary half-edges chained into one loop, or null if they form several loops or pinch. */
@@ -128,21 +136,27 @@ function regionLoop(members: number[], tr: Uint32Array, partner: Int32Array, reg
 /** Vertices with exactly two face-boundary edges, in a straight line: the middle of a fold or a free edge. */
 function dissolvableVertices(tr: Uint32Array, partner: Int32Array, region: Int32Array, p: Float64Array): Uint8Array {
   const vertexCount = p.length / 3;
-  const boundary: number[][] = Array.from({ length: vertexCount }, () => []);
+  // Per vertex: how many face-boundary edges meet there, and the far ends of the first two.
+  const degree = new Int32Array(vertexCount);
+  const ends = new Int32Array(vertexCount * 2);
+  const link = (v: number, w: number) => {
+    if (degree[v]! < 2) ends[v * 2 + degree[v]!] = w;
+    degree[v]!++;
+  };
   for (let h = 0; h < tr.length; h++) {
     const o = partner[h]!;
     const t = Math.floor(h / 3);
     if (o >= 0 && (region[Math.floor(o / 3)] === region[t] || o < h)) continue;
     const a = tr[h]!,
       b = tr[t * 3 + ((h + 1) % 3)]!;
-    boundary[a]!.push(b);
-    boundary[b]!.push(a);
+    link(a, b);
+    link(b, a);
   }
   const out = new Uint8Array(vertexCount);
   for (let v = 0; v < vertexCount; v++) {
-    const nb = boundary[v]!;
-    if (nb.length !== 2) continue;
-    const [a, b] = nb as [number, number];
+    if (degree[v] !== 2) continue;
+    const a = ends[v * 2]!,
+      b = ends[v * 2 + 1]!;
     const ux = p[v * 3]! - p[a * 3]!,
       uy = p[v * 3 + 1]! - p[a * 3 + 1]!,
       uz = p[v * 3 + 2]! - p[a * 3 + 2]!;
