@@ -2,9 +2,11 @@
  * Puts the request id and the actor (account with role, class session, or anonymous) on Astro.locals, refuses
  * cross-site state-changing requests (src/lib/http/origin-check.ts) before any route runs, and turns anything an
  * API route failed to catch into the JSON 500 with that request id, and a method an API route does not answer into
- * a JSON 405 with Allow. Nothing else.
+ * a JSON 405 with Allow. Nothing else. Astro runs it for pages (and for everything under the dev server); the
+ * production server's own API path (src/server/api-serve.ts) runs the same `requestHandle`.
  */
 import { defineMiddleware } from 'astro:middleware';
+import { API_MODULES } from './api-modules';
 import { actorResolve } from './lib/auth/actor-resolve.server';
 import { originAllowedHostnames, originVerdict } from './lib/http/origin-check';
 import { errorResponse, errorToResponse } from './lib/http/respond';
@@ -12,27 +14,26 @@ import { requestIdNew } from './lib/http/request-id';
 import { cspStyleHashesDropped, pageSecurityHeaders } from './lib/http/security-headers';
 import { routeMethodsAllowed, routeModulePaths, routeUrlMalformed } from './lib/http/route-methods';
 import { InputError, MethodNotAllowedError, NotFoundError } from './lib/errors';
+import { requestHead, type RequestContext } from './lib/http/request-context';
 import { serverConfig } from './lib/server-config';
-
-/** The API route modules, loaded only to name a route's methods in a 405 (the route itself is loaded already). */
-const API_MODULES = import.meta.glob<Record<string, unknown>>('./pages/api/**/*.ts');
 
 // Read once, as astro.config.mjs does for the adapter's host handling: a bad SITE_URL fails at start, not per request.
 const ALLOWED_HOSTNAMES = originAllowedHostnames(serverConfig('SITE_URL'));
 const PAGE_SECURITY_HEADERS = Object.entries(pageSecurityHeaders(serverConfig('SITE_URL')));
 
-export const onRequest = defineMiddleware(async (context, next) => {
+/**
+ * The middleware's work on one request; `next` runs the route. A route that does not export the request's method
+ * answers, as Astro's routing does, an empty 404, which becomes the JSON 405 here.
+ */
+export async function requestHandle(context: RequestContext, next: () => Promise<Response>): Promise<Response> {
   const requestId = requestIdNew();
   context.locals.requestId = requestId;
+  const { method, headers } = requestHead(context);
   const isApi = context.url.pathname.startsWith('/api/');
-  const unrouted = isApi ? apiUnrouted(context.url, context.request.method, context.routePattern) : null;
+  const unrouted = isApi ? apiUnrouted(context.url, method, context.routePattern) : null;
   if (unrouted) return answerStamped(errorToResponse(unrouted, requestId), requestId);
-  const verdict = originVerdict(
-    { method: context.request.method, url: context.url, headers: context.request.headers },
-    ALLOWED_HOSTNAMES,
-  );
-  if (!verdict.allowed)
-    return crossSiteResponse(context.request.method, context.url, verdict.received, isApi, requestId);
+  const verdict = originVerdict({ method, url: context.url, headers }, ALLOWED_HOSTNAMES);
+  if (!verdict.allowed) return crossSiteResponse(method, context.url, verdict.received, isApi, requestId);
   try {
     // A printed live link answers without a session lookup (its page reads no actor).
     context.locals.actor = context.url.pathname.startsWith('/go/')
@@ -41,7 +42,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
     let response = await next();
     // Astro answers a method the route does not export with an empty 404 and then renders the HTML 404 page.
     if (isApi && response.status === 404 && response.body === null)
-      response = errorToResponse(await methodNotAllowed(context.request.method, context.routePattern), requestId);
+      response = errorToResponse(await methodNotAllowed(method, context.routePattern), requestId);
     return answerStamped(response, requestId);
   } catch (err) {
     if (isApi) return errorToResponse(err, requestId);
@@ -51,7 +52,9 @@ export const onRequest = defineMiddleware(async (context, next) => {
       headers: { 'content-type': 'text/plain; charset=utf-8', 'x-request-id': requestId },
     });
   }
-});
+}
+
+export const onRequest = defineMiddleware((context, next) => requestHandle(context, () => next()));
 
 /**
  * Stamps the request id and the security headers of src/lib/http/security-headers.ts on an answer (a header a

@@ -7,22 +7,21 @@
  * 1. Static files of the build (`dist/client`) through sirv, which lists the folder once at start: API and page
  *    routes never stat the disk. It answers the `.br`/`.gz` twins written at build (config/precompress.mjs) to
  *    clients that accept them; `/_astro/*` names carry a content hash, so they are cached as immutable.
- * 2. Everything else through compression (brotli or gzip as the client accepts), flushed after every write of a
- *    streamed NDJSON answer so each stage line reaches the client when it happens, then into Astro.
+ * 2. Everything else through compression (./compress.ts), then into Astro.
  * 3. The client's address is the socket's: an X-Forwarded-For header is dropped before Astro reads it (Astro
  *    would report its leftmost entry as clientAddress) unless TRUST_PROXY says proxies of ours put it there.
  * 4. A live link's `/go/CODE` is answered before all of that (./live-link-redirect.ts): one query, one 302.
- * 5. Under /api/ every answer is JSON, also where Astro is never asked (src/lib/http/raw-target.ts): a target whose
+ * 5. Under /api/ a request goes to its route module through our own API path (./api-serve.ts), not through
+ *    Astro's page pipeline, and skips the static files; that path compresses what is worth compressing.
+ * 6. Under /api/ every answer is JSON, also where Astro is never asked (src/lib/http/raw-target.ts): a target whose
  *    encoded dot segments climb out of /api/ is a JSON 404, and a request node:http cannot parse a JSON 400/431.
  *    An absolute-form target (`GET http://host/path`) is served as its path; one that is no path at all is a 400.
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import { fileURLToPath } from 'node:url';
-import compression from 'compression';
 import sirv from 'sirv';
 import { trustedProxyHops } from '../lib/auth/client-ip.server';
 import { jobWorkerStart } from '../lib/jobs/worker.server';
-import { PROGRESS_CONTENT_TYPE } from '../lib/http/progress-lines';
 import {
   clientErrorAnswer,
   rawTargetAnswer,
@@ -32,6 +31,8 @@ import {
 } from '../lib/http/raw-target';
 import { requestIdNew } from '../lib/http/request-id';
 import { pageSecurityHeaders } from '../lib/http/security-headers';
+import { apiServe } from './api-serve';
+import { compressed } from './compress';
 import { liveLinkRedirect } from './live-link-redirect';
 import { serverConfig } from '../lib/server-config';
 
@@ -60,25 +61,6 @@ const assets = sirv(clientDir, {
       pathname.startsWith('/_astro/') ? IMMUTABLE_CACHE_CONTROL : REVALIDATE_CACHE_CONTROL,
     ),
 });
-
-const compress = compression({
-  // Tiny bodies (most JSON errors) cost more to compress than they save; 1 kB is the middleware's own default. The
-  // middleware can only see the size of an answer that states its Content-Length, as the API's JSON does (respond.ts).
-  threshold: 1024,
-  // The media-type list the middleware consults does not know NDJSON; its result line holds every sheet's SVG.
-  filter: (req, res) =>
-    String(res.getHeader('content-type') ?? '').startsWith(PROGRESS_CONTENT_TYPE) || compression.filter(req, res),
-});
-
-/** Flushes the compressor after each write of a streamed progress answer, so no stage line waits in a buffer. */
-function flushStreamedLines(res: ServerResponse & { flush?: () => void }): void {
-  const write = res.write.bind(res) as (...args: unknown[]) => boolean;
-  res.write = ((...args: unknown[]) => {
-    const ok = write(...args);
-    if (String(res.getHeader('content-type') ?? '').startsWith(PROGRESS_CONTENT_TYPE)) res.flush?.();
-    return ok;
-  }) as ServerResponse['write'];
-}
 
 const SECURITY_HEADERS = pageSecurityHeaders(serverConfig('SITE_URL'));
 
@@ -113,13 +95,9 @@ const hops = trustedProxyHops();
 const server = createServer((req, res) => {
   if (hops === 0) delete req.headers['x-forwarded-for'];
   if (targetRefused(req, res)) return;
+  if (req.url!.startsWith('/api/')) return void apiServe(req, res);
   liveLinkRedirect(req, res, SECURITY_HEADERS, () =>
-    assets(req, res, () => {
-      compress(req as Parameters<typeof compress>[0], res as Parameters<typeof compress>[1], () => {
-        flushStreamedLines(res);
-        void astro(req, res);
-      });
-    }),
+    assets(req, res, () => compressed(req, res, () => void astro(req, res))),
   );
 });
 

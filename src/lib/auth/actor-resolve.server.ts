@@ -3,15 +3,15 @@
  * past half its life, cookie re-sent), else a student class session (token hashed and looked up), else
  * anonymous. A deactivated account's sessions are ended on sight.
  */
-import type { APIContext } from 'astro';
 import { classSessionClassId } from '../db/classes';
+import type { RequestContext } from '../http/request-context';
 import type { Actor } from './actor';
 import { CLASS_SESSION_COOKIE } from './cookies';
 import { lucia } from './lucia.server';
 import { userSessionCookieRefresh, userSessionsEndAll } from './session.server';
 import { tokenHash } from './tokens.server';
 
-export async function actorResolve(context: Pick<APIContext, 'cookies' | 'request' | 'url'>): Promise<Actor> {
+export async function actorResolve(context: Pick<RequestContext, 'cookies'>): Promise<Actor> {
   const sessionId = context.cookies.get(lucia().sessionCookieName)?.value ?? null;
   if (sessionId) {
     const { session, user } = await lucia().validateSession(sessionId);

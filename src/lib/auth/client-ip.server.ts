@@ -6,7 +6,7 @@
  * entry as clientAddress (astro/dist/core/app/node.js), and a forged header must not move a caller into a
  * bucket of its own.
  */
-import type { APIContext } from 'astro';
+import type { RequestContext } from '../http/request-context';
 import { serverConfig } from '../server-config';
 
 /** How many proxies of ours stand in front (TRUST_PROXY); 0 when unset or not a whole number ≥ 1. */
@@ -15,7 +15,7 @@ export function trustedProxyHops(): number {
 }
 
 /** The address to count attempts against; "unknown" when the adapter cannot tell. */
-export function clientIp(context: Pick<APIContext, 'clientAddress' | 'request'>): string {
+export function clientIp(context: Pick<RequestContext, 'clientAddress' | 'request'>): string {
   const hops = trustedProxyHops();
   if (hops >= 1) {
     const chain = (context.request.headers.get('x-forwarded-for') ?? '')

@@ -2,7 +2,8 @@
  * Starting and ending the two kinds of session on a request: lucia sessions of accounts and class sessions of
  * student devices. Cookies are HttpOnly, SameSite=Lax, Secure outside local development, path "/".
  */
-import type { APIContext, AstroCookieSetOptions } from 'astro';
+import type { AstroCookieSetOptions } from 'astro';
+import type { RequestContext } from '../http/request-context';
 import { accountSignInDayRecord } from '../db/account-sign-in-days';
 import { classSessionDelete, classSessionInsert } from '../db/classes';
 import { CLASS_SESSION_COOKIE, CLASS_SESSION_HOURS, cookieSecure } from './cookies';
@@ -10,7 +11,7 @@ import { lucia } from './lucia.server';
 import { tokenHash, tokenNew } from './tokens.server';
 import { serverConfig } from '../server-config';
 
-type CookieContext = Pick<APIContext, 'cookies'>;
+type CookieContext = Pick<RequestContext, 'cookies'>;
 
 function luciaCookieSet(context: CookieContext, cookie: { name: string; value: string; attributes: object }) {
   context.cookies.set(cookie.name, cookie.value, cookie.attributes as AstroCookieSetOptions);

@@ -3,10 +3,10 @@
  * the shared JSON error shape (src/lib/http/respond.ts). A route declares its audiences once, here, so
  * the authorization matrix test can read them and nothing else decides access.
  */
-import type { APIContext, APIRoute } from 'astro';
 import { actorAdmitted, type Audience } from '../auth/actor';
 import { AuthenticationError, ForbiddenError } from '../errors';
 import { errorToResponse, json } from './respond';
+import type { RequestContext } from './request-context';
 
 export interface EndpointOptions {
   /** Who may call the route. */
@@ -14,10 +14,13 @@ export interface EndpointOptions {
 }
 
 /** A handler returns a Response, or plain data that is sent as JSON 200. */
-export type EndpointHandler = (context: APIContext) => Promise<Response | unknown> | Response | unknown;
+export type EndpointHandler = (context: RequestContext) => Promise<Response | unknown> | Response | unknown;
 
-/** Builds an Astro API route from its access rule and handler. */
-export function endpoint(options: EndpointOptions, handler: EndpointHandler): APIRoute {
+/** An API route's exported method: Astro calls it with its APIContext, the server's API path with a RequestContext. */
+export type RouteMethod = (context: RequestContext) => Promise<Response>;
+
+/** Builds an API route's method from its access rule and handler. */
+export function endpoint(options: EndpointOptions, handler: EndpointHandler): RouteMethod {
   return async (context) => {
     const requestId = context.locals.requestId;
     try {

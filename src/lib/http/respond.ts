@@ -3,6 +3,7 @@
  * shape `{ error: { code, message, fields?, requestId? } }`; unexpected errors are logged with a request id
  * and answered 500 with that id, never a stack trace.
  */
+import { BytesResponse } from './bytes-response';
 import { AppError, InputError, MethodNotAllowedError, PayloadTooLargeError, RetryLaterError } from '../errors';
 
 export interface ErrorBody {
@@ -13,11 +14,12 @@ const JSON_HEADERS = { 'content-type': 'application/json; charset=utf-8', 'cache
 
 /**
  * A JSON response with the given status, and its Content-Length: without one node sends the body chunked, a
- * chunk header and a last empty chunk around every answer (RFC 9112 §7.1).
+ * chunk header and a last empty chunk around every answer (RFC 9112 §7.1). Its bytes are known at once, so it is
+ * a BytesResponse (./bytes-response.ts).
  */
 export function json(data: unknown, status = 200, headers: Record<string, string> = {}): Response {
   const bytes = new TextEncoder().encode(JSON.stringify(data) ?? '');
-  return new Response(bytes, {
+  return new BytesResponse(bytes, {
     status,
     headers: { ...JSON_HEADERS, 'content-length': String(bytes.byteLength), ...headers },
   });

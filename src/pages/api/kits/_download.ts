@@ -1,10 +1,10 @@
-import type { APIContext } from 'astro';
 import { siteUrl } from '../../../lib/auth/site-url';
 import type { KitOutput } from '../../../lib/kit/build-kit';
 import { kitFileResponse } from '../../../lib/kit/kit-files.server';
 import { kitOutputBuild } from '../../../lib/kit/kit-build.server';
 import { kitQrUrl, kitRequestForRow, kitVisible } from '../../../lib/kit/saved-kit.server';
 import { endpoint } from '../../../lib/http/endpoint';
+import type { RequestContext } from '../../../lib/http/request-context';
 import { KIT_VIEWERS } from './_access';
 
 /**
@@ -13,7 +13,7 @@ import { KIT_VIEWERS } from './_access';
  * once that link is retired.
  */
 export function kitDownloadRoute(output: KitOutput) {
-  return endpoint({ access: KIT_VIEWERS }, async (context: APIContext) => {
+  return endpoint({ access: KIT_VIEWERS }, async (context: RequestContext) => {
     const row = await kitVisible(context.locals.actor, context.params.id ?? '');
     const request = { ...(await kitRequestForRow(row)), qrUrl: await kitQrUrl(row, siteUrl(context.url)) };
     const { build } = await kitOutputBuild(request, output, { signal: context.request.signal });
