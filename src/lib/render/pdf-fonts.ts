@@ -6,9 +6,11 @@
  * two distinct subset fonts, not two fonts of one name.
  *
  * The font files are turned into the form jspdf reads (a binary string) once per byte array and kept, so a
- * process or worker that builds many PDFs from the same PdfFonts prepares them once.
+ * process or worker that builds many PDFs from the same PdfFonts prepares them once; the subset programs
+ * embedded at output are kept too (pdf-font-subsets.ts).
  */
 import type { jsPDF } from 'jspdf';
+import { pdfFontSubsetsShare } from './pdf-font-subsets';
 
 export interface PdfFonts {
   /** KitwrightSans-Regular.ttf, the whole file. */
@@ -50,6 +52,8 @@ export function pdfFontsAdd(doc: jsPDF, fonts: PdfFonts): void {
     const file = `${PDF_FONT_NAMES[style]}.ttf`;
     doc.addFileToVFS(file, pdfFontFile(bytes));
     doc.addFont(file, PDF_FONT_NAMES[style], style, 'Identity-H');
+    doc.setFont(PDF_FONT_NAMES[style], style);
+    pdfFontSubsetsShare(doc, bytes);
   }
   pdfFontUse(doc, false);
 }

@@ -117,6 +117,45 @@ describe('PDF fonts', () => {
     );
   });
 
+  test('a document using the glyphs of an earlier one embeds the same program without rebuilding it', async () => {
+    // Fresh arrays, so no program is kept for them yet.
+    const own = { fontRegular: new Uint8Array(fonts.fontRegular), fontBold: new Uint8Array(fonts.fontBold) };
+    const pdfOf = (text: string, register: (doc: jsPDF) => void) => {
+      const doc = new jsPDF({ unit: 'mm', format: 'letter', compress: true, putOnlyUsedFonts: true });
+      register(doc);
+      doc.text(text, 20, 20);
+      return new Uint8Array(doc.output('arraybuffer'));
+    };
+    const shared = (doc: jsPDF) => pdfFontsAdd(doc, own);
+    // jspdf's own subsetting, nothing kept between documents.
+    const unshared = (doc: jsPDF) => {
+      doc.addFileToVFS('r.ttf', Buffer.from(own.fontRegular).toString('latin1'));
+      doc.addFont('r.ttf', PDF_FONT_NAMES.normal, 'normal', 'Identity-H');
+      doc.setFont(PDF_FONT_NAMES.normal, 'normal');
+    };
+    // jspdf's subset builder, watched from before the first document registers the faces.
+    const probe = new jsPDF();
+    shared(probe);
+    const builder = Object.getPrototypeOf((probe.getFont().metadata as { subset: object }).subset) as {
+      encode: () => unknown;
+    };
+    const builds = vi.spyOn(builder, 'encode');
+    try {
+      const [first] = await embeddedFontPrograms(pdfOf('Step 12: fold A', shared));
+      expect(builds).toHaveBeenCalledTimes(1);
+      const [again] = await embeddedFontPrograms(pdfOf('fold A: Step 21', shared));
+      expect(builds).toHaveBeenCalledTimes(1);
+      expect(again).toEqual(first);
+      // Other glyphs get their own program, byte for byte the one jspdf builds unshared.
+      const [other] = await embeddedFontPrograms(pdfOf('Valley 7', shared));
+      expect(builds).toHaveBeenCalledTimes(2);
+      expect(other).not.toEqual(first);
+      expect(other).toEqual((await embeddedFontPrograms(pdfOf('Valley 7', unshared)))[0]);
+    } finally {
+      builds.mockRestore();
+    }
+  });
+
   test("turns each font file into jspdf's form once per process or worker, not once per document", async () => {
     // kitFonts hands every build of a process (a pool worker is one) the same byte arrays.
     const [first, second] = await Promise.all([kitFonts(), kitFonts()]);
