@@ -14,6 +14,8 @@ import type { PdfFonts } from './pdf-fonts';
 import { sheetScene } from './sheet-scene';
 import type { SceneText } from './scene-types';
 import { instructionsPages, type InstructionsPage } from './instructions-page';
+import type { LabelMeasure } from './label-placement';
+import { pdfTextMeasure } from './pdf-text-measure';
 
 export type { PdfFonts } from './pdf-fonts';
 const PT_PER_MM = 72 / 25.4;
@@ -35,11 +37,7 @@ export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
     subject: `Paper model kit, scale 1:${kit.scaleDenominator}`,
     creator: `Kitwright engine ${kit.engineVersion}`,
   });
-  const measure = (text: string, sizeMm: number, bold: boolean) => {
-    pdfFontUse(doc, bold);
-    doc.setFontSize(sizeMm * PT_PER_MM);
-    return doc.getTextWidth(text);
-  };
+  const measure = pdfTextMeasure(doc, fonts);
   const pageSize = first ?? kit.sheetSize;
   const instructions = instructionsPages(kit, pageSize, measure);
   let pages = 0;
@@ -49,25 +47,21 @@ export function pdfKit(kit: KitLayout, fonts: PdfFonts): Uint8Array {
   const drawInstructions = () =>
     instructions.forEach((page) => {
       addPage(pageFormat(pageSize));
-      pdfInstructionsPage(doc, page);
+      pdfInstructionsPage(doc, page, measure);
     });
   if (kit.instructionsAt === 'first') drawInstructions();
   kit.sheets.forEach((sheet) => {
     addPage(pageFormat(sheet));
-    pdfSheet(doc, kit, sheet);
+    pdfSheet(doc, kit, sheet, measure);
   });
   if (kit.instructionsAt !== 'first') drawInstructions();
   return new Uint8Array(doc.output('arraybuffer'));
 }
 
-function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
+function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet, measure: LabelMeasure) {
   const byId = new Map(kit.pieces.map((p) => [p.id, p]));
   // Labels are laid out with the embedded font's own advance widths (jspdf's getTextWidth, in mm).
-  const scene = sheetScene(kit, sheet, (text, sizeMm, bold) => {
-    pdfFontUse(doc, bold);
-    doc.setFontSize(sizeMm * PT_PER_MM);
-    return doc.getTextWidth(text);
-  });
+  const scene = sheetScene(kit, sheet, measure);
   doc.setLineJoin('round');
   for (const placement of sheet.placements) {
     const piece = byId.get(placement.pieceId);
@@ -92,15 +86,15 @@ function pdfSheet(doc: jsPDF, kit: KitLayout, sheet: LaidOutSheet) {
     for (const r of fill.rects) doc.rect(r.xMm, r.yMm, r.widthMm, r.heightMm, 'F');
   }
   for (const stroke of scene.strokes) pdfPolylines(doc, [stroke.points], stroke);
-  pdfTexts(doc, scene.texts);
+  pdfTexts(doc, scene.texts, measure);
 }
 
-function pdfTexts(doc: jsPDF, texts: readonly SceneText[]) {
+function pdfTexts(doc: jsPDF, texts: readonly SceneText[], measure: LabelMeasure) {
   doc.setTextColor(TEXT_COLOR);
   for (const t of texts) {
+    const half = t.anchor === 'middle' ? measure(t.text, t.sizeMm, t.bold) / 2 : 0;
     pdfFontUse(doc, t.bold);
     doc.setFontSize(t.sizeMm * PT_PER_MM);
-    const half = t.anchor === 'middle' ? doc.getTextWidth(t.text) / 2 : 0;
     const x = t.atMm[0] - half * Math.cos(t.angleRad);
     const y = t.atMm[1] - half * Math.sin(t.angleRad);
     // jspdf turns text counter-clockwise on the page; the scene's angles are clockwise.
@@ -109,7 +103,7 @@ function pdfTexts(doc: jsPDF, texts: readonly SceneText[]) {
 }
 
 /** One instructions page: the step drawings' shapes, then the texts. */
-function pdfInstructionsPage(doc: jsPDF, page: InstructionsPage) {
+function pdfInstructionsPage(doc: jsPDF, page: InstructionsPage, measure: LabelMeasure) {
   doc.setLineJoin('round');
   doc.setLineDashPattern([], 0);
   for (const shape of page.shapes) {
@@ -124,7 +118,7 @@ function pdfInstructionsPage(doc: jsPDF, page: InstructionsPage) {
       doc.fillStroke();
     } else doc.stroke();
   }
-  pdfTexts(doc, page.texts);
+  pdfTexts(doc, page.texts, measure);
 }
 
 function pdfPolylines(
