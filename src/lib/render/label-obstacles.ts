@@ -82,18 +82,20 @@ export class LabelObstacles {
 /** A box (corners p0…p3, p0→p1 along the baseline) grown by padMm on every side. */
 export function labelBoxGrown(box: readonly SheetVec2Mm[], padMm: number): SheetVec2Mm[] {
   const [p0, p1, p2, p3] = box as [SheetVec2Mm, SheetVec2Mm, SheetVec2Mm, SheetVec2Mm];
-  const unit = (a: SheetVec2Mm, b: SheetVec2Mm): SheetVec2Mm => {
-    const l = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-    return [((b[0] - a[0]) / l) * padMm, ((b[1] - a[1]) / l) * padMm];
-  };
-  const u = unit(p0, p1);
-  const v = unit(p0, p3);
+  const u = paddedUnit(p0, p1, padMm);
+  const v = paddedUnit(p0, p3, padMm);
   return [
     [p0[0] - u[0] - v[0], p0[1] - u[1] - v[1]],
     [p1[0] + u[0] - v[0], p1[1] + u[1] - v[1]],
     [p2[0] + u[0] + v[0], p2[1] + u[1] + v[1]],
     [p3[0] - u[0] + v[0], p3[1] - u[1] + v[1]],
   ];
+}
+
+/** The direction from a to b, padMm long ([0, 0] when they coincide). */
+function paddedUnit(a: SheetVec2Mm, b: SheetVec2Mm, padMm: number): SheetVec2Mm {
+  const l = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
+  return [((b[0] - a[0]) / l) * padMm, ((b[1] - a[1]) / l) * padMm];
 }
 
 /** The point of a convex box's boundary nearest to p (p itself when inside is not expected: p is outside). */

@@ -102,13 +102,23 @@ export function labelEdgeClearanceMm<S extends PlaneSpace>(
   poly: readonly PlanePointMm<NoInfer<S>>[],
 ): number {
   let best = Infinity;
+  // Math.hypot is slow: an edge whose squared distance is clearly past the best so far cannot win, so only the
+  // others are measured (by Math.hypot, so the result is the same to the last bit).
+  let beyond = Infinity;
   for (let i = 0; i < poly.length; i++) {
     const a = poly[i]!;
     const b = poly[(i + 1) % poly.length]!;
     const dx = b[0] - a[0];
     const dy = b[1] - a[1];
     const t = Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / (dx * dx + dy * dy || 1)));
-    best = Math.min(best, Math.hypot(p[0] - a[0] - t * dx, p[1] - a[1] - t * dy));
+    const ex = p[0] - a[0] - t * dx;
+    const ey = p[1] - a[1] - t * dy;
+    if (ex * ex + ey * ey > beyond) continue;
+    const d = Math.hypot(ex, ey);
+    if (d < best) {
+      best = d;
+      beyond = best * best * (1 + 1e-9);
+    }
   }
   return best;
 }

@@ -279,10 +279,17 @@ function sceneInside(region: readonly SheetVec2Mm[], window?: RectMm): (box: She
   });
   return (tight) => {
     const box = labelBoxGrown(tight, NAME_PADDING_MM);
-    if (!box.every((p) => inside(p, window) && labelPointInside(p, region))) return false;
-    const xs = box.map((p) => p[0]);
-    const ys = box.map((p) => p[1]);
-    const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+    let x0 = Infinity;
+    let x1 = -Infinity;
+    let y0 = Infinity;
+    let y1 = -Infinity;
+    for (const p of box) {
+      if (!inside(p, window) || !labelPointInside(p, region)) return false;
+      x0 = Math.min(x0, p[0]);
+      x1 = Math.max(x1, p[0]);
+      y0 = Math.min(y0, p[1]);
+      y1 = Math.max(y1, p[1]);
+    }
     // Only edges whose box meets the text's box can cross it.
     return !edges.some(
       (e) => e.maxX >= x0 && e.minX <= x1 && e.maxY >= y0 && e.minY <= y1 && labelBoxesOverlap(box, [e.a, e.b]),
