@@ -43,11 +43,13 @@ export class LabelObstacles {
       o.maxX = Math.max(o.maxX, x);
       o.maxY = Math.max(o.maxY, y);
     }
-    this.forCells(o.minX, o.minY, o.maxX, o.maxY, (k) => {
-      const list = this.cells.get(k);
-      if (list) list.push(o);
-      else this.cells.set(k, [o]);
-    });
+    const [i0, i1, j0, j1] = [cell(o.minX), cell(o.maxX), cell(o.minY), cell(o.maxY)];
+    for (let i = i0; i <= i1; i++)
+      for (let j = j0; j <= j1; j++) {
+        const list = this.cells.get(cellKey(i, j));
+        if (list) list.push(o);
+        else this.cells.set(cellKey(i, j), [o]);
+      }
   }
 
   /** Whether a convex box (corners) comes within the clearance of any obstacle. */
@@ -57,26 +59,30 @@ export class LabelObstacles {
     for (const [x, y] of box) [x0, y0, x1, y1] = [Math.min(x0, x), Math.min(y0, y), Math.max(x1, x), Math.max(y1, y)];
     const grown = pad > 0 ? labelBoxGrown(box, pad) : box;
     const stamp = ++this.query;
-    let hit = false;
-    this.forCells(x0 - pad, y0 - pad, x1 + pad, y1 + pad, (k) => {
-      if (hit) return;
-      for (const o of this.cells.get(k) ?? []) {
-        if (o.seen === stamp) continue;
-        o.seen = stamp;
-        if (o.maxX < x0 - pad || o.minX > x1 + pad || o.maxY < y0 - pad || o.minY > y1 + pad) continue;
-        if (labelBoxesOverlap(grown, o.points)) {
-          hit = true;
-          return;
+    const [i0, i1, j0, j1] = [cell(x0 - pad), cell(x1 + pad), cell(y0 - pad), cell(y1 + pad)];
+    for (let i = i0; i <= i1; i++)
+      for (let j = j0; j <= j1; j++) {
+        const list = this.cells.get(cellKey(i, j));
+        if (!list) continue;
+        for (const o of list) {
+          if (o.seen === stamp) continue;
+          o.seen = stamp;
+          if (o.maxX < x0 - pad || o.minX > x1 + pad || o.maxY < y0 - pad || o.minY > y1 + pad) continue;
+          if (labelBoxesOverlap(grown, o.points)) return true;
         }
       }
-    });
-    return hit;
+    return false;
   }
+}
 
-  private forCells(x0: number, y0: number, x1: number, y1: number, visit: (key: number) => void) {
-    const [i0, i1, j0, j1] = [x0, x1, y0, y1].map((v) => Math.floor(v / CELL_MM)) as [number, number, number, number];
-    for (let i = i0; i <= i1; i++) for (let j = j0; j <= j1; j++) visit(i * 100_003 + j);
-  }
+/** The grid column or row of a coordinate, mm. */
+function cell(v: number): number {
+  return Math.floor(v / CELL_MM);
+}
+
+/** The key of grid cell (i, j) in the cell map. */
+function cellKey(i: number, j: number): number {
+  return i * 100_003 + j;
 }
 
 /** A box (corners p0…p3, p0→p1 along the baseline) grown by padMm on every side. */

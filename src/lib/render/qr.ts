@@ -11,11 +11,30 @@ export const QR_QUIET_ZONE_MODULES = 4;
 /** Error correction levels of ISO/IEC 18004 (L, M, Q, H). */
 export type QrLevel = 'L' | 'M' | 'Q' | 'H';
 
-/** Dark modules of the symbol for `text` (error correction M unless given), as runs in module units (row, first column, length). */
-export function qrRuns(
-  text: string,
-  level: QrLevel = 'M',
-): { size: number; runs: { row: number; col: number; length: number }[] } {
+/** The symbol's side in modules and its dark modules as runs in module units (row, first column, length). */
+export interface QrRuns {
+  readonly size: number;
+  readonly runs: readonly { readonly row: number; readonly col: number; readonly length: number }[];
+}
+
+/** Symbols kept, the most recently used last: a process prints the same few kit and link pages again and again. */
+const QR_KEPT = 16;
+const kept = new Map<string, QrRuns>();
+
+/** Dark modules of the symbol for `text` (error correction M unless given), as runs in module units. */
+export function qrRuns(text: string, level: QrLevel = 'M'): QrRuns {
+  const key = `${level}${text}`;
+  let symbol = kept.get(key);
+  if (symbol) kept.delete(key);
+  else {
+    symbol = qrRunsOf(text, level);
+    if (kept.size >= QR_KEPT) kept.delete(kept.keys().next().value!);
+  }
+  kept.set(key, symbol);
+  return symbol;
+}
+
+function qrRunsOf(text: string, level: QrLevel): QrRuns {
   const { modules } = QRCode.create(text, { errorCorrectionLevel: level });
   const size = modules.size;
   const runs: { row: number; col: number; length: number }[] = [];
