@@ -230,26 +230,55 @@ export function sceneStepBadges(pieces: readonly Piece[]): Map<string, string> {
   return badges;
 }
 
-const nameRegionCache = new WeakMap<Piece, { region: Vec2Mm[]; points: Vec2Mm[] }[]>();
+type NameRegion = { readonly region: Vec2Mm[]; readonly points: Vec2Mm[] };
+
+const nameRegionCache = new WeakMap<Piece, readonly NameRegion[]>();
+/**
+ * Name regions by the piece's face outlines (sceneFacesKey: equal keys mean equal faces): each build makes
+ * new pieces, mostly of shapes an earlier build of the process already had.
+ */
+const nameRegionsByFaces = new Map<string, readonly NameRegion[]>();
+const NAME_REGIONS_KEPT = 512;
 
 /**
  * Where a piece's name may go, in its own flat coordinates: its four largest faces, then (last resort for
  * pieces whose faces are all narrow, like a many-sided wall strip) the union of its faces — across folds,
  * never on tabs — each with its candidate points. Placements are rigid motions, so the regions and points
- * are computed once per piece and moved onto each sheet, copy and tile.
+ * are computed once per piece shape and moved onto each sheet, copy and tile.
  */
-function sceneNameRegions(piece: Piece): { region: Vec2Mm[]; points: Vec2Mm[] }[] {
+function sceneNameRegions(piece: Piece): readonly NameRegion[] {
   const cached = nameRegionCache.get(piece);
   if (cached) return cached;
+  const key = sceneFacesKey(piece);
+  let regions = nameRegionsByFaces.get(key);
+  if (!regions) {
+    regions = sceneNameRegionsOf(piece);
+    if (nameRegionsByFaces.size >= NAME_REGIONS_KEPT)
+      nameRegionsByFaces.delete(nameRegionsByFaces.keys().next().value!);
+    nameRegionsByFaces.set(key, regions);
+  }
+  nameRegionCache.set(piece, regions);
+  return regions;
+}
+
+/** Every coordinate of the piece's faces in order, written out exactly (-0 apart from 0). */
+function sceneFacesKey(piece: Piece): string {
+  let key = '';
+  for (const face of piece.hinge.faces) {
+    for (const [x, y] of face.polygonMm) key += `${Object.is(x, -0) ? '-0' : x},${Object.is(y, -0) ? '-0' : y} `;
+    key += '|';
+  }
+  return key;
+}
+
+function sceneNameRegionsOf(piece: Piece): NameRegion[] {
   const faces = piece.hinge.faces
     .map((f) => f.polygonMm)
     .filter((f) => f.length >= 3)
     .sort((a, b) => Math.abs(polygonArea(b)) - Math.abs(polygonArea(a)))
     .slice(0, 4);
   const union = outlineOf(piece.hinge.faces.map((f) => [...f.polygonMm]));
-  const regions = [...faces, union].map((region) => ({ region: [...region], points: labelCandidatePoints(region) }));
-  nameRegionCache.set(piece, regions);
-  return regions;
+  return [...faces, union].map((region) => ({ region: [...region], points: labelCandidatePoints(region) }));
 }
 
 /** Clear paper kept round a piece's name inside its face, mm (common practice, no source). */
