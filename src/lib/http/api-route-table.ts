@@ -114,10 +114,15 @@ export function apiRouteCompare(a: ApiRoute<unknown>, b: ApiRoute<unknown>): num
 /** A matcher over route patterns and their values (module loaders, in the server). */
 export function apiRouteTable<T>(entries: readonly (readonly [pattern: string, value: T])[]) {
   const routes = entries.map(([pattern, value]) => routeOf(pattern, value)).sort(apiRouteCompare);
+  // A path equal to an all-static pattern is that route: Astro's ranking puts a static segment before any param
+  // at every position, and only patterns of as many segments (or one ending in a rest param) can match it.
+  const statics = new Map(routes.filter((r) => r.paramNames.length === 0).map((r) => [r.pattern, r]));
   return {
     routes,
     /** The first route matching a decoded pathname, with its params; null when none does. */
     match(pathname: string): ApiRouteMatch<T> | null {
+      const exact = statics.get(pathname.length > 1 && pathname.endsWith('/') ? pathname.slice(0, -1) : pathname);
+      if (exact) return { route: exact, params: {} };
       if (pathname.split('/').some((s) => s === '.' || s === '..')) return null;
       for (const route of routes) {
         const m = route.regex.exec(pathname);
