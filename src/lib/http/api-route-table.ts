@@ -4,7 +4,7 @@
  * API route without Astro's page pipeline and still answer exactly the routes the dev server answers.
  *
  * - A file's route pattern is its path under src/pages without `.ts`, and without a last `/index`
- *   (`/api/kits/[id].pdf`, `/api/classes`); files whose name starts with `_` are not routes.
+ *   (`/api/kits/[id].pdf`, `/api/classes`); a file or folder whose name starts with `_` is not a route.
  * - `[name]` in a segment matches one or more characters other than `/`; `[...name]` matches the rest of the
  *   path, possibly nothing. A trailing slash is ignored (Astro's default `trailingSlash: 'ignore'`).
  * - When several patterns match, the one Astro ranks first wins: the ranking is Astro's route comparator
@@ -34,8 +34,7 @@ export interface ApiRouteMatch<T> {
 
 /** The route pattern of a route file's path relative to src/pages ('/api/classes/index.ts' → '/api/classes'). */
 export function apiRoutePattern(file: string): string | null {
-  const name = file.slice(file.lastIndexOf('/') + 1);
-  if (name.startsWith('_') || !name.endsWith('.ts')) return null;
+  if (!file.endsWith('.ts') || file.split('/').some((segment) => segment.startsWith('_'))) return null;
   const pattern = file.slice(0, -'.ts'.length).replace(/\/index$/, '');
   return pattern === '' ? '/' : pattern;
 }

@@ -11,6 +11,7 @@ describe('apiRoutePattern', () => {
     expect(apiRoutePattern('/api/classes/index.ts')).toBe('/api/classes');
     expect(apiRoutePattern('/api/kits/[id].pdf.ts')).toBe('/api/kits/[id].pdf');
     expect(apiRoutePattern('/api/kits/_download.ts')).toBeNull();
+    expect(apiRoutePattern('/api/_shared/helper.ts')).toBeNull();
   });
 });
 
