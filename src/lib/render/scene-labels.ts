@@ -20,8 +20,6 @@ export class SceneLabels {
   /** Callout leaders drawn so far: later labels keep clear of them like of any line. */
   private readonly leaders = new LabelObstacles(LABEL_LINE_CLEARANCE_MM);
   private readonly widths = new Map<string, number>();
-  /** The text measured last: candidates come in runs of one text at one size, so most boxes reuse it. */
-  private last: { text: string; sizeMm: number; bold: boolean; widthMm: number } | undefined;
   constructor(
     readonly scene: SheetScene,
     readonly measure: LabelMeasure,
@@ -29,15 +27,9 @@ export class SceneLabels {
   ) {}
 
   box(t: SceneText): SheetVec2Mm[] {
-    const last = this.last;
-    let width: number | undefined;
-    if (last && last.text === t.text && last.sizeMm === t.sizeMm && last.bold === t.bold) width = last.widthMm;
-    else {
-      const key = `${t.bold ? 'b' : 'r'}${t.sizeMm}|${t.text}`;
-      width = this.widths.get(key);
-      if (width === undefined) this.widths.set(key, (width = this.measure(t.text, t.sizeMm, t.bold)));
-      this.last = { text: t.text, sizeMm: t.sizeMm, bold: t.bold, widthMm: width };
-    }
+    const key = `${t.bold ? 'b' : 'r'}${t.sizeMm}|${t.text}`;
+    let width = this.widths.get(key);
+    if (width === undefined) this.widths.set(key, (width = this.measure(t.text, t.sizeMm, t.bold)));
     return labelBox(t.atMm, t.angleRad, width, t.sizeMm * LABEL_BOX_HEIGHT_EM, t.anchor);
   }
 
